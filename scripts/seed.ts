@@ -1,0 +1,51 @@
+// Loads the invented demo data from data/ idempotently: fixed ids and upserts, so a second run adds nothing.
+import { readFileSync } from 'node:fs';
+import bcrypt from 'bcryptjs';
+import { sql } from 'drizzle-orm';
+import { drizzle } from 'drizzle-orm/postgres-js';
+import postgres from 'postgres';
+import { memberships, users, workspaces } from '../src/lib/server/db/schema';
+
+type DemoPeople = {
+	password: string;
+	users: { id: string; email: string; name: string; isAdmin: boolean }[];
+	workspaces: {
+		id: string;
+		name: string;
+		members: { userId: string; role: 'owner' | 'editor' | 'viewer' }[];
+	}[];
+};
+
+const url = process.env.DATABASE_URL;
+if (!url) throw new Error('DATABASE_URL is not set');
+const people: DemoPeople = JSON.parse(readFileSync('data/demo-people.json', 'utf8'));
+
+const client = postgres(url, { max: 1, onnotice: () => {} });
+const db = drizzle(client);
+const passwordHash = await bcrypt.hash(people.password, 11);
+
+await db.transaction(async (tx) => {
+	for (const u of people.users) {
+		await tx
+			.insert(users)
+			.values({ ...u, passwordHash, emailVerified: new Date('2027-01-01T00:00:00Z') })
+			.onConflictDoUpdate({ target: users.id, set: { name: u.name, isAdmin: u.isAdmin, email: u.email } });
+	}
+	for (const ws of people.workspaces) {
+		await tx
+			.insert(workspaces)
+			.values({ id: ws.id, name: ws.name })
+			.onConflictDoUpdate({ target: workspaces.id, set: { name: ws.name } });
+		for (const m of ws.members)
+			await tx
+				.insert(memberships)
+				.values({ workspaceId: ws.id, userId: m.userId, role: m.role })
+				.onConflictDoUpdate({ target: [memberships.workspaceId, memberships.userId], set: { role: m.role } });
+	}
+});
+
+const [{ n }] = (await db.execute(sql`select count(*)::int as n from "user"`)) as unknown as [{ n: number }];
+console.log(
+	`[seed] demo data loaded (${people.users.length} demo people, ${people.workspaces.length} workspaces; ${n} users in all)`
+);
+await client.end();

@@ -1,0 +1,76 @@
+// `npm start`: everything a person needs to try Runrate on this machine, with demo data.
+// PostgreSQL on 127.0.0.1:5544 (PGPORT), the e-mail catcher and S3 stand-in, then the production build.
+import { readFileSync } from 'node:fs';
+import { ensureDependencies, localSecret, log, root, run, runOrThrow, startService } from './lib.mjs';
+
+const port = Number(process.env.PORT ?? 3000);
+const pgPort = Number(process.env.PGPORT ?? 5544);
+const smtpPort = Number(process.env.SMTP_PORT ?? 2525);
+const mailViewPort = Number(process.env.MAIL_VIEW_PORT ?? 3025);
+const s3Port = Number(process.env.S3_PORT ?? 4569);
+const origin = process.env.ORIGIN ?? `http://127.0.0.1:${port}`;
+const databaseUrl = `postgres://postgres@127.0.0.1:${pgPort}/runrate`;
+
+const children = [];
+let stopping = false;
+
+async function stop(code = 0) {
+	if (stopping) return;
+	stopping = true;
+	log('start', 'stopping');
+	for (const child of children.reverse()) child.kill('SIGTERM');
+	await new Promise((r) => setTimeout(r, 500));
+	await run('bash', ['scripts/pg.sh', 'stop'], { env: { PGPORT: String(pgPort) } });
+	process.exit(code);
+}
+process.on('SIGINT', () => stop(0));
+process.on('SIGTERM', () => stop(0));
+
+try {
+	ensureDependencies();
+	const env = {
+		DATABASE_URL: databaseUrl,
+		AUTH_SECRET: process.env.AUTH_SECRET ?? localSecret(),
+		SMTP_URL: `smtp://127.0.0.1:${smtpPort}`,
+		MAIL_VIEW_URL: `http://127.0.0.1:${mailViewPort}`,
+		S3_ENDPOINT: `http://127.0.0.1:${s3Port}`,
+		S3_BUCKET: 'runrate-uploads',
+		S3_ACCESS_KEY_ID: 'S3RVER',
+		S3_SECRET_ACCESS_KEY: 'S3RVER',
+		SMTP_PORT: String(smtpPort),
+		MAIL_VIEW_PORT: String(mailViewPort),
+		S3_PORT: String(s3Port),
+		S3_DIR: `${root}/.data/s3`
+	};
+	await runOrThrow('bash', ['scripts/pg.sh', 'start'], { env: { PGPORT: String(pgPort) } });
+	await runOrThrow('npx', ['tsx', 'scripts/migrate.ts'], { env });
+	await runOrThrow('npx', ['tsx', 'scripts/seed.ts'], { env });
+	children.push(
+		await startService('stand-ins', 'npx', ['tsx', 'scripts/stand-ins.ts'], { env, ready: /\[stand-ins\]/ })
+	);
+	log('start', 'building the production bundle (about a minute)');
+	await runOrThrow('npx', ['vite', 'build', '--logLevel', 'warn'], { env });
+	const app = await startService('app', 'node', ['build'], {
+		env: { ...env, HOST: '127.0.0.1', PORT: String(port), ORIGIN: origin, NODE_ENV: 'production' },
+		ready: /Listening on/
+	});
+	children.push(app);
+	app.stdout.on('data', (d) => process.stdout.write(d));
+	app.stderr.on('data', (d) => process.stderr.write(d));
+	app.on('exit', (code) => stop(code ?? 1));
+
+	const people = JSON.parse(readFileSync(`${root}/data/demo-people.json`, 'utf8'));
+	console.log(`
+  Runrate is running at ${origin}
+
+  Demo sign-ins (invented people), password ${people.password}
+${people.users.map((u) => `    ${u.email.padEnd(22)} ${u.name}`).join('\n')}
+
+  Captured e-mail (sign-in links, invitations): ${env.MAIL_VIEW_URL}
+  PostgreSQL: 127.0.0.1:${pgPort}   S3 stand-in: ${env.S3_ENDPOINT}
+  Ctrl-C stops everything.
+`);
+} catch (error) {
+	console.error(`[start] ${error.message}`);
+	await stop(1);
+}

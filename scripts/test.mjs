@@ -1,0 +1,169 @@
+// `npm test`: every check, against a throwaway PostgreSQL and the local stand-ins, ending with one line
+// "N passed, N failed". `npm test -- unit e2e` runs only the named suites.
+import { chmodSync, existsSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { ensureDependencies, freePort, log, run, runOrThrow, startService } from './lib.mjs';
+
+const ALL = ['types', 'lint', 'format', 'unit', 'integration', 'e2e'];
+const wanted = process.argv.slice(2).filter((a) => ALL.includes(a));
+const suites = wanted.length ? wanted : ALL;
+const needsServices = suites.some((s) => s === 'integration' || s === 'e2e');
+
+const tally = { passed: 0, failed: 0 };
+const summary = [];
+const work = mkdtempSync(join(tmpdir(), 'runrate-test-'));
+// The cluster runs as Debian's postgres user, which must be able to enter this folder.
+chmodSync(work, 0o755);
+const children = [];
+let pgEnv = null;
+
+function record(name, passed, failed, seconds) {
+	tally.passed += passed;
+	tally.failed += failed;
+	summary.push(
+		`${name.padEnd(12)} ${String(passed).padStart(4)} passed ${String(failed).padStart(3)} failed  ${seconds.toFixed(1)} s`
+	);
+}
+
+async function timed(fn) {
+	const t = performance.now();
+	const result = await fn();
+	return { ...result, seconds: (performance.now() - t) / 1000 };
+}
+
+/** A static check counts as one test. */
+async function check(name, command, args) {
+	log('test', `${name}: ${command} ${args.join(' ')}`);
+	const r = await timed(() => run(command, args));
+	record(name, r.code === 0 ? 1 : 0, r.code === 0 ? 0 : 1, r.seconds);
+}
+
+async function vitest(project, env) {
+	const out = join(work, `vitest-${project}.json`);
+	log('test', `${project}: vitest`);
+	const r = await timed(() =>
+		run(
+			'npx',
+			[
+				'vitest',
+				'run',
+				'--project',
+				project,
+				'--reporter=default',
+				'--reporter=json',
+				`--outputFile.json=${out}`
+			],
+			{ env }
+		)
+	);
+	if (!existsSync(out)) return record(project, 0, 1, r.seconds);
+	const report = JSON.parse(readFileSync(out, 'utf8'));
+	const failedFiles = report.testResults.filter(
+		(f) => f.status === 'failed' && f.assertionResults.length === 0
+	).length;
+	record(
+		project,
+		report.numPassedTests,
+		report.numFailedTests +
+			failedFiles +
+			(r.code !== 0 && report.numFailedTests === 0 && failedFiles === 0 ? 1 : 0),
+		r.seconds
+	);
+}
+
+async function ensureChromium() {
+	if (existsSync('/usr/bin/chromium')) return;
+	log('test', "installing Debian's chromium for the end-to-end tests");
+	await runOrThrow('apt-get', ['update', '-qq']);
+	await runOrThrow('apt-get', ['install', '-y', '-qq', 'chromium'], {
+		env: { DEBIAN_FRONTEND: 'noninteractive' }
+	});
+}
+
+async function startServices() {
+	const [pgPort, smtpPort, mailViewPort, s3Port, appPort] = await Promise.all([
+		freePort(),
+		freePort(),
+		freePort(),
+		freePort(),
+		freePort()
+	]);
+	pgEnv = { PGDATA: join(work, 'pg'), PGPORT: String(pgPort) };
+	await runOrThrow('bash', ['scripts/pg.sh', 'start'], { env: pgEnv });
+	const env = {
+		DATABASE_URL: `postgres://postgres@127.0.0.1:${pgPort}/runrate`,
+		AUTH_SECRET: 'test-only-secret-not-for-production-0123456789',
+		SMTP_URL: `smtp://127.0.0.1:${smtpPort}`,
+		MAIL_VIEW_URL: `http://127.0.0.1:${mailViewPort}`,
+		SMTP_PORT: String(smtpPort),
+		MAIL_VIEW_PORT: String(mailViewPort),
+		S3_PORT: String(s3Port),
+		S3_DIR: join(work, 's3'),
+		S3_ENDPOINT: `http://127.0.0.1:${s3Port}`,
+		S3_BUCKET: 'runrate-uploads',
+		S3_ACCESS_KEY_ID: 'S3RVER',
+		S3_SECRET_ACCESS_KEY: 'S3RVER',
+		APP_PORT: String(appPort),
+		PGPORT: String(pgPort),
+		PGDATA: pgEnv.PGDATA
+	};
+	await runOrThrow('npx', ['tsx', 'scripts/migrate.ts'], { env });
+	await runOrThrow('npx', ['tsx', 'scripts/seed.ts'], { env });
+	children.push(
+		await startService('stand-ins', 'npx', ['tsx', 'scripts/stand-ins.ts'], { env, ready: /\[stand-ins\]/ })
+	);
+	return env;
+}
+
+async function cleanup() {
+	for (const child of children) child.kill('SIGTERM');
+	if (pgEnv) await run('bash', ['scripts/pg.sh', 'stop'], { env: pgEnv, quiet: true });
+	rmSync(work, { recursive: true, force: true });
+}
+
+let exitCode = 0;
+try {
+	ensureDependencies();
+	await runOrThrow('npx', ['svelte-kit', 'sync']);
+	if (suites.includes('types'))
+		await check('types', 'npx', ['svelte-check', '--tsconfig', './tsconfig.json', '--fail-on-warnings']);
+	if (suites.includes('lint')) await check('lint', 'npx', ['eslint', '.']);
+	if (suites.includes('format')) await check('format', 'npx', ['prettier', '--check', '.']);
+	if (suites.includes('unit')) await vitest('unit', {});
+	if (needsServices) {
+		if (suites.includes('e2e')) await ensureChromium();
+		const env = await startServices();
+		if (suites.includes('integration')) await vitest('integration', env);
+		if (suites.includes('e2e')) {
+			log('test', 'e2e: building the production bundle');
+			const build = await timed(() => run('npx', ['vite', 'build', '--logLevel', 'warn'], { env }));
+			if (build.code !== 0) record('build', 0, 1, build.seconds);
+			else {
+				const out = join(work, 'playwright.json');
+				const r = await timed(() =>
+					run('npx', ['playwright', 'test'], { env: { ...env, PLAYWRIGHT_JSON_OUTPUT_NAME: out } })
+				);
+				if (!existsSync(out)) record('e2e', 0, 1, r.seconds);
+				else {
+					const { stats } = JSON.parse(readFileSync(out, 'utf8'));
+					record(
+						'e2e',
+						stats.expected + stats.flaky,
+						stats.unexpected + (r.code !== 0 && stats.unexpected === 0 ? 1 : 0),
+						r.seconds
+					);
+				}
+			}
+		}
+	}
+} catch (error) {
+	console.error(`[test] ${error.message}`);
+	tally.failed += 1;
+} finally {
+	await cleanup();
+}
+console.log('\n' + summary.join('\n'));
+if (tally.failed > 0) exitCode = 1;
+console.log(`${tally.passed} passed, ${tally.failed} failed`);
+process.exit(exitCode);

@@ -1,0 +1,46 @@
+import { index, pgEnum, pgTable, primaryKey, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { users } from './auth';
+
+export const roleEnum = pgEnum('workspace_role', ['owner', 'editor', 'viewer']);
+
+/** A farm, a school program or a consultancy: the unit that owns sites, tariffs and bills. */
+export const workspaces = pgTable('workspace', {
+	id: uuid('id').primaryKey().defaultRandom(),
+	name: text('name').notNull(),
+	createdAt: timestamp('created_at', { mode: 'date' }).notNull().defaultNow()
+});
+
+export const memberships = pgTable(
+	'membership',
+	{
+		workspaceId: uuid('workspace_id')
+			.notNull()
+			.references(() => workspaces.id, { onDelete: 'cascade' }),
+		userId: text('user_id')
+			.notNull()
+			.references(() => users.id, { onDelete: 'cascade' }),
+		role: roleEnum('role').notNull(),
+		createdAt: timestamp('created_at', { mode: 'date' }).notNull().defaultNow()
+	},
+	(m) => [primaryKey({ columns: [m.workspaceId, m.userId] }), index('membership_user_idx').on(m.userId)]
+);
+
+/** An e-mailed invitation: the link carries a random token whose SHA-256 is stored; it works once, until it expires. */
+export const invitations = pgTable(
+	'invitation',
+	{
+		id: uuid('id').primaryKey().defaultRandom(),
+		workspaceId: uuid('workspace_id')
+			.notNull()
+			.references(() => workspaces.id, { onDelete: 'cascade' }),
+		email: text('email').notNull(),
+		role: roleEnum('role').notNull(),
+		tokenHash: text('token_hash').notNull().unique(),
+		invitedBy: text('invited_by').references(() => users.id, { onDelete: 'set null' }),
+		expiresAt: timestamp('expires_at', { mode: 'date' }).notNull(),
+		acceptedAt: timestamp('accepted_at', { mode: 'date' }),
+		revokedAt: timestamp('revoked_at', { mode: 'date' }),
+		createdAt: timestamp('created_at', { mode: 'date' }).notNull().defaultNow()
+	},
+	(i) => [index('invitation_workspace_idx').on(i.workspaceId)]
+);

@@ -1,0 +1,12 @@
+import { env } from '$env/dynamic/private';
+import type { LayoutServerLoad } from './$types';
+
+export const load = (({ locals }) => {
+	const user = locals.user;
+	return {
+		// A whitelisted subset: never tokens or whole rows.
+		user: user ? { id: user.id, email: user.email, name: user.name, isAdmin: user.isAdmin } : null,
+		// Only set where the local SMTP catcher runs (npm start, npm test); production has no such page.
+		mailViewUrl: env.MAIL_VIEW_URL || null
+	};
+}) satisfies LayoutServerLoad;

@@ -1,0 +1,59 @@
+import { fail, redirect } from '@sveltejs/kit';
+import { eq } from 'drizzle-orm';
+import { handOver } from '$lib/server/auth/hand-over';
+import { verifyPassword } from '$lib/server/auth/password';
+import { db } from '$lib/server/db';
+import { users } from '$lib/server/db/schema';
+import { mailLinkLimiter, signInLimiter, TOO_MANY } from '$lib/server/rate-limit';
+import { sendVerification } from '$lib/server/services/account.service';
+import { magicLinkSchema, signInSchema } from '$lib/forms/auth.schema';
+import { fieldErrors, keepValues } from '$lib/forms/errors';
+import { safeNext } from '$lib/safe-next';
+import type { Actions, PageServerLoad } from './$types';
+
+const NO_MATCH = 'That e-mail and password do not match an account.';
+
+export const load = (({ locals, url }) => {
+	if (locals.user) redirect(303, safeNext(url.searchParams.get('next')));
+	return { next: safeNext(url.searchParams.get('next')), email: url.searchParams.get('email') ?? '' };
+}) satisfies PageServerLoad;
+
+export const actions = {
+	password: async (event) => {
+		const form = await event.request.formData();
+		const values = keepValues(form);
+		const parsed = signInSchema.safeParse(Object.fromEntries(form));
+		if (!parsed.success) return fail(400, { action: 'password', values, errors: fieldErrors(parsed.error) });
+		const { email, password } = parsed.data;
+		if (await signInLimiter.isLimited(event, email))
+			return fail(429, { action: 'password', values, errors: { form: TOO_MANY } });
+
+		const [user] = await db.select().from(users).where(eq(users.email, email));
+		// One message whether the address is unknown or the password wrong: the form must not tell who has an account.
+		if (!(await verifyPassword(password, user?.passwordHash)) || !user)
+			return fail(400, { action: 'password', values, errors: { password: NO_MATCH } });
+		if (!user.emailVerified) {
+			await sendVerification(user.id, user.email, event.url.origin);
+			return fail(400, {
+				action: 'password',
+				values,
+				errors: { form: 'Confirm your address first: we have just sent you a new confirmation link.' }
+			});
+		}
+		const next = String(form.get('next') ?? '');
+		if (!(await handOver(event, 'password', { email, password, next })))
+			return fail(400, { action: 'password', values, errors: { password: NO_MATCH } });
+	},
+
+	link: async (event) => {
+		const form = await event.request.formData();
+		const values = keepValues(form);
+		const parsed = magicLinkSchema.safeParse(Object.fromEntries(form));
+		if (!parsed.success) return fail(400, { action: 'link', values, errors: fieldErrors(parsed.error) });
+		const { email } = parsed.data;
+		if (await mailLinkLimiter.isLimited(event, email))
+			return fail(429, { action: 'link', values, errors: { form: TOO_MANY } });
+		await handOver(event, 'email', { email, next: String(form.get('next') ?? '') });
+		redirect(303, '/signin/check-email');
+	}
+} satisfies Actions;

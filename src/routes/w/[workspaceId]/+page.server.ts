@@ -1,0 +1,113 @@
+import { fail, redirect } from '@sveltejs/kit';
+import { z } from 'zod';
+import { requireRole } from '$lib/server/guard';
+import { inviteLimiter, TOO_MANY } from '$lib/server/rate-limit';
+import {
+	changeRole,
+	deleteWorkspace,
+	invite,
+	listMembers,
+	listPendingInvitations,
+	MembershipRuleError,
+	removeMember,
+	renameWorkspace,
+	revokeInvitation
+} from '$lib/server/services/workspace.service';
+import { emailField, roleField, workspaceNameField } from '$lib/forms/auth.schema';
+import { fieldErrors, keepValues } from '$lib/forms/errors';
+import type { Actions, PageServerLoad } from './$types';
+
+export const load = (async (event) => {
+	const { workspace, role } = await requireRole(event, event.params.workspaceId, 'viewer');
+	return {
+		members: await listMembers(workspace.id),
+		invitations: role === 'owner' ? await listPendingInvitations(workspace.id) : []
+	};
+}) satisfies PageServerLoad;
+
+const inviteSchema = z.object({ email: emailField, role: roleField });
+const roleSchema = z.object({ userId: z.string().min(1).max(100), role: roleField });
+const userSchema = z.object({ userId: z.string().min(1).max(100) });
+const invitationSchema = z.object({ invitationId: z.uuid() });
+
+/** Runs a membership change and turns the owner rule into a message on the form. */
+async function guarded(action: string, run: () => Promise<void>) {
+	try {
+		await run();
+		return { action, ok: true };
+	} catch (error) {
+		if (error instanceof MembershipRuleError) return fail(409, { action, errors: { form: error.message } });
+		throw error;
+	}
+}
+
+export const actions = {
+	rename: async (event) => {
+		const { workspace } = await requireRole(event, event.params.workspaceId, 'owner');
+		const form = await event.request.formData();
+		const parsed = z.object({ name: workspaceNameField }).safeParse(Object.fromEntries(form));
+		if (!parsed.success)
+			return fail(400, { action: 'rename', values: keepValues(form), errors: fieldErrors(parsed.error) });
+		await renameWorkspace(workspace.id, parsed.data.name);
+		return { action: 'rename', ok: true };
+	},
+
+	invite: async (event) => {
+		const { workspace, user } = await requireRole(event, event.params.workspaceId, 'owner');
+		const form = await event.request.formData();
+		const values = keepValues(form);
+		const parsed = inviteSchema.safeParse(Object.fromEntries(form));
+		if (!parsed.success) return fail(400, { action: 'invite', values, errors: fieldErrors(parsed.error) });
+		if (await inviteLimiter.isLimited(event))
+			return fail(429, { action: 'invite', values, errors: { form: TOO_MANY } });
+		const result = await invite(
+			{ workspaceId: workspace.id, workspaceName: workspace.name, invitedBy: user, ...parsed.data },
+			event.url.origin
+		);
+		if (result === 'member')
+			return fail(409, { action: 'invite', values, errors: { email: 'This person is already a member.' } });
+		return { action: 'invite', ok: true, invited: parsed.data.email };
+	},
+
+	changeRole: async (event) => {
+		const { workspace } = await requireRole(event, event.params.workspaceId, 'owner');
+		const parsed = roleSchema.safeParse(Object.fromEntries(await event.request.formData()));
+		if (!parsed.success) return fail(400, { action: 'changeRole', errors: fieldErrors(parsed.error) });
+		return guarded('changeRole', () => changeRole(workspace.id, parsed.data.userId, parsed.data.role));
+	},
+
+	remove: async (event) => {
+		const { workspace } = await requireRole(event, event.params.workspaceId, 'owner');
+		const parsed = userSchema.safeParse(Object.fromEntries(await event.request.formData()));
+		if (!parsed.success) return fail(400, { action: 'remove', errors: fieldErrors(parsed.error) });
+		return guarded('remove', () => removeMember(workspace.id, parsed.data.userId));
+	},
+
+	revoke: async (event) => {
+		const { workspace } = await requireRole(event, event.params.workspaceId, 'owner');
+		const parsed = invitationSchema.safeParse(Object.fromEntries(await event.request.formData()));
+		if (!parsed.success) return fail(400, { action: 'revoke', errors: fieldErrors(parsed.error) });
+		await revokeInvitation(workspace.id, parsed.data.invitationId);
+		return { action: 'revoke', ok: true };
+	},
+
+	leave: async (event) => {
+		const { workspace, user } = await requireRole(event, event.params.workspaceId, 'viewer');
+		const result = await guarded('leave', () => removeMember(workspace.id, user.id));
+		if ('ok' in result) redirect(303, '/workspaces');
+		return result;
+	},
+
+	delete: async (event) => {
+		const { workspace } = await requireRole(event, event.params.workspaceId, 'owner');
+		const form = await event.request.formData();
+		if (String(form.get('confirmName') ?? '').trim() !== workspace.name)
+			return fail(400, {
+				action: 'delete',
+				values: keepValues(form),
+				errors: { confirmName: 'Type the workspace name exactly to confirm.' }
+			});
+		await deleteWorkspace(workspace.id);
+		redirect(303, '/workspaces');
+	}
+} satisfies Actions;

@@ -1,0 +1,60 @@
+import { expect, type Page } from '@playwright/test';
+import { readFileSync } from 'node:fs';
+
+export const demo = JSON.parse(readFileSync('data/demo-people.json', 'utf8')) as {
+	password: string;
+	workspaces: { id: string; name: string }[];
+};
+export const DEMO_PASSWORD = demo.password;
+export const DEMO_WS = demo.workspaces[0]!;
+export const OTHER_WS = demo.workspaces[1]!;
+
+/** Waits for the root layout's hydration marker, so enhanced forms are live before we click. */
+export async function gotoReady(page: Page, path: string) {
+	await page.goto(path);
+	await expect(page.locator('body[data-hydrated="true"]')).toBeAttached();
+}
+
+export async function signInWithPassword(page: Page, email: string, password = DEMO_PASSWORD) {
+	await gotoReady(page, '/signin');
+	await page.locator('#pw-email').fill(email);
+	await page.getByLabel('Password', { exact: true }).fill(password);
+	await page.getByRole('button', { name: 'Sign in', exact: true }).click();
+	await expect(page.getByRole('button', { name: 'Sign out' })).toBeVisible();
+}
+
+type Captured = { id: number; to: string[]; subject: string; text: string };
+
+/** The newest captured e-mail to `to` whose subject matches, from the local SMTP catcher's JSON view. */
+export async function latestMail(to: string, subject: RegExp, after = 0): Promise<Captured> {
+	const base = process.env.MAIL_VIEW_URL;
+	if (!base) throw new Error('MAIL_VIEW_URL is not set: run the e2e tests through npm test');
+	let found: Captured | undefined;
+	await expect
+		.poll(
+			async () => {
+				const list = (await (
+					await fetch(`${base}/messages?to=${encodeURIComponent(to)}`)
+				).json()) as Captured[];
+				found = list.filter((m) => m.id > after && subject.test(m.subject)).at(-1);
+				return !!found;
+			},
+			{ timeout: 10_000 }
+		)
+		.toBe(true);
+	return found!;
+}
+
+export async function lastMailId(): Promise<number> {
+	const list = (await (await fetch(`${process.env.MAIL_VIEW_URL}/messages`)).json()) as Captured[];
+	return list.at(-1)?.id ?? 0;
+}
+
+export function linkIn(text: string): string {
+	const url = text.match(/https?:\/\/\S+/)?.[0];
+	if (!url) throw new Error(`no link in: ${text}`);
+	return url;
+}
+
+export const uniqueEmail = (tag: string) =>
+	`${tag}-${Date.now()}-${Math.floor(Math.random() * 1e6)}@example.org`;
