@@ -11,8 +11,9 @@ class PerAddress implements RateLimiterPlugin<string> {
 
 // In-memory stores: one app process. Past one process these move to a shared store (see DEVELOPERS.md).
 export const signInLimiter = new RateLimiter<string>({
-	IP: [60, '15m'],
-	IPUA: [30, '15m'],
+	// Per client generous enough for a shared school or office network; per address strict.
+	IP: [120, '15m'],
+	IPUA: [60, '15m'],
 	plugins: [new PerAddress([10, '15m'])]
 });
 
