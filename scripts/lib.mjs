@@ -62,10 +62,12 @@ export function runOrThrow(command, args, options) {
 /** Starts a long-running child; resolves once a line matching `ready` appears on its output. */
 export function startService(name, command, args, { env = {}, ready, timeoutMs = 60_000 }) {
 	return new Promise((resolve, reject) => {
+		// Its own process group, so stopGroup() ends the whole tree it starts.
 		const child = spawn(command, args, {
 			cwd: root,
 			env: { ...process.env, ...env },
-			stdio: ['ignore', 'pipe', 'pipe']
+			stdio: ['ignore', 'pipe', 'pipe'],
+			detached: true
 		});
 		let seen = '';
 		const timer = setTimeout(
@@ -89,6 +91,18 @@ export function startService(name, command, args, { env = {}, ready, timeoutMs =
 		});
 	});
 }
+
+/** Ends a service started by startService, with everything it started. */
+export function stopGroup(child, signal = 'SIGTERM') {
+	try {
+		process.kill(-child.pid, signal);
+	} catch {
+		// Already gone.
+	}
+}
+
+/** TypeScript scripts run in one Node process through tsx's loader (no npx/tsx wrapper processes). */
+export const tsNode = (script) => [process.execPath, ['--import', 'tsx', script]];
 
 /** A secret for Auth.js, made once per checkout and kept in the git-ignored .data folder. */
 export function localSecret() {

@@ -1,7 +1,17 @@
 // `npm start`: everything a person needs to try Runrate on this machine, with demo data.
 // PostgreSQL on 127.0.0.1:5544 (PGPORT), the e-mail catcher and S3 stand-in, then the production build.
 import { readFileSync } from 'node:fs';
-import { ensureDependencies, localSecret, log, root, run, runOrThrow, startService } from './lib.mjs';
+import {
+	ensureDependencies,
+	localSecret,
+	log,
+	root,
+	run,
+	runOrThrow,
+	startService,
+	stopGroup,
+	tsNode
+} from './lib.mjs';
 
 const port = Number(process.env.PORT ?? 3000);
 const pgPort = Number(process.env.PGPORT ?? 5544);
@@ -18,7 +28,7 @@ async function stop(code = 0) {
 	if (stopping) return;
 	stopping = true;
 	log('start', 'stopping');
-	for (const child of children.reverse()) child.kill('SIGTERM');
+	for (const child of children.reverse()) stopGroup(child);
 	await new Promise((r) => setTimeout(r, 500));
 	await run('bash', ['scripts/pg.sh', 'stop'], { env: { PGPORT: String(pgPort) } });
 	process.exit(code);
@@ -43,10 +53,10 @@ try {
 		S3_DIR: `${root}/.data/s3`
 	};
 	await runOrThrow('bash', ['scripts/pg.sh', 'start'], { env: { PGPORT: String(pgPort) } });
-	await runOrThrow('npx', ['tsx', 'scripts/migrate.ts'], { env });
-	await runOrThrow('npx', ['tsx', 'scripts/seed.ts'], { env });
+	await runOrThrow(...tsNode('scripts/migrate.ts'), { env });
+	await runOrThrow(...tsNode('scripts/seed.ts'), { env });
 	children.push(
-		await startService('stand-ins', 'npx', ['tsx', 'scripts/stand-ins.ts'], { env, ready: /\[stand-ins\]/ })
+		await startService('stand-ins', ...tsNode('scripts/stand-ins.ts'), { env, ready: /\[stand-ins\]/ })
 	);
 	log('start', 'building the production bundle (about a minute)');
 	await runOrThrow('npx', ['vite', 'build', '--logLevel', 'warn'], { env });

@@ -3,7 +3,16 @@
 import { chmodSync, existsSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { ensureDependencies, freePort, log, run, runOrThrow, startService } from './lib.mjs';
+import {
+	ensureDependencies,
+	freePort,
+	log,
+	run,
+	runOrThrow,
+	startService,
+	stopGroup,
+	tsNode
+} from './lib.mjs';
 
 const ALL = ['types', 'lint', 'format', 'unit', 'integration', 'e2e'];
 const wanted = process.argv.slice(2).filter((a) => ALL.includes(a));
@@ -108,16 +117,16 @@ async function startServices() {
 		PGPORT: String(pgPort),
 		PGDATA: pgEnv.PGDATA
 	};
-	await runOrThrow('npx', ['tsx', 'scripts/migrate.ts'], { env });
-	await runOrThrow('npx', ['tsx', 'scripts/seed.ts'], { env });
+	await runOrThrow(...tsNode('scripts/migrate.ts'), { env });
+	await runOrThrow(...tsNode('scripts/seed.ts'), { env });
 	children.push(
-		await startService('stand-ins', 'npx', ['tsx', 'scripts/stand-ins.ts'], { env, ready: /\[stand-ins\]/ })
+		await startService('stand-ins', ...tsNode('scripts/stand-ins.ts'), { env, ready: /\[stand-ins\]/ })
 	);
 	return env;
 }
 
 async function cleanup() {
-	for (const child of children) child.kill('SIGTERM');
+	for (const child of children) stopGroup(child);
 	if (pgEnv) await run('bash', ['scripts/pg.sh', 'stop'], { env: pgEnv, quiet: true });
 	rmSync(work, { recursive: true, force: true });
 }
