@@ -48,7 +48,9 @@ export default defineConfig({
 			S3_BUCKET: process.env.S3_BUCKET ?? '',
 			S3_ACCESS_KEY_ID: process.env.S3_ACCESS_KEY_ID ?? '',
 			S3_SECRET_ACCESS_KEY: process.env.S3_SECRET_ACCESS_KEY ?? '',
-			LOG_LEVEL: 'warn'
+			LOG_LEVEL: 'warn',
+			// Uploads go up to 10 MB; the JSON API enforces its own 1 MB limit.
+			BODY_SIZE_LIMIT: '11M'
 		}
 	}
 });

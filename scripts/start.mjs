@@ -61,7 +61,14 @@ try {
 	log('start', 'building the production bundle (about a minute)');
 	await runOrThrow('npx', ['vite', 'build', '--logLevel', 'warn'], { env });
 	const app = await startService('app', 'node', ['build'], {
-		env: { ...env, HOST: '127.0.0.1', PORT: String(port), ORIGIN: origin, NODE_ENV: 'production' },
+		env: {
+			...env,
+			HOST: '127.0.0.1',
+			PORT: String(port),
+			ORIGIN: origin,
+			NODE_ENV: 'production',
+			BODY_SIZE_LIMIT: '11M'
+		},
 		ready: /Listening on/
 	});
 	children.push(app);

@@ -15,7 +15,11 @@ const NO_MATCH = 'That e-mail and password do not match an account.';
 
 export const load = (({ locals, url }) => {
 	if (locals.user) redirect(303, safeNext(url.searchParams.get('next')));
-	return { next: safeNext(url.searchParams.get('next')), email: url.searchParams.get('email') ?? '' };
+	return {
+		next: safeNext(url.searchParams.get('next')),
+		email: url.searchParams.get('email') ?? '',
+		passwordChanged: url.searchParams.has('reset')
+	};
 }) satisfies PageServerLoad;
 
 export const actions = {

@@ -1,0 +1,62 @@
+import type { PeakPoint } from './demand';
+import type { SpanUsage } from './energy';
+import type { DeviceLoad } from './loads';
+import { roundMoney } from './rounding';
+
+export interface DemandShare {
+	amount: number;
+	peak: PeakPoint | null;
+	/** Per load group: mean "may run" over the peak's intervals, or null when it draws nothing then. */
+	mayRun: ReadonlyArray<number | null>;
+}
+
+export interface AllocationInput {
+	/** Per energy charge: the tiered charge's average rate per kWh, or null for a charge priced per interval. */
+	tierRates: ReadonlyArray<number | null>;
+	ridersPerKwh: number;
+	demand: readonly DemandShare[];
+	taxRate: number;
+}
+
+/** kWh over the period of a device (or a group's sums): standby all its hours, plus running's extra. */
+export function loadKwh(load: DeviceLoad, usage: SpanUsage): number {
+	const hours = usage.hours[load.group] ?? 0;
+	return load.standbyKw * hours + (load.runKw - load.standbyKw) * (usage.onHours[load.group] ?? 0);
+}
+
+/** A device's (or group's) weighted sum for energy charge e: money, or kWh in a tiered charge. */
+export function loadWeighted(load: DeviceLoad, usage: SpanUsage, e: number): number {
+	const i = load.group * usage.charges + e;
+	return (
+		load.standbyKw * (usage.weighted[i] ?? 0) + (load.runKw - load.standbyKw) * (usage.onWeighted[i] ?? 0)
+	);
+}
+
+/**
+ * Each device's share of a period's bill: its energy charges at the rates its own intervals met (a
+ * tiered charge at the period's average tier rate), riders on its kWh, its share of each demand charge
+ * (its kW at the peak interval over the peak kW), and the taxes on those. Fixed charges and the minimum
+ * line are shared cost. The exact shares add up to the exact bill, so the rounded ones add up to the
+ * total within a cent per line.
+ */
+export function allocate(
+	devices: readonly DeviceLoad[],
+	usage: SpanUsage,
+	input: AllocationInput
+): Array<{ kwh: number; cost: number }> {
+	return devices.map((device) => {
+		const extraKw = device.runKw - device.standbyKw;
+		const kwh = loadKwh(device, usage);
+		let cost = kwh * input.ridersPerKwh;
+		input.tierRates.forEach((tierRate, e) => {
+			const share = loadWeighted(device, usage, e);
+			cost += tierRate === null ? share : share * tierRate;
+		});
+		for (const charge of input.demand) {
+			const mayRun = charge.mayRun[device.group];
+			if (!charge.peak || charge.peak.kw <= 0 || mayRun == null) continue;
+			cost += (charge.amount * (device.standbyKw + mayRun * extraKw)) / charge.peak.kw;
+		}
+		return { kwh, cost: roundMoney(cost * (1 + input.taxRate)) };
+	});
+}

@@ -1,0 +1,39 @@
+/**
+ * Runrate's calculation core: pure TypeScript that runs on the server and in the browser. The HTTP
+ * routes parse a body with `parseRequest(schema, json)` and hand the result to `calculate`, `compare`
+ * or `pumping`.
+ */
+export { calculate } from './calculate';
+export { compare } from './compare';
+export {
+	airInjectionPressure,
+	hazenWilliamsHeadLossM,
+	hydraulicWatts,
+	pumpInputPower,
+	pumping
+} from './pumping';
+export type { AirPressure, PumpPower, PumpingResponse } from './pumping';
+export { parseRequest } from './parse';
+export type { InvalidRequest, ParseResult, RequestIssue } from './parse';
+export { roundMoney } from './rounding';
+export { unitWatts } from './power';
+export { FLOW_UNITS, LENGTH_UNITS } from './units';
+export type { FlowUnit, Fluid, LengthUnit } from './units';
+
+export { calculateRequestSchema, compareRequestSchema } from './request.schema';
+export { holidaysSchema, periodSchema, timezoneSchema } from './period.schema';
+export type {
+	CalculateRequest,
+	CalculateRequestInput,
+	CompareRequest,
+	CompareRequestInput,
+	Scenario
+} from './request.schema';
+export type { Period } from './period.schema';
+export { EQUIPMENT_CATEGORIES, equipmentSchema, powerSchema, scheduleSchema } from './equipment.schema';
+export type { Equipment, EquipmentInput, Power, Schedule } from './equipment.schema';
+export { tariffSchema } from './tariff.schema';
+export type { DemandCharge, EnergyCharge, FixedCharge, Tariff, TariffInput } from './tariff.schema';
+export { airSchema, pumpSchema, pumpingRequestSchema } from './pumping.schema';
+export type { Air, Pump, PumpingRequest, PumpingRequestInput } from './pumping.schema';
+export type * from './types';

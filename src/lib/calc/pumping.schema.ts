@@ -1,0 +1,41 @@
+import { z } from 'zod';
+import { amount, choice, record } from './fields';
+import { FLOW_UNITS } from './units';
+
+const FLUIDS = ['fresh', 'sea'] as const;
+
+/** A water pump's duty point and pipe, each quantity with its own unit. */
+export const pumpSchema = record('Pump', {
+	flow: amount('Flow', { min: 0, max: 10_000_000 }),
+	flowUnit: choice('Flow unit', FLOW_UNITS),
+	staticLift: amount('Static lift', { min: 0, max: 10_000 }),
+	staticLiftUnit: choice('Static lift unit', ['ft', 'm']),
+	pipeLength: amount('Pipe length', { min: 0, max: 1_000_000 }),
+	pipeLengthUnit: choice('Pipe length unit', ['ft', 'm']),
+	innerDiameter: amount('Inner diameter', { above: 0, max: 10_000 }),
+	innerDiameterUnit: choice('Inner diameter unit', ['in', 'mm']),
+	/** Hazen–Williams roughness; 150 suits smooth plastic pipe (common practice, no source). */
+	hazenWilliamsC: amount('Hazen–Williams C', { min: 1, max: 200 }).default(150),
+	efficiencyPercent: amount('Wire-to-water efficiency', { above: 0, max: 100 })
+});
+
+/** Where air is injected: the depth of the diffuser or air-lift foot below the water surface. */
+export const airSchema = record('Air', {
+	depth: amount('Depth', { min: 0, max: 1000 }),
+	depthUnit: choice('Depth unit', ['ft', 'm', 'in', 'cm'])
+});
+
+export const pumpingRequestSchema = record('Request', {
+	fluid: choice('Fluid', FLUIDS).default('fresh'),
+	pump: pumpSchema.optional(),
+	air: airSchema.optional()
+}).superRefine((request, ctx) => {
+	if (!request.pump && !request.air) {
+		ctx.addIssue({ code: 'custom', message: 'Give a pump, an air depth, or both' });
+	}
+});
+
+export type Pump = z.output<typeof pumpSchema>;
+export type Air = z.output<typeof airSchema>;
+export type PumpingRequest = z.output<typeof pumpingRequestSchema>;
+export type PumpingRequestInput = z.input<typeof pumpingRequestSchema>;

@@ -1,0 +1,112 @@
+import type { Calendar, DayClass } from './calendar';
+import { INTERVAL_HOURS, daysMatch, windowMask } from './clock';
+import type { EnergyCharge, Tariff } from './tariff.schema';
+
+type TouCharge = Extract<EnergyCharge, { type: 'tou' }>;
+
+function monthMask(months: readonly number[] | undefined): Uint8Array {
+	const mask = new Uint8Array(13);
+	if (!months) return mask.fill(1);
+	for (const month of months) mask[month] = 1;
+	return mask;
+}
+
+/**
+ * How a tariff prices each 15-minute interval of the calendar's day classes. For tariff periods and
+ * demand windows a holiday counts as a weekend when the tariff says `holidaysAsWeekends` (the default).
+ */
+export class RateBook {
+	private readonly weights: Array<Array<number | Float64Array | undefined>>;
+	private readonly masks: Array<Array<Uint8Array | null | undefined>>;
+	private readonly touPrices = new Map<string, Float64Array>();
+	private readonly totals = new Map<Float64Array, number>();
+
+	constructor(
+		readonly tariff: Tariff,
+		private readonly calendar: Calendar
+	) {
+		this.weights = tariff.energyCharges.map(() => new Array(calendar.classes.length));
+		this.masks = tariff.demandCharges.map(() => new Array(calendar.classes.length));
+	}
+
+	/** Saturdays, Sundays and, when the tariff says so, public holidays price as weekends. */
+	pricesAsWeekend(day: DayClass): boolean {
+		return day.weekend || (day.holiday && this.tariff.holidaysAsWeekends);
+	}
+
+	private touWeights(index: number, charge: TouCharge, day: DayClass): Float64Array {
+		const season = charge.seasons.findIndex((entry) => entry.months.includes(day.month));
+		const weekend = this.pricesAsWeekend(day);
+		const key = `${index}|${season}|${weekend}|${day.shape.key}`;
+		const known = this.touPrices.get(key);
+		if (known) return known;
+		const { periods = [], otherPerKwh = 0 } = charge.seasons[season] ?? {};
+		const prices = new Float64Array(day.shape.minutes.length).fill(otherPerKwh);
+		const assigned = new Uint8Array(prices.length);
+		for (const period of periods) {
+			if (!daysMatch(period.days, weekend)) continue;
+			const mask = windowMask(period.windows, day.shape);
+			for (let i = 0; i < prices.length; i++) {
+				if (mask[i] === 1 && assigned[i] === 0) {
+					prices[i] = period.perKwh;
+					assigned[i] = 1;
+				}
+			}
+		}
+		this.touPrices.set(key, prices);
+		return prices;
+	}
+
+	/**
+	 * Weights of an energy charge on each interval of a day class: its price per kWh (flat, or
+	 * time-of-use: the first matching period of the month's season, else `otherPerKwh`), or for a tiered
+	 * charge 1 where it applies (its price depends on the period's total). A number when equal all day;
+	 * a charge with `months` weighs 0 outside them.
+	 */
+	energyWeights(index: number, classIndex: number): number | Float64Array {
+		const known = this.weights[index]?.[classIndex];
+		if (known !== undefined) return known;
+		const charge = this.tariff.energyCharges[index];
+		const day = this.calendar.classes[classIndex];
+		if (!charge || !day) return 0;
+		let weights: number | Float64Array;
+		if (charge.type === 'tou') weights = this.touWeights(index, charge, day);
+		else if (charge.months && !charge.months.includes(day.month)) weights = 0;
+		else weights = charge.type === 'flat' ? charge.perKwh : 1;
+		const row = this.weights[index];
+		if (row) row[classIndex] = weights;
+		return weights;
+	}
+
+	/** Σ weight × hours over one day of the class. */
+	weightedHours(index: number, classIndex: number): number {
+		const weights = this.energyWeights(index, classIndex);
+		if (typeof weights === 'number') return weights * (this.calendar.classes[classIndex]?.shape.hours ?? 0);
+		let total = this.totals.get(weights);
+		if (total === undefined) {
+			total = weights.reduce((sum, weight) => sum + weight, 0) * INTERVAL_HOURS;
+			this.totals.set(weights, total);
+		}
+		return total;
+	}
+
+	/** Intervals of a day class that a demand charge measures (months, days, windows), or null for none. */
+	demandMask(index: number, classIndex: number): Uint8Array | null {
+		const known = this.masks[index]?.[classIndex];
+		if (known !== undefined) return known;
+		const charge = this.tariff.demandCharges[index];
+		const day = this.calendar.classes[classIndex];
+		let mask: Uint8Array | null = null;
+		if (
+			charge &&
+			day &&
+			monthMask(charge.months)[day.month] === 1 &&
+			daysMatch(charge.days, this.pricesAsWeekend(day))
+		) {
+			mask = windowMask(charge.windows, day.shape);
+		}
+		const row = this.masks[index];
+		if (row) row[classIndex] = mask;
+		return mask;
+	}
+}

@@ -1,0 +1,70 @@
+import { z } from 'zod';
+import { equipmentSchema } from './equipment.schema';
+import { amount, list, record, text } from './fields';
+import { holidaysSchema, periodSchema, timezoneSchema } from './period.schema';
+import { tariffSchema } from './tariff.schema';
+
+const calculationFields = {
+	period: periodSchema,
+	timezone: timezoneSchema,
+	holidays: holidaysSchema,
+	tariff: tariffSchema
+};
+
+/** The body of POST /api/v1/calculate. */
+export const calculateRequestSchema = record('Request', {
+	...calculationFields,
+	equipment: list('Equipment', equipmentSchema, { max: 2000 })
+});
+
+const scenarioSchema = record('Scenario', {
+	name: text('Name', 120),
+	equipment: list('Equipment', equipmentSchema, { max: 2000 }),
+	oneOffCosts: list(
+		'One-off costs',
+		record('One-off cost', {
+			label: text('Label', 80),
+			amount: amount('Amount', { min: -1_000_000_000, max: 1_000_000_000 })
+		}),
+		{ max: 50 }
+	).default([]),
+	tariff: tariffSchema.optional()
+});
+
+/** The body of POST /api/v1/compare: the calculation fields, scenarios and the finance assumptions. */
+export const compareRequestSchema = record('Request', {
+	...calculationFields,
+	scenarios: list('Scenarios', scenarioSchema, { min: 1, max: 20 }),
+	baseline: amount('Baseline', { integer: true, min: 0, max: 19 }).default(0),
+	finance: record('Finance', {
+		horizonYears: amount('Horizon years', { integer: true, min: 1, max: 50 }),
+		discountPercent: amount('Discount percent', { min: 0, max: 100 }),
+		escalationPercent: amount('Escalation percent', { min: -50, max: 100 })
+	}),
+	emissionFactorKgPerKwh: amount('Emission factor', { min: 0, max: 5 }).default(0)
+}).superRefine((request, ctx) => {
+	if (!('months' in request.period) || request.period.months !== 12) {
+		ctx.addIssue({ code: 'custom', path: ['period'], message: 'A comparison covers 12 calendar months' });
+	}
+	if (request.baseline >= request.scenarios.length) {
+		ctx.addIssue({
+			code: 'custom',
+			path: ['baseline'],
+			message: 'Baseline must be the index of one of the scenarios'
+		});
+	}
+	const devices = request.scenarios.reduce((sum, scenario) => sum + scenario.equipment.length, 0);
+	if (devices > 10_000) {
+		ctx.addIssue({
+			code: 'custom',
+			path: ['scenarios'],
+			message: 'A comparison can hold at most 10,000 devices'
+		});
+	}
+});
+
+export type CalculateRequest = z.output<typeof calculateRequestSchema>;
+export type CalculateRequestInput = z.input<typeof calculateRequestSchema>;
+export type CompareRequest = z.output<typeof compareRequestSchema>;
+export type CompareRequestInput = z.input<typeof compareRequestSchema>;
+export type Scenario = CompareRequest['scenarios'][number];

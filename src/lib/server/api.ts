@@ -1,0 +1,87 @@
+import { json, type RequestEvent } from '@sveltejs/kit';
+import type { z } from 'zod';
+import { parseRequest } from '$lib/calc';
+import { RateLimiter } from 'sveltekit-rate-limiter/server';
+import { logger } from './log';
+
+export const MAX_BODY_BYTES = 1024 * 1024;
+
+const NO_STORE = { 'Cache-Control': 'no-store' };
+
+export function apiError(
+	status: number,
+	error: string,
+	message: string,
+	issues?: { path: string; message: string }[]
+) {
+	return json(issues ? { error, message, issues } : { error, message }, { status, headers: NO_STORE });
+}
+
+/**
+ * Reads a JSON body of at most 1 MB without trusting Content-Length: the stream is counted as it
+ * arrives and abandoned past the limit.
+ */
+export async function readJsonBody(
+	event: RequestEvent
+): Promise<{ ok: true; body: unknown } | { ok: false; response: Response }> {
+	const declared = Number(event.request.headers.get('content-length') ?? 0);
+	if (declared > MAX_BODY_BYTES)
+		return { ok: false, response: apiError(413, 'payload_too_large', 'The body is over 1 MB.') };
+	const reader = event.request.body?.getReader();
+	if (!reader) return { ok: false, response: apiError(400, 'invalid_json', 'Send a JSON body.') };
+	const chunks: Uint8Array[] = [];
+	let size = 0;
+	for (;;) {
+		const { done, value } = await reader.read();
+		if (done) break;
+		size += value.byteLength;
+		if (size > MAX_BODY_BYTES) {
+			await reader.cancel();
+			return { ok: false, response: apiError(413, 'payload_too_large', 'The body is over 1 MB.') };
+		}
+		chunks.push(value);
+	}
+	const text = new TextDecoder().decode(Buffer.concat(chunks));
+	try {
+		return { ok: true, body: JSON.parse(text) };
+	} catch {
+		return { ok: false, response: apiError(400, 'invalid_json', 'The body is not valid JSON.') };
+	}
+}
+
+// Anonymous callers (the public quick estimate, outside tools) share a per-client budget; signed-in
+// users get a larger one.
+const anonymousLimiter = new RateLimiter({ IP: [120, 'm'], IPUA: [60, 'm'] });
+const memberLimiter = new RateLimiter({ IP: [600, 'm'] });
+
+/**
+ * The shape every calculation endpoint shares: rate limit, bounded JSON body, zod validation with
+ * field paths (400), then the pure core. The core never sees unvalidated input.
+ */
+export async function calculationEndpoint<S extends z.ZodType, R>(
+	event: RequestEvent,
+	schema: S,
+	run: (input: z.output<S>) => R
+) {
+	const limiter = event.locals.user ? memberLimiter : anonymousLimiter;
+	if (await limiter.isLimited(event))
+		return json(
+			{ error: 'rate_limited', message: 'Too many requests. Wait a minute and try again.' },
+			{ status: 429, headers: { 'Retry-After': '60' } }
+		);
+	const read = await readJsonBody(event);
+	if (!read.ok) return read.response;
+	const parsed = parseRequest(schema, read.body);
+	if (!parsed.success)
+		return json(
+			{ ...parsed.error, message: 'Some fields need attention.' },
+			{ status: 400, headers: NO_STORE }
+		);
+	try {
+		return json(run(parsed.data), { headers: NO_STORE });
+	} catch (error) {
+		// Validation should make this unreachable; if it is reached, answer in the API's own terms and log it.
+		logger.error({ err: error, path: event.url.pathname }, 'calculation failed on validated input');
+		return apiError(422, 'calculation_failed', 'This request passed validation but could not be calculated.');
+	}
+}
