@@ -4,7 +4,7 @@ import bcrypt from 'bcryptjs';
 import { sql } from 'drizzle-orm';
 import { drizzle } from 'drizzle-orm/postgres-js';
 import postgres from 'postgres';
-import { memberships, users, workspaces } from '../src/lib/server/db/schema';
+import { memberships, tariffs, tariffVersions, users, workspaces } from '../src/lib/server/db/schema';
 
 type DemoPeople = {
 	password: string;
@@ -16,9 +16,17 @@ type DemoPeople = {
 	}[];
 };
 
+type DemoTariffs = {
+	tariffs: (Omit<typeof tariffs.$inferInsert, 'revision'> & {
+		id: string;
+		versions: (Omit<typeof tariffVersions.$inferInsert, 'tariffId'> & { id: string })[];
+	})[];
+};
+
 const url = process.env.DATABASE_URL;
 if (!url) throw new Error('DATABASE_URL is not set');
 const people: DemoPeople = JSON.parse(readFileSync('data/demo-people.json', 'utf8'));
+const library: DemoTariffs = JSON.parse(readFileSync('data/demo-tariffs.json', 'utf8'));
 
 const client = postgres(url, { max: 1, onnotice: () => {} });
 const db = drizzle(client);
@@ -42,10 +50,23 @@ await db.transaction(async (tx) => {
 				.values({ workspaceId: ws.id, userId: m.userId, role: m.role })
 				.onConflictDoUpdate({ target: [memberships.workspaceId, memberships.userId], set: { role: m.role } });
 	}
+	// The public demo library. Published versions never change, so existing ones are left as they are.
+	const curator = people.users.find((u) => u.isAdmin);
+	for (const { versions, ...t } of library.tariffs) {
+		await tx
+			.insert(tariffs)
+			.values({ ...t, workspaceId: null, revision: versions.length, createdBy: curator?.id })
+			.onConflictDoNothing();
+		for (const v of versions)
+			await tx
+				.insert(tariffVersions)
+				.values({ ...v, tariffId: t.id, publishedBy: curator?.id, publishedByName: curator?.name })
+				.onConflictDoNothing();
+	}
 });
 
 const [{ n }] = (await db.execute(sql`select count(*)::int as n from "user"`)) as unknown as [{ n: number }];
 console.log(
-	`[seed] demo data loaded (${people.users.length} demo people, ${people.workspaces.length} workspaces; ${n} users in all)`
+	`[seed] demo data loaded (${people.users.length} demo people, ${people.workspaces.length} workspaces, ${library.tariffs.length} public tariffs; ${n} users in all)`
 );
 await client.end();

@@ -1,69 +1,114 @@
-import { expect, test, type APIRequestContext } from '@playwright/test';
+import { expect, test, type APIRequestContext, type APIResponse, type Browser } from '@playwright/test';
+import { readFileSync } from 'node:fs';
 import { DEMO_PASSWORD, DEMO_WS, gotoReady } from './helpers';
 
-// Every route that exists, against every kind of caller. Expected statuses: 303 = sent to sign-in.
-type Who = 'anonymous' | 'viewer' | 'editor' | 'owner' | 'outsider';
+// Every route that exists, against every kind of caller. 303 = sent to sign-in.
+type Who = 'anonymous' | 'viewer' | 'editor' | 'owner' | 'outsider' | 'admin';
+const WHO: Who[] = ['anonymous', 'viewer', 'editor', 'owner', 'outsider', 'admin'];
 const people: Record<Exclude<Who, 'anonymous'>, string> = {
 	viewer: 'viewer@example.org',
 	editor: 'editor@example.org',
 	owner: 'owner@example.org',
-	outsider: 'grower@example.org'
+	outsider: 'grower@example.org',
+	admin: 'admin@example.org'
 };
 
+const publicTariff = (
+	JSON.parse(readFileSync('data/demo-tariffs.json', 'utf8')) as { tariffs: { id: string }[] }
+).tariffs[0]!.id;
 const ws = `/w/${DEMO_WS.id}`;
-// Harmless payloads: each is invalid or a no-op past the guard, so a 400 proves the guard let it through.
-const routes: {
-	method: 'GET' | 'POST';
-	path: string;
+let privateTariff = '';
+
+type Route = {
+	method: 'GET' | 'POST' | 'PUT';
+	path: () => string;
 	form?: Record<string, string>;
-	expect: Record<Who, number[]>;
-}[] = [
+	json?: unknown;
+	expect: number[];
+};
+// Expected statuses in WHO order: anonymous, viewer, editor, owner, outsider, admin.
+// Payloads are harmless: invalid or a no-op past the guard, so a 400 proves the guard let the caller through.
+const bad = { name: '', email: 'bad', role: 'nope', userId: '', invitationId: 'x', confirmName: 'wrong' };
+const routes: Route[] = [
+	{ method: 'GET', path: () => '/workspaces', expect: [303, 200, 200, 200, 200, 200] },
+	{ method: 'GET', path: () => ws, expect: [303, 200, 200, 200, 404, 404] },
 	{
 		method: 'GET',
-		path: '/workspaces',
-		expect: { anonymous: [303], viewer: [200], editor: [200], owner: [200], outsider: [200] }
+		path: () => '/w/00000000-0000-4000-8000-000000000000',
+		expect: [303, 404, 404, 404, 404, 404]
 	},
-	{
-		method: 'GET',
-		path: ws,
-		expect: { anonymous: [303], viewer: [200], editor: [200], owner: [200], outsider: [404] }
-	},
-	{
-		method: 'GET',
-		path: '/w/00000000-0000-4000-8000-000000000000',
-		expect: { anonymous: [303], viewer: [404], editor: [404], owner: [404], outsider: [404] }
-	},
-	{
-		method: 'GET',
-		path: '/w/not-a-uuid',
-		expect: { anonymous: [303], viewer: [404], editor: [404], owner: [404], outsider: [404] }
-	},
+	{ method: 'GET', path: () => '/w/not-a-uuid', expect: [303, 404, 404, 404, 404, 404] },
 	...['rename', 'invite', 'changeRole', 'remove', 'revoke', 'delete'].map((action) => ({
 		method: 'POST' as const,
-		path: `${ws}?/${action}`,
-		form: { name: '', email: 'bad', role: 'nope', userId: '', invitationId: 'x', confirmName: 'wrong' },
-		expect: { anonymous: [401], viewer: [403], editor: [403], owner: [400], outsider: [404] }
+		path: () => `${ws}?/${action}`,
+		form: bad,
+		expect: [401, 403, 403, 400, 404, 404]
 	})),
 	{
 		method: 'POST',
-		path: '/workspaces?/create',
+		path: () => '/workspaces?/create',
 		form: { name: '' },
-		expect: { anonymous: [401], viewer: [400], editor: [400], owner: [400], outsider: [400] }
+		expect: [401, 400, 400, 400, 400, 400]
+	},
+	// The tariff library: public tariffs are open to all; private ones to their workspace; only admins edit public ones.
+	{ method: 'GET', path: () => '/tariffs', expect: [200, 200, 200, 200, 200, 200] },
+	{ method: 'GET', path: () => `/tariffs/${publicTariff}`, expect: [200, 200, 200, 200, 200, 200] },
+	{ method: 'GET', path: () => `/tariffs/${privateTariff}`, expect: [404, 200, 200, 200, 404, 404] },
+	{ method: 'GET', path: () => `/api/v1/tariffs/${privateTariff}`, expect: [404, 200, 200, 200, 404, 404] },
+	{
+		method: 'GET',
+		path: () => `/api/v1/tariffs/${privateTariff}/versions/1`,
+		expect: [404, 200, 200, 200, 404, 404]
+	},
+	{ method: 'GET', path: () => '/tariffs/new', expect: [303, 403, 200, 200, 200, 200] },
+	{ method: 'GET', path: () => '/tariffs/import', expect: [303, 403, 200, 200, 200, 200] },
+	{ method: 'GET', path: () => `/tariffs/${publicTariff}/edit`, expect: [303, 403, 403, 403, 403, 200] },
+	{ method: 'GET', path: () => `/tariffs/${privateTariff}/edit`, expect: [303, 403, 200, 200, 404, 404] },
+	{
+		method: 'POST',
+		path: () => `/tariffs/${privateTariff}/edit`,
+		form: { payload: '{}' },
+		expect: [401, 403, 400, 400, 404, 404]
+	},
+	{
+		method: 'POST',
+		path: () => `/tariffs/${publicTariff}/edit`,
+		form: { payload: '{}' },
+		expect: [401, 403, 403, 403, 403, 400]
+	},
+	{
+		method: 'PUT',
+		path: () => `/api/v1/tariffs/${privateTariff}`,
+		json: {},
+		expect: [401, 403, 400, 400, 404, 404]
+	},
+	{
+		method: 'PUT',
+		path: () => `/api/v1/tariffs/${publicTariff}`,
+		json: {},
+		expect: [401, 403, 403, 403, 403, 400]
+	},
+	{
+		method: 'POST',
+		path: () => '/api/v1/tariffs',
+		json: { workspaceId: DEMO_WS.id },
+		expect: [401, 403, 400, 400, 404, 404]
+	},
+	{
+		method: 'POST',
+		path: () => '/api/v1/tariffs',
+		json: { workspaceId: null },
+		expect: [401, 403, 403, 403, 403, 400]
+	},
+	{
+		method: 'POST',
+		path: () => `/tariffs/${privateTariff}?/copy`,
+		form: { workspaceId: DEMO_WS.id },
+		expect: [404, 403, 303, 303, 404, 404]
 	}
 ];
 
-async function effectiveStatus(res: import('@playwright/test').APIResponse): Promise<number> {
-	if (!(res.headers()['content-type'] ?? '').includes('application/json') || res.status() !== 200)
-		return res.status();
-	const body = (await res.json()) as { type: string; status?: number };
-	return body.type === 'failure' || body.type === 'redirect' ? (body.status ?? 200) : res.status();
-}
-
-async function requestAs(
-	who: Who,
-	baseURL: string,
-	browser: import('@playwright/test').Browser
-): Promise<APIRequestContext> {
+async function signedIn(browser: Browser, baseURL: string, who: Who): Promise<APIRequestContext> {
 	const context = await browser.newContext({ baseURL });
 	if (who !== 'anonymous') {
 		const page = await context.newPage();
@@ -76,22 +121,57 @@ async function requestAs(
 	return context.request;
 }
 
-for (const who of ['anonymous', 'viewer', 'editor', 'owner', 'outsider'] as const) {
+/** Form actions answer as use:enhance sees them: a failure or redirect carries its own status in the JSON body. */
+async function effectiveStatus(res: APIResponse): Promise<number> {
+	if (!(res.headers()['content-type'] ?? '').includes('application/json') || res.status() !== 200)
+		return res.status();
+	const body = (await res.json()) as { type?: string; status?: number };
+	return body.type === 'failure' || body.type === 'redirect' ? (body.status ?? 200) : res.status();
+}
+
+test.beforeAll(async ({ browser, baseURL }) => {
+	const owner = await signedIn(browser, baseURL!, 'owner');
+	const res = await owner.post('/api/v1/tariffs', {
+		data: {
+			workspaceId: DEMO_WS.id,
+			meta: {
+				utility: 'Matrix test utility (invented)',
+				name: 'Private matrix tariff',
+				country: 'US',
+				customerClass: 'agricultural',
+				currency: 'USD',
+				timezone: 'America/Chicago',
+				holidays: null
+			},
+			version: { effectiveFrom: '2026-01-01', source: 'Invented for a test', checkedOn: '2026-12-01' },
+			structure: { currency: 'USD', energyCharges: [{ label: 'Energy', type: 'flat', perKwh: 0.12 }] }
+		}
+	});
+	expect(res.status()).toBe(201);
+	privateTariff = (await res.json()).id;
+});
+
+for (const [column, who] of WHO.entries()) {
 	test(`access matrix: ${who}`, async ({ browser, baseURL }) => {
-		const request = await requestAs(who, baseURL!, browser);
+		const request = await signedIn(browser, baseURL!, who);
 		for (const route of routes) {
+			const path = route.path();
 			const res =
 				route.method === 'GET'
-					? await request.get(route.path, { maxRedirects: 0 })
-					: await request.post(route.path, {
-							form: route.form,
-							// As use:enhance sends it: a failed action then reports its own status in the JSON body.
-							headers: { origin: baseURL!, 'x-sveltekit-action': 'true' },
-							maxRedirects: 0
-						});
-			expect(route.expect[who], `${who} ${route.method} ${route.path}`).toContain(await effectiveStatus(res));
-			if (who === 'outsider' && route.path.startsWith(ws))
-				expect(await res.text()).not.toContain(DEMO_WS.name);
+					? await request.get(path, { maxRedirects: 0 })
+					: route.form
+						? await request.post(path, {
+								form: route.form,
+								headers: { origin: baseURL!, 'x-sveltekit-action': 'true' },
+								maxRedirects: 0
+							})
+						: await request.fetch(path, { method: route.method, data: route.json, maxRedirects: 0 });
+			expect([route.expect[column]], `${who} ${route.method} ${path}`).toContain(await effectiveStatus(res));
+			if (who === 'outsider' && (path.startsWith(ws) || path.includes(privateTariff))) {
+				const text = await res.text();
+				expect(text).not.toContain(DEMO_WS.name);
+				expect(text).not.toContain('Private matrix tariff');
+			}
 		}
 	});
 }

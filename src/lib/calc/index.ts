@@ -37,3 +37,6 @@ export type { DemandCharge, EnergyCharge, FixedCharge, Tariff, TariffInput } fro
 export { airSchema, pumpSchema, pumpingRequestSchema } from './pumping.schema';
 export type { Air, Pump, PumpingRequest, PumpingRequestInput } from './pumping.schema';
 export type * from './types';
+export { calculateAcrossVersions, NoVersionInForce, versionInForce } from './versions';
+export type { DatedTariff, VersionedResponse } from './versions';
+export { REFERENCE_WATTS, referenceMonthlyCost } from './reference';

@@ -1,6 +1,7 @@
 import { json, type RequestEvent } from '@sveltejs/kit';
 import type { z } from 'zod';
-import { parseRequest } from '$lib/calc';
+import { NoVersionInForce, parseRequest, type DatedTariff } from '$lib/calc';
+import { resolveTariffId } from './tariffs/by-id';
 import { RateLimiter } from 'sveltekit-rate-limiter/server';
 import { logger } from './log';
 
@@ -61,7 +62,7 @@ const memberLimiter = new RateLimiter({ IP: [600, 'm'] });
 export async function calculationEndpoint<S extends z.ZodType, R>(
 	event: RequestEvent,
 	schema: S,
-	run: (input: z.output<S>) => R
+	run: (input: z.output<S>, versions: DatedTariff[] | null) => R
 ) {
 	const limiter = event.locals.user ? memberLimiter : anonymousLimiter;
 	if (await limiter.isLimited(event))
@@ -71,15 +72,21 @@ export async function calculationEndpoint<S extends z.ZodType, R>(
 		);
 	const read = await readJsonBody(event);
 	if (!read.ok) return read.response;
-	const parsed = parseRequest(schema, read.body);
+	let body = read.body;
+	let versions: DatedTariff[] | null = null;
+	if (body && typeof body === 'object' && !Array.isArray(body) && 'tariffId' in body && !('tariff' in body))
+		({ body, versions } = await resolveTariffId(event, body as Record<string, unknown>));
+	const parsed = parseRequest(schema, body);
 	if (!parsed.success)
 		return json(
 			{ ...parsed.error, message: 'Some fields need attention.' },
 			{ status: 400, headers: NO_STORE }
 		);
 	try {
-		return json(run(parsed.data), { headers: NO_STORE });
+		return json(run(parsed.data, versions), { headers: NO_STORE });
 	} catch (error) {
+		if (error instanceof NoVersionInForce)
+			return apiError(400, 'invalid_request', error.message, [{ path: 'period', message: error.message }]);
 		// Validation should make this unreachable; if it is reached, answer in the API's own terms and log it.
 		logger.error({ err: error, path: event.url.pathname }, 'calculation failed on validated input');
 		return apiError(422, 'calculation_failed', 'This request passed validation but could not be calculated.');

@@ -2,6 +2,7 @@ import { error, redirect, type RequestEvent } from '@sveltejs/kit';
 import { and, eq } from 'drizzle-orm';
 import { db } from './db';
 import { memberships, workspaces } from './db/schema';
+import { findTariff } from './services/tariff.service';
 
 export type Role = 'owner' | 'editor' | 'viewer';
 const RANK: Record<Role, number> = { viewer: 1, editor: 2, owner: 3 };
@@ -49,3 +50,39 @@ export function requireAdmin(event: RequestEvent): SessionUser {
 }
 
 export const can = (role: Role, needed: Role) => RANK[role] >= RANK[needed];
+
+/**
+ * Read access to a tariff: public tariffs are open to everyone (the quick estimate uses them); a private
+ * one only to members of its workspace — anyone else gets 404.
+ */
+export async function requireTariffRead(event: RequestEvent, tariffId: string) {
+	if (!UUID.test(tariffId)) error(404, 'Not found');
+	const found = await findTariff(tariffId);
+	if (!found) error(404, 'Not found');
+	if (found.tariff.workspaceId) {
+		if (!event.locals.user) error(404, 'Not found');
+		const access = await memberRole(event.locals.user.id, found.tariff.workspaceId);
+		if (!access) error(404, 'Not found');
+		return { ...found, role: access as Role };
+	}
+	return { ...found, role: null };
+}
+
+/** Write access: only platform admins touch public tariffs; only that workspace's editors its private ones. */
+export async function requireTariffWrite(event: RequestEvent, tariffId: string) {
+	const user = requireUser(event);
+	const found = await requireTariffRead(event, tariffId);
+	if (found.tariff.workspaceId) {
+		if (!found.role || !can(found.role, 'editor'))
+			error(403, 'Only editors of this workspace may change its tariffs.');
+	} else if (!user.isAdmin) error(403, 'Only platform admins may change public tariffs.');
+	return { ...found, user };
+}
+
+async function memberRole(userId: string, workspaceId: string): Promise<Role | null> {
+	const [row] = await db
+		.select({ role: memberships.role })
+		.from(memberships)
+		.where(and(eq(memberships.workspaceId, workspaceId), eq(memberships.userId, userId)));
+	return row?.role ?? null;
+}

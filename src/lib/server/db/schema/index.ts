@@ -1,2 +1,3 @@
 export * from './auth';
 export * from './workspace';
+export * from './tariff';

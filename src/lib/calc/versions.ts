@@ -1,0 +1,88 @@
+import { calculate } from './calculate';
+import { billingSpans, type BillingSpan } from './periods';
+import type { CalculateRequest } from './request.schema';
+import { roundMoney } from './rounding';
+import type { Tariff } from './tariff.schema';
+import type { CalculateResponse } from './types';
+
+/** One published version of a tariff, as the library stores it. Dates are ISO, inclusive. */
+export interface DatedTariff {
+	id: string;
+	number: number;
+	effectiveFrom: string;
+	effectiveTo: string | null;
+	tariff: Tariff;
+}
+
+/**
+ * The version in force on a date: the latest `effectiveFrom` on or before it whose `effectiveTo` (if any)
+ * is not before it; of two versions effective the same day, the later-published (higher number) wins.
+ * ISO dates compare correctly as strings.
+ */
+export function versionInForce<V extends Omit<DatedTariff, 'tariff'>>(
+	versions: readonly V[],
+	isoDate: string
+): V | null {
+	let best: V | null = null;
+	for (const v of versions) {
+		if (v.effectiveFrom > isoDate || (v.effectiveTo !== null && v.effectiveTo < isoDate)) continue;
+		if (
+			!best ||
+			v.effectiveFrom > best.effectiveFrom ||
+			(v.effectiveFrom === best.effectiveFrom && v.number > best.number)
+		)
+			best = v;
+	}
+	return best;
+}
+
+export class NoVersionInForce extends Error {
+	constructor(readonly date: string) {
+		super(`No version of this tariff is in force on ${date}`);
+	}
+}
+
+export type VersionedResponse = CalculateResponse & {
+	versions: { label: string; versionId: string; number: number }[];
+};
+
+/**
+ * Calculates with, for each billing period, the version in force on the period's first day (the rule
+ * of the tariff library). Consecutive periods on the same version are calculated together, so a year
+ * that crosses one rate change costs two calculate() runs. A pinned version is simply a one-element list.
+ */
+export function calculateAcrossVersions(
+	request: CalculateRequest,
+	versions: readonly DatedTariff[]
+): VersionedResponse {
+	const spans = billingSpans(request.period);
+	const groups: { version: DatedTariff; spans: BillingSpan[]; firstIndex: number }[] = [];
+	spans.forEach((span, index) => {
+		const version = versionInForce(versions, span.from);
+		if (!version) throw new NoVersionInForce(span.from);
+		const last = groups.at(-1);
+		if (last && last.version.id === version.id) last.spans.push(span);
+		else groups.push({ version, spans: [span], firstIndex: index });
+	});
+
+	const results = groups.map((group) => {
+		const period: CalculateRequest['period'] =
+			'months' in request.period
+				? { start: group.spans[0]!.label, months: group.spans.length }
+				: { billingPeriods: group.spans.map(({ from, to }) => ({ from, to })) };
+		return calculate({ ...request, period, tariff: group.version.tariff });
+	});
+	const periods = results.flatMap((r) => r.periods);
+	return {
+		currency: results[0]?.currency ?? request.tariff.currency,
+		periods,
+		totals: {
+			kwh: periods.reduce((sum, p) => sum + p.kwh, 0),
+			cost: roundMoney(periods.reduce((sum, p) => sum + p.total, 0)),
+			peakKw: periods.reduce((peak, p) => Math.max(peak, p.peakKw), 0)
+		},
+		versions: groups.flatMap((g) =>
+			g.spans.map((s) => ({ label: s.label, versionId: g.version.id, number: g.version.number }))
+		)
+	};
+}

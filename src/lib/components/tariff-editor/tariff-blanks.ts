@@ -1,0 +1,134 @@
+import type { TariffInput } from '$lib/calc/tariff.schema';
+
+// What the editor adds when a person presses "Add …": each blank is valid on its own, with zero rates
+// and round-number hours, so adding a row never shows an error before anything was typed.
+
+export type FixedChargeInput = NonNullable<TariffInput['fixedCharges']>[number];
+export type EnergyChargeInput = NonNullable<TariffInput['energyCharges']>[number];
+export type TieredChargeInput = Extract<EnergyChargeInput, { type: 'tiered' }>;
+export type TouChargeInput = Extract<EnergyChargeInput, { type: 'tou' }>;
+export type TierInput = TieredChargeInput['tiers'][number];
+export type SeasonInput = TouChargeInput['seasons'][number];
+export type TouPeriodInput = SeasonInput['periods'][number];
+export type ClockWindowInput = TouPeriodInput['windows'][number];
+export type DemandChargeInput = NonNullable<TariffInput['demandCharges']>[number];
+export type RiderInput = NonNullable<TariffInput['riders']>[number];
+export type TaxInput = NonNullable<TariffInput['taxes']>[number];
+export type EnergyType = EnergyChargeInput['type'];
+export type DaysInput = NonNullable<TouPeriodInput['days']>;
+
+export const ALL_MONTHS = [1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11, 12] as const;
+
+export function blankTariff(): TariffInput {
+	return {
+		currency: 'USD',
+		holidaysAsWeekends: true,
+		fixedCharges: [],
+		energyCharges: [],
+		demandCharges: [],
+		riders: [],
+		taxes: []
+	};
+}
+
+export function blankFixedCharge(): FixedChargeInput {
+	return { label: 'Customer charge', perMonth: 0 };
+}
+
+export function blankWindow(): ClockWindowInput {
+	return { start: '16:00', end: '21:00' };
+}
+
+export function blankPeriod(label = 'On-peak'): TouPeriodInput {
+	return { label, perKwh: 0, days: 'weekdays', windows: [blankWindow()] };
+}
+
+export function blankSeason(months: number[] = [...ALL_MONTHS]): SeasonInput {
+	return { months, periods: [blankPeriod()], otherPerKwh: 0 };
+}
+
+/** A blank energy charge of a type; switching type keeps the label and any months restriction. */
+export function blankEnergyCharge(
+	type: EnergyType = 'flat',
+	label = 'Energy',
+	months?: number[]
+): EnergyChargeInput {
+	const only = months ? { months } : {};
+	if (type === 'tiered') {
+		return {
+			label,
+			type,
+			tiers: [
+				{ uptoKwh: 500, perKwh: 0 },
+				{ uptoKwh: null, perKwh: 0 }
+			],
+			...only
+		};
+	}
+	if (type === 'tou') return { label, type, seasons: [blankSeason()] };
+	return { label, type, perKwh: 0, ...only };
+}
+
+export function blankDemandCharge(): DemandChargeInput {
+	return { label: 'Demand', perKw: 0, intervalMinutes: 15, days: 'all' };
+}
+
+export function blankRider(): RiderInput {
+	return { label: 'Rider', perKwh: 0 };
+}
+
+export function blankTax(): TaxInput {
+	return { label: 'Tax', percent: 0 };
+}
+
+/**
+ * Adds a tier just before the open-ended last one, ending a step above the last closed tier (500 kWh
+ * steps: a round number a person then types over), at the rate of the tier before it.
+ */
+export function insertTier(tiers: TierInput[]): void {
+	const closed = tiers.map((tier) => tier.uptoKwh).filter((kwh): kwh is number => typeof kwh === 'number');
+	const top = closed.length ? Math.max(...closed) : 0;
+	const before = tiers[tiers.length - 2] ?? tiers[tiers.length - 1];
+	const tier: TierInput = { uptoKwh: top + 500, perKwh: before?.perKwh ?? 0 };
+	if (tiers.length === 0) tiers.push({ uptoKwh: null, perKwh: 0 });
+	tiers.splice(tiers.length - 1, 0, tier);
+}
+
+/** Removes a tier; when the last goes, the one before becomes open-ended ("and above"). */
+export function removeTier(tiers: TierInput[], index: number): void {
+	const wasLast = index === tiers.length - 1;
+	tiers.splice(index, 1);
+	const last = tiers[tiers.length - 1];
+	if (wasLast && last) last.uptoKwh = null;
+}
+
+/** Months with one switched on or off, in calendar order. */
+export function toggleMonth(months: readonly number[], month: number): number[] {
+	const next = months.includes(month) ? months.filter((m) => m !== month) : [...months, month];
+	return next.sort((a, b) => a - b);
+}
+
+/** Months no other season of the charge holds yet: what a new season starts with. */
+export function unclaimedMonths(seasons: readonly SeasonInput[]): number[] {
+	const taken = new Set(seasons.flatMap((season) => season.months));
+	return ALL_MONTHS.filter((month) => !taken.has(month));
+}
+
+/** Moves a fixed charge between per month and per day, keeping the amount typed. */
+export function setFixedBasis(charge: FixedChargeInput, basis: 'perMonth' | 'perDay'): void {
+	const other = basis === 'perMonth' ? 'perDay' : 'perMonth';
+	if (!(other in charge)) return;
+	const amount = charge[other];
+	const record = charge as Record<string, unknown>;
+	delete record[other];
+	record[basis] = amount;
+}
+
+/** Quarter-hour times of day, "00:00" … "23:45"; with `endOfDay` also "24:00". */
+export function quarterHours(endOfDay = false): string[] {
+	const times = Array.from({ length: 96 }, (_, i) => {
+		const minutes = i * 15;
+		return `${String(Math.floor(minutes / 60)).padStart(2, '0')}:${String(minutes % 60).padStart(2, '0')}`;
+	});
+	return endOfDay ? [...times, '24:00'] : times;
+}

@@ -1,0 +1,145 @@
+import { parseRequest, type RequestIssue } from '$lib/calc/parse';
+import { tariffSchema, type TariffInput } from '$lib/calc/tariff.schema';
+
+/** One problem at a dotted path relative to the tariff ("energyCharges.0.tiers.1.uptoKwh"). */
+export type EditorIssue = RequestIssue;
+
+/**
+ * What a number box writes into the tariff: a number when the text is one, nothing when the box is
+ * empty (the schema then says "Per kWh is required"), and the text itself when it is not a number (the
+ * schema says "Per kWh must be a number"). Never NaN, so the JSON the page posts is what was typed.
+ */
+export type NumberDraft = number | string | undefined;
+
+const DECIMAL = /^[-+]?(\d+\.?\d*|\.\d+)(e[-+]?\d+)?$/i;
+
+/** The draft for a box's text: "0.12" → 0.12, "" → undefined, "12abc" → "12abc". */
+export function numberDraft(text: string): NumberDraft {
+	const trimmed = text.trim();
+	if (trimmed === '') return undefined;
+	if (!DECIMAL.test(trimmed)) return trimmed;
+	const parsed = Number(trimmed);
+	return Number.isFinite(parsed) ? parsed : trimmed;
+}
+
+/** What a number box shows for a value it did not type itself (a loaded or replaced tariff). */
+export function numberText(value: unknown): string {
+	if (typeof value === 'number') return Number.isFinite(value) ? String(value) : '';
+	return typeof value === 'string' ? value : '';
+}
+
+/**
+ * The text a box keeps when the tariff's value may have changed under it: its own text while that
+ * still means the same value ("0." stays "0." while the value is 0), otherwise the value's text.
+ */
+export function syncedText(value: unknown, text: string): string {
+	const draft = numberDraft(text);
+	if (draft === value || (draft === undefined && (value === undefined || value === null))) return text;
+	return numberText(value);
+}
+
+/**
+ * Writes a draft into a charge. The tariff's type says "number" because that is the valid shape; while
+ * a person is typing, a field may hold nothing or the text they typed, which the schema reports.
+ */
+export function writeDraft<T extends object>(target: T, key: keyof T & string, draft: NumberDraft): void {
+	(target as Record<string, unknown>)[key] = draft;
+}
+
+const FIXED_UNION = 'Give a fixed charge per month or per day';
+
+/**
+ * Every problem with the tariff as the editor holds it, at dotted paths. A fixed charge whose one
+ * amount box is empty fails both ways of the schema's union equally, so zod reports the union; here it
+ * is reported at the empty box instead, which is what the person must fill in.
+ */
+export function tariffIssues(value: TariffInput): EditorIssue[] {
+	const result = parseRequest(tariffSchema, value);
+	if (result.success) return [];
+	return result.error.issues.map((issue) => {
+		const match = /^fixedCharges\.(\d+)$/.exec(issue.path);
+		if (!match || !issue.message.startsWith(FIXED_UNION)) return issue;
+		const charge = value.fixedCharges?.[Number(match[1])];
+		if (!charge) return issue;
+		const keys = (['perMonth', 'perDay'] as const).filter((key) => key in charge);
+		const key = keys.length === 1 ? keys[0] : undefined;
+		if (!key || charge[key] !== undefined) return issue;
+		return {
+			path: `${issue.path}.${key}`,
+			message: `${key === 'perMonth' ? 'Per month' : 'Per day'} is required`
+		};
+	});
+}
+
+/** Client and server issues together, each path and message once. */
+export function mergeIssues(...lists: ReadonlyArray<readonly EditorIssue[]>): EditorIssue[] {
+	const seen = new Set<string>();
+	return lists.flat().filter((issue) => {
+		const key = `${issue.path}\u0000${issue.message}`;
+		if (seen.has(key)) return false;
+		seen.add(key);
+		return true;
+	});
+}
+
+/** Messages for exactly this path. */
+export function messagesAt(issues: readonly EditorIssue[], path: string): string[] {
+	return issues.filter((issue) => issue.path === path).map((issue) => issue.message);
+}
+
+/** Messages for this path and everything inside it (a month row, a list of windows). */
+export function messagesUnder(issues: readonly EditorIssue[], path: string): string[] {
+	return issues
+		.filter((issue) => issue.path === path || issue.path.startsWith(`${path}.`))
+		.map((issue) => issue.message);
+}
+
+/** The element id of the control for a path: "energyCharges.0.perKwh" → "te-energyCharges-0-perKwh". */
+export function fieldId(path: string): string {
+	return path === '' ? 'te-tariff' : `te-${path.replaceAll('.', '-')}`;
+}
+
+/** The ids to try, nearest first, when jumping to a path whose exact control may not exist. */
+export function fieldIdsToward(path: string): string[] {
+	const parts = path === '' ? [] : path.split('.');
+	return parts.map((_, i) => fieldId(parts.slice(0, parts.length - i).join('.'))).concat(fieldId(''));
+}
+
+const ITEM_NAMES: Record<string, string> = {
+	fixedCharges: 'Fixed charge',
+	energyCharges: 'Energy charge',
+	demandCharges: 'Demand charge',
+	riders: 'Rider',
+	taxes: 'Tax',
+	seasons: 'season',
+	periods: 'period',
+	tiers: 'tier',
+	windows: 'window'
+};
+
+/** Where a path is, in words for the summary: "energyCharges.0.seasons.1.months.2" → "Energy charge 1 · season 2". */
+export function describePath(path: string): string {
+	const parts = path.split('.');
+	const words: string[] = [];
+	parts.forEach((part, i) => {
+		const name = ITEM_NAMES[part];
+		const next = parts[i + 1];
+		if (name && next !== undefined && /^\d+$/.test(next)) words.push(`${name} ${Number(next) + 1}`);
+	});
+	return words.join(' · ') || 'Tariff';
+}
+
+/** Months a list's issues point at by position ("….months.2" is the third month listed). */
+export function flaggedMonths(
+	issues: readonly EditorIssue[],
+	path: string,
+	months: readonly number[]
+): Set<number> {
+	const flagged = new Set<number>();
+	for (const issue of issues) {
+		const rest = issue.path.startsWith(`${path}.`) ? issue.path.slice(path.length + 1) : '';
+		const month = /^\d+$/.test(rest) ? months[Number(rest)] : undefined;
+		if (month !== undefined) flagged.add(month);
+	}
+	return flagged;
+}

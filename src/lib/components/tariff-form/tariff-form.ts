@@ -1,0 +1,123 @@
+import type { TariffInput } from '$lib/calc/tariff.schema';
+
+export type MetaDraft = {
+	utility: string;
+	name: string;
+	code: string;
+	country: string;
+	region: string;
+	area: string;
+	customerClass: string;
+	currency: string;
+	timezone: string;
+	holidayMode: 'country' | 'dates' | 'none';
+	holidayCountry: string;
+	holidayRegion: string;
+	holidayDates: string;
+	description: string;
+};
+export type VersionDraft = {
+	effectiveFrom: string;
+	effectiveTo: string;
+	source: string;
+	checkedOn: string;
+	changeNote: string;
+};
+export type Issue = { path: string; message: string };
+
+type Holidays = { country: string; region?: string } | { dates: string[] } | null;
+
+export function metaDraftFrom(meta: Partial<Record<string, unknown>> & { holidays?: Holidays }): MetaDraft {
+	const h = meta.holidays ?? null;
+	const text = (k: string) => (typeof meta[k] === 'string' ? (meta[k] as string) : '');
+	return {
+		utility: text('utility'),
+		name: text('name'),
+		code: text('code'),
+		country: text('country') || 'US',
+		region: text('region'),
+		area: text('area'),
+		customerClass: text('customerClass') || 'agricultural',
+		currency: text('currency') || 'USD',
+		timezone: text('timezone') || 'America/Chicago',
+		holidayMode: !h ? 'none' : 'dates' in h ? 'dates' : 'country',
+		holidayCountry: h && 'country' in h ? h.country : '',
+		holidayRegion: h && 'country' in h ? (h.region ?? '') : '',
+		holidayDates: h && 'dates' in h ? h.dates.join('\n') : '',
+		description: text('description')
+	};
+}
+
+/** The JSON the editor posts: the same shape as the API and the JSON export (meta, version, structure). */
+export function submission(
+	meta: MetaDraft,
+	version: VersionDraft,
+	structure: TariffInput,
+	expectedRevision?: number
+) {
+	const holidays: Holidays =
+		meta.holidayMode === 'none'
+			? null
+			: meta.holidayMode === 'dates'
+				? { dates: meta.holidayDates.split(/[\s,]+/).filter(Boolean) }
+				: {
+						country: meta.holidayCountry,
+						...(meta.holidayRegion.trim() ? { region: meta.holidayRegion } : {})
+					};
+	return {
+		meta: {
+			utility: meta.utility,
+			name: meta.name,
+			code: meta.code,
+			country: meta.country,
+			region: meta.region,
+			area: meta.area,
+			customerClass: meta.customerClass,
+			currency: meta.currency,
+			timezone: meta.timezone,
+			holidays,
+			description: meta.description
+		},
+		version: { ...version, effectiveTo: version.effectiveTo || null },
+		structure,
+		...(expectedRevision === undefined ? {} : { expectedRevision })
+	};
+}
+
+/** Messages under a prefix ("meta.", "version.", "structure."), re-keyed without it. */
+export function issuesUnder(issues: Issue[], prefix: string): Issue[] {
+	return issues
+		.filter((i) => i.path.startsWith(prefix))
+		.map((i) => ({ ...i, path: i.path.slice(prefix.length) }));
+}
+
+/** Reads an uploaded export (our documented JSON shape) into drafts; returns a message when it is not one. */
+export function readExport(
+	text: string
+): { meta: MetaDraft; version: VersionDraft; structure: TariffInput } | string {
+	let data: unknown;
+	try {
+		data = JSON.parse(text);
+	} catch {
+		return 'That file is not valid JSON.';
+	}
+	const d = data as {
+		format?: string;
+		meta?: Record<string, unknown>;
+		version?: Record<string, string>;
+		structure?: TariffInput;
+	};
+	if (!d || typeof d !== 'object' || d.format !== 'runrate-tariff-version' || !d.meta || !d.structure)
+		return 'That file is not a Runrate tariff version (its "format" should be "runrate-tariff-version").';
+	return {
+		meta: metaDraftFrom(d.meta as Parameters<typeof metaDraftFrom>[0]),
+		version: {
+			effectiveFrom: d.version?.effectiveFrom ?? '',
+			effectiveTo: d.version?.effectiveTo ?? '',
+			source: d.version?.source ?? '',
+			checkedOn: d.version?.checkedOn ?? '',
+			changeNote: d.version?.changeNote ?? ''
+		},
+		structure: d.structure
+	};
+}

@@ -1,0 +1,464 @@
+import ExcelJS from 'exceljs';
+import Papa from 'papaparse';
+import { type Tariff, holidaysSchema, parseRequest, tariffSchema, timezoneSchema } from '$lib/calc';
+import { type Bounds, amount } from '$lib/calc/fields';
+import {
+	CUSTOMER_CLASSES,
+	type TariffMeta,
+	type VersionMeta,
+	tariffMetaSchema,
+	versionMetaSchema
+} from '$lib/forms/tariff-meta.schema';
+
+/**
+ * The batch import sheet: one row per tariff version of a flat or tiered tariff, as CSV or as the
+ * first worksheet of an XLSX workbook. Cells are trimmed and otherwise taken as they are; rows are
+ * checked with the same schemas as the editor and the API. Nothing here touches the database.
+ */
+export interface TariffSheetColumn {
+	name: string;
+	/** The header must have the column; a required cell may still be refused when empty. */
+	required: boolean;
+	meaning: string;
+}
+
+export const MAX_SHEET_ROWS = 2000;
+export const MAX_SHEET_BYTES = 5 * 1024 * 1024;
+export const MAX_TIERS = 5;
+
+const column = (name: string, meaning: string, required = false): TariffSheetColumn => ({
+	name,
+	required,
+	meaning
+});
+const tierColumns = Array.from({ length: MAX_TIERS }, (_, i) => [
+	column(
+		`tier${i + 1}_upto_kwh`,
+		`Tier ${i + 1} ends at this many kWh a month; empty on the last tier ("and above").`
+	),
+	column(`tier${i + 1}_per_kwh`, `Rate per kWh within tier ${i + 1}. Fill tiers in order from tier 1.`)
+]).flat();
+
+export const TARIFF_SHEET_COLUMNS: readonly TariffSheetColumn[] = [
+	column('utility', 'The utility that bills the tariff.', true),
+	column('name', 'The tariff’s name, as the utility writes it.', true),
+	column('code', 'The utility’s tariff code, such as R-1.'),
+	column('country', 'Two-letter country code, such as US.', true),
+	column('region', 'State or province code, such as WI.'),
+	column('area', 'Free-text area within the region.'),
+	column('customer_class', `One of: ${CUSTOMER_CLASSES.join(', ')}.`, true),
+	column('currency', 'Three-letter currency code, such as USD.', true),
+	column('timezone', 'IANA time zone, such as America/Chicago.', true),
+	column('holiday_country', 'Country whose public holidays apply; empty for none.'),
+	column('holiday_region', 'State or province whose public holidays apply (with holiday_country).'),
+	column('description', 'Free text shown on the tariff page.'),
+	column('effective_from', 'First day this version applies, as 2027-01-01.', true),
+	column('effective_to', 'Last day it applies; empty while it is in force.'),
+	column('source', 'Where the figures come from: a web address or a document name.', true),
+	column('checked_on', 'When someone last checked the figures against the source, as 2027-01-01.', true),
+	column('change_note', 'What changed from the previous version.'),
+	column('customer_charge_per_month', 'Fixed customer charge per billing month.'),
+	column('customer_charge_per_day', 'Fixed customer charge per day of the billing period.'),
+	column('energy_per_kwh', 'Flat energy rate per kWh. Give this or the tiers, not both.'),
+	...tierColumns,
+	column('rider_label', 'Name of a per-kWh rider, such as Fuel cost adjustment.'),
+	column('rider_per_kwh', 'Rider per kWh; below zero for a credit.'),
+	column('tax_label', 'Name of a percentage tax, such as Sales tax.'),
+	column('tax_percent', 'Tax as a percent of the bill before tax.'),
+	column('minimum_monthly', 'Minimum bill per month before tax.')
+];
+
+const NUMBERS: Record<string, { label: string; bounds: Bounds }> = {
+	customer_charge_per_month: { label: 'Customer charge per month', bounds: { min: 0 } },
+	customer_charge_per_day: { label: 'Customer charge per day', bounds: { min: 0 } },
+	energy_per_kwh: { label: 'Energy per kWh', bounds: { min: 0 } },
+	rider_per_kwh: { label: 'Rider per kWh', bounds: {} },
+	tax_percent: { label: 'Tax percent', bounds: { min: 0 } },
+	minimum_monthly: { label: 'Minimum monthly', bounds: { min: 0 } }
+};
+for (let n = 1; n <= MAX_TIERS; n++) {
+	NUMBERS[`tier${n}_upto_kwh`] = { label: `Tier ${n} up to kWh`, bounds: { above: 0 } };
+	NUMBERS[`tier${n}_per_kwh`] = { label: `Tier ${n} per kWh`, bounds: { min: 0 } };
+}
+
+export interface SheetRow {
+	/** The row number a person sees in the sheet; the header is row 1 when it is the first row. */
+	line: number;
+	meta: TariffMeta;
+	version: VersionMeta;
+	structure: Tariff;
+}
+export interface SheetRowError {
+	line: number;
+	/** A column name, or "row" for the row as a whole. */
+	field: string;
+	message: string;
+}
+export interface SheetResult {
+	rows: SheetRow[];
+	errors: SheetRowError[];
+	sheetErrors: string[];
+}
+
+/** "Row 4, energy_per_kwh: Energy per kWh must be zero or more". */
+export function describeRowError(error: SheetRowError): string {
+	return `Row ${error.line}, ${error.field}: ${error.message}`;
+}
+
+type Grid = { line: number; cells: string[] }[];
+type Read = { grid: Grid } | { error: string };
+
+function readCsv(bytes: Uint8Array): Read {
+	let text: string;
+	try {
+		text = new TextDecoder('utf-8', { fatal: true }).decode(bytes);
+	} catch {
+		return { error: 'The file is not a CSV text file (it is not UTF-8 text)' };
+	}
+	if (text.includes('\0')) return { error: 'The file is not a CSV text file' };
+	const parsed = Papa.parse<string[]>(text, { skipEmptyLines: false });
+	const quote = parsed.errors.find((error) => error.type === 'Quotes');
+	if (quote) return { error: `Row ${(quote.row ?? 0) + 1}: a quoted cell is never closed` };
+	return { grid: parsed.data.map((cells, i) => ({ line: i + 1, cells: cells.map((cell) => cell.trim()) })) };
+}
+
+function cellText(value: ExcelJS.CellValue): string {
+	if (value === null || value === undefined) return '';
+	// Date cells come back as UTC midnight of the date the sheet shows.
+	if (value instanceof Date) return Number.isNaN(value.getTime()) ? '' : value.toISOString().slice(0, 10);
+	if (typeof value !== 'object') return String(value);
+	if ('richText' in value) return value.richText.map((run) => run.text).join('');
+	if ('error' in value) return value.error;
+	if ('formula' in value || 'sharedFormula' in value) return cellText(value.result as ExcelJS.CellValue);
+	if ('text' in value) return cellText(value.text as ExcelJS.CellValue);
+	return '';
+}
+
+async function readXlsx(bytes: Uint8Array): Promise<Read> {
+	const workbook = new ExcelJS.Workbook();
+	try {
+		// exceljs types its argument as an ArrayBuffer; a copy gives exactly the file's bytes.
+		await workbook.xlsx.load(bytes.slice().buffer);
+	} catch {
+		return { error: 'The file is not a readable XLSX workbook' };
+	}
+	const sheet = workbook.worksheets[0];
+	if (!sheet) return { error: 'The workbook has no worksheet' };
+	if (sheet.actualRowCount > MAX_SHEET_ROWS + 1) return { error: tooManyRows(sheet.actualRowCount - 1) };
+	const grid: Grid = [];
+	sheet.eachRow((row, line) => {
+		const cells: string[] = [];
+		row.eachCell((cell, col) => (cells[col - 1] = cellText(cell.value).trim()));
+		grid.push({ line, cells: Array.from(cells, (cell) => cell ?? '') });
+	});
+	return { grid };
+}
+
+const tooManyRows = (count: number) =>
+	`The sheet has ${count} tariff rows; one import can hold at most ${MAX_SHEET_ROWS}`;
+const blank = (cells: string[]) => cells.every((cell) => cell === '');
+
+/** Column name → cell index, or the sheet-level errors of the header. */
+function headerOf(header: string[], body: Grid): { index: Map<string, number> } | { errors: string[] } {
+	const known = new Set(TARIFF_SHEET_COLUMNS.map((c) => c.name));
+	const names = header.map((cell) => cell.trim().toLowerCase());
+	const index = new Map<string, number>();
+	const errors: string[] = [];
+	names.forEach((name, i) => {
+		if (name === '') {
+			const used = body.some((row) => (row.cells[i] ?? '') !== '');
+			if (used) errors.push(`Column ${i + 1} has cells but no name in the header row`);
+		} else if (index.has(name)) errors.push(`Column “${name}” appears more than once`);
+		else index.set(name, i);
+	});
+	const extra = body.find((row) => row.cells.slice(names.length).some((cell) => cell !== ''));
+	if (extra) errors.push(`Row ${extra.line} has more cells than the header row has columns`);
+	const unknown = [...index.keys()].filter((name) => !known.has(name));
+	if (unknown.length) {
+		errors.push(`Unknown columns: ${unknown.join(', ')} (the format lists the columns a sheet can have)`);
+	}
+	const missing = TARIFF_SHEET_COLUMNS.filter((c) => c.required && !index.has(c.name)).map((c) => c.name);
+	if (missing.length) errors.push(`Missing required columns: ${missing.join(', ')}`);
+	return errors.length ? { errors } : { index };
+}
+
+const PLAIN_NUMBER = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
+const COMMA_DECIMAL = /^[+-]?\d+,\d+$/;
+
+type Cell = (name: string) => string;
+type Fail = (field: string, message: string) => void;
+type Issues = { path: string; message: string }[];
+
+function numberReader(cell: Cell, fail: Fail) {
+	return (name: string): number | null => {
+		const raw = cell(name);
+		const spec = NUMBERS[name];
+		if (raw === '' || !spec) return null;
+		if (COMMA_DECIMAL.test(raw)) {
+			fail(name, `${spec.label} must use a dot for decimals, like 0.12 (not 0,12)`);
+		} else if (!PLAIN_NUMBER.test(raw)) {
+			fail(name, `${spec.label} must be a number with a dot for decimals, like 0.12`);
+		} else {
+			const checked = amount(spec.label, spec.bounds).safeParse(Number(raw));
+			if (checked.success) return checked.data;
+			fail(name, checked.error.issues[0]?.message ?? `${spec.label} is not a valid number`);
+		}
+		return null;
+	};
+}
+
+/** The row's holiday rule; undefined when it was refused. */
+function holidayRule(cell: Cell, fail: Fail): TariffMeta['holidays'] | undefined {
+	const country = cell('holiday_country');
+	const region = cell('holiday_region');
+	if (country === '' && region === '') return null;
+	if (country === '') return void fail('holiday_region', 'Give holiday_country together with holiday_region');
+	const parsed = parseRequest(holidaysSchema, region === '' ? { country } : { country, region });
+	if (parsed.success) return parsed.data;
+	for (const issue of parsed.error.issues) {
+		fail(issue.path === 'region' ? 'holiday_region' : 'holiday_country', issue.message);
+	}
+	return undefined;
+}
+
+function tiersOf(cell: Cell, numberAt: (name: string) => number | null, fail: Fail) {
+	const filled: number[] = [];
+	for (let n = 1; n <= MAX_TIERS; n++) {
+		if (cell(`tier${n}_upto_kwh`) !== '' || cell(`tier${n}_per_kwh`) !== '') filled.push(n);
+	}
+	return filled.map((n, i) => {
+		const upto = `tier${n}_upto_kwh`;
+		const last = i === filled.length - 1;
+		if (n !== i + 1) {
+			fail(`tier${n}_per_kwh`, `Tier ${n} follows an empty tier ${i + 1}; fill the tiers in order`);
+		}
+		if (cell(`tier${n}_per_kwh`) === '') fail(`tier${n}_per_kwh`, `Tier ${n} per kWh is required`);
+		if (last && cell(upto) !== '') {
+			fail(upto, `Leave the last tier’s upto_kwh empty: the last tier covers all kWh above the one before`);
+		} else if (!last && cell(upto) === '') {
+			fail(upto, `Tier ${n} up to kWh is required: only the last tier is open-ended`);
+		}
+		return { uptoKwh: numberAt(upto), perKwh: numberAt(`tier${n}_per_kwh`) ?? 0 };
+	});
+}
+
+/** The Tariff input a row describes, and which column each part of it came from. */
+function structureOf(cell: Cell, fail: Fail) {
+	const numberAt = numberReader(cell, fail);
+	const fields = new Map<string, string>([['currency', 'currency']]);
+	const fixedCharges: object[] = [];
+	for (const [name, key] of [
+		['customer_charge_per_month', 'perMonth'],
+		['customer_charge_per_day', 'perDay']
+	] as const) {
+		const value = numberAt(name);
+		if (value === null) continue;
+		fields.set(`fixedCharges.${fixedCharges.length}`, name);
+		fixedCharges.push({ label: 'Customer charge', [key]: value });
+	}
+	const flat = numberAt('energy_per_kwh');
+	const tiers = tiersOf(cell, numberAt, fail);
+	const flatGiven = cell('energy_per_kwh') !== '';
+	if (flatGiven && tiers.length) fail('energy_per_kwh', 'Give energy_per_kwh or tiers, not both');
+	if (!flatGiven && !tiers.length) {
+		fail('energy_per_kwh', 'Give energy_per_kwh for a flat tariff, or tier1_per_kwh and on for a tiered one');
+	}
+	fields.set('energyCharges', 'energy_per_kwh');
+	tiers.forEach((_, i) => {
+		fields.set(`energyCharges.0.tiers.${i}.uptoKwh`, `tier${i + 1}_upto_kwh`);
+		fields.set(`energyCharges.0.tiers.${i}.perKwh`, `tier${i + 1}_per_kwh`);
+	});
+	const labelled = (prefix: 'rider' | 'tax', amountColumn: string, key: string, fallback: string) => {
+		const value = numberAt(amountColumn);
+		const label = cell(`${prefix}_label`);
+		if (label !== '' && cell(amountColumn) === '') {
+			fail(amountColumn, `Give ${amountColumn} with ${prefix}_label`);
+		}
+		const path = prefix === 'rider' ? 'riders' : 'taxes';
+		fields.set(path, amountColumn).set(`${path}.0.label`, `${prefix}_label`);
+		return value === null ? [] : [{ label: label || fallback, [key]: value }];
+	};
+	fields.set('minimumMonthly', 'minimum_monthly');
+	return {
+		fields,
+		input: {
+			currency: cell('currency'),
+			fixedCharges,
+			energyCharges: [
+				flatGiven
+					? { label: 'Energy', type: 'flat', perKwh: flat ?? 0 }
+					: { label: 'Energy', type: 'tiered', tiers }
+			],
+			riders: labelled('rider', 'rider_per_kwh', 'perKwh', 'Rider'),
+			taxes: labelled('tax', 'tax_percent', 'percent', 'Tax'),
+			minimumMonthly: numberAt('minimum_monthly')
+		}
+	};
+}
+
+/** The column a schema issue belongs to: the longest recorded path that contains it. */
+function fieldOfPath(fields: Map<string, string>, path: string): string {
+	let best = '';
+	for (const key of fields.keys()) {
+		if ((path === key || path.startsWith(`${key}.`)) && key.length > best.length) best = key;
+	}
+	return fields.get(best) ?? 'row';
+}
+
+const snake = (path: string) => (path.split('.')[0] ?? '').replace(/[A-Z]/g, (c) => `_${c.toLowerCase()}`);
+const CLASS_MESSAGE = `Customer class must be one of: ${CUSTOMER_CLASSES.join(', ')}`;
+const META_COLUMNS = 'utility name code country region area currency timezone description'.split(' ');
+
+function parseRow(line: number, cell: Cell): { row: SheetRow } | { errors: SheetRowError[] } {
+	const errors: SheetRowError[] = [];
+	const fail: Fail = (field, message) => void errors.push({ line, field, message });
+	const report = (issues: Issues, fieldOf: (path: string) => string) =>
+		issues.forEach((issue) => fail(fieldOf(issue.path), issue.message));
+
+	const holidays = holidayRule(cell, fail);
+	const meta = parseRequest(tariffMetaSchema, {
+		...Object.fromEntries(META_COLUMNS.map((name) => [name, cell(name)])),
+		// "Small commercial" in a sheet means the class small-commercial.
+		customerClass: cell('customer_class').toLowerCase().replace(/\s+/g, '-'),
+		holidays: holidays ?? null
+	});
+	if (!meta.success) {
+		for (const issue of meta.error.issues) {
+			if (issue.path === 'customerClass') fail('customer_class', CLASS_MESSAGE);
+			else fail(snake(issue.path), issue.message);
+		}
+	}
+	// An empty time zone is already reported as required by the metadata schema.
+	const zone = timezoneSchema.safeParse(cell('timezone'));
+	if (cell('timezone') !== '' && !zone.success) fail('timezone', zone.error.issues[0]?.message ?? '');
+	const version = parseRequest(versionMetaSchema, {
+		effectiveFrom: cell('effective_from'),
+		effectiveTo: cell('effective_to') || null,
+		source: cell('source'),
+		checkedOn: cell('checked_on'),
+		changeNote: cell('change_note')
+	});
+	if (!version.success) report(version.error.issues, snake);
+
+	const before = errors.length;
+	const built = structureOf(cell, fail);
+	// Cell errors already say what is wrong; the schema would only repeat them less clearly.
+	const structure = errors.length === before ? parseRequest(tariffSchema, built.input) : undefined;
+	if (structure?.success === false) {
+		report(structure.error.issues, (path) => fieldOfPath(built.fields, path));
+	}
+
+	if (errors.length || !meta.success || !version.success || !structure?.success || holidays === undefined) {
+		return { errors: dedupe(errors) };
+	}
+	return {
+		row: { line, meta: { ...meta.data, holidays }, version: version.data, structure: structure.data }
+	};
+}
+
+// The currency cell feeds both the metadata and the charges; say each problem once.
+const dedupe = (errors: SheetRowError[]) =>
+	errors.filter((e, i) => errors.findIndex((o) => o.field === e.field && o.message === e.message) === i);
+
+const versionKey = ({ meta, version }: SheetRow) =>
+	[meta.utility, meta.code ?? meta.name, version.effectiveFrom].join('|').toLowerCase();
+
+/**
+ * Reads a batch import sheet into checked rows. Bad rows are reported with their row number and
+ * column; a sheet that cannot be read at all (empty, too big, not a sheet, wrong columns) gives
+ * sheet-level errors and no rows. Never throws for bad input.
+ */
+export async function parseTariffSheet(bytes: Uint8Array, kind: 'csv' | 'xlsx'): Promise<SheetResult> {
+	const refuse = (...sheetErrors: string[]): SheetResult => ({ rows: [], errors: [], sheetErrors });
+	if (bytes.byteLength === 0) return refuse('The file is empty');
+	if (bytes.byteLength > MAX_SHEET_BYTES) {
+		return refuse('The file is larger than 5 MB, the most an import sheet can be');
+	}
+	const read = kind === 'csv' ? readCsv(bytes) : await readXlsx(bytes);
+	if ('error' in read) return refuse(read.error);
+	const [header, ...body] = read.grid.filter((row) => !blank(row.cells));
+	if (!header) return refuse('The sheet is empty: it needs a header row and at least one tariff row');
+	if (body.length === 0) return refuse('The sheet has a header row but no tariff rows');
+	if (body.length > MAX_SHEET_ROWS) return refuse(tooManyRows(body.length));
+	const columns = headerOf(header.cells, body);
+	if ('errors' in columns) return refuse(...columns.errors);
+
+	const result: SheetResult = { rows: [], errors: [], sheetErrors: [] };
+	const seen = new Map<string, number>();
+	for (const { line, cells } of body) {
+		const parsed = parseRow(line, (name) => cells[columns.index.get(name) ?? -1] ?? '');
+		if ('errors' in parsed) {
+			result.errors.push(...parsed.errors);
+			continue;
+		}
+		const key = versionKey(parsed.row);
+		const earlier = seen.get(key);
+		if (earlier === undefined) {
+			seen.set(key, line);
+			result.rows.push(parsed.row);
+		} else {
+			const from = parsed.row.version.effectiveFrom;
+			result.errors.push({
+				line,
+				field: 'effective_from',
+				message: `Row ${earlier} already gives this tariff a version from ${from}`
+			});
+		}
+	}
+	return result;
+}
+
+const TEMPLATE_ROWS: Record<string, string>[] = [
+	{
+		utility: 'Demo Valley Power Cooperative (invented)',
+		name: 'Residential service',
+		code: 'DV-R1',
+		country: 'US',
+		region: 'ID',
+		customer_class: 'residential',
+		currency: 'USD',
+		timezone: 'America/Boise',
+		holiday_country: 'US',
+		holiday_region: 'ID',
+		description: 'Invented example: a flat tariff',
+		effective_from: '2027-01-01',
+		source: 'Invented for the template',
+		checked_on: '2026-11-20',
+		customer_charge_per_month: '15.50',
+		energy_per_kwh: '0.124',
+		rider_label: 'Power cost adjustment',
+		rider_per_kwh: '0.011',
+		tax_label: 'Franchise tax',
+		tax_percent: '3'
+	},
+	{
+		utility: 'Northmere Electric (invented)',
+		name: 'Residential inclining block',
+		code: 'NM-R2',
+		country: 'US',
+		region: 'WI',
+		customer_class: 'residential',
+		currency: 'USD',
+		timezone: 'America/Chicago',
+		holiday_country: 'US',
+		holiday_region: 'WI',
+		description: 'Invented example: three inclining tiers and a minimum bill',
+		effective_from: '2027-01-01',
+		source: 'Invented for the template',
+		checked_on: '2026-11-20',
+		change_note: 'Second tier now ends at 1000 kWh',
+		customer_charge_per_day: '0.40',
+		tier1_upto_kwh: '500',
+		tier1_per_kwh: '0.098',
+		tier2_upto_kwh: '1000',
+		tier2_per_kwh: '0.128',
+		tier3_per_kwh: '0.162',
+		minimum_monthly: '18'
+	}
+];
+
+/** A CSV with every column of the format and two invented example rows (one flat, one tiered). */
+export function tariffSheetTemplateCsv(): string {
+	const fields = TARIFF_SHEET_COLUMNS.map((c) => c.name);
+	return `${Papa.unparse({ fields, data: TEMPLATE_ROWS.map((row) => fields.map((name) => row[name] ?? '')) })}\r\n`;
+}

@@ -1,0 +1,79 @@
+import { type AnyTariff, figureText, moneyText } from './tariff-phrases';
+import { type FixedInput, demandText, energySentences, fixedText } from './tariff-sentences';
+import { type Labelled, diffList, energyChanges } from './tariff-diff-parts';
+
+/** "$12.50 → $14.00 a month", or "$12.50 a month → $0.45 a day" when the charge changes kind. */
+function fixedChanges(a: FixedInput, b: FixedInput, ca: string, cb: string): string[] {
+	if (fixedText(a, ca) === fixedText(b, cb)) return [];
+	const monthly = (charge: FixedInput) => charge.perMonth !== undefined;
+	if (monthly(a) !== monthly(b)) return [`${b.label}: ${fixedText(a, ca)} → ${fixedText(b, cb)}`];
+	const amount = (charge: FixedInput) => charge.perMonth ?? charge.perDay ?? 0;
+	const unit = monthly(b) ? 'a month' : 'a day';
+	return [`${b.label}: ${moneyText(amount(a), ca)} → ${moneyText(amount(b), cb)} ${unit}`];
+}
+
+/**
+ * What changed between two versions of a tariff, one plain line per change, for the version
+ * history: "Energy: $0.18 → $0.19 per kWh", "Added rider Fuel adjustment $0.031 per kWh",
+ * "Customer charge removed". Charges are matched by label; no change gives an empty list.
+ */
+export function describeTariffDiff(before: AnyTariff, after: AnyTariff): string[] {
+	const ca = before.currency;
+	const cb = after.currency;
+	const lines: string[] = [];
+	if (ca.trim().toUpperCase() !== cb.trim().toUpperCase()) lines.push(`Currency: ${ca} → ${cb}`);
+	if ((before.holidaysAsWeekends ?? true) !== (after.holidaysAsWeekends ?? true)) {
+		lines.push(
+			(after.holidaysAsWeekends ?? true)
+				? 'Holidays now price like weekends'
+				: 'Holidays now price like the weekday they fall on'
+		);
+	}
+	const removed = (item: Labelled) => `${item.label} removed`;
+	lines.push(
+		...diffList(before.fixedCharges ?? [], after.fixedCharges ?? [], {
+			added: (charge) => `Added fixed charge ${charge.label} ${fixedText(charge, cb)}`,
+			removed,
+			changed: (x, y) => fixedChanges(x, y, ca, cb)
+		}),
+		...diffList(before.energyCharges ?? [], after.energyCharges ?? [], {
+			added: (charge) => `Added energy charge ${energySentences(charge, cb).join(' ')}`,
+			removed,
+			changed: (x, y) => energyChanges(x, y, ca, cb)
+		}),
+		...diffList(before.demandCharges ?? [], after.demandCharges ?? [], {
+			added: (charge) => `Added demand charge ${charge.label} ${demandText(charge, cb)}`,
+			removed,
+			changed: (x, y) => [
+				...(x.perKw !== y.perKw
+					? [`${y.label}: ${moneyText(x.perKw, ca)} → ${moneyText(y.perKw, cb)} per kW`]
+					: []),
+				...(demandText({ ...x, perKw: y.perKw }, cb) !== demandText(y, cb)
+					? [`${y.label}: now ${demandText(y, cb)}`]
+					: [])
+			]
+		}),
+		...diffList(before.riders ?? [], after.riders ?? [], {
+			added: (rider) => `Added rider ${rider.label} ${moneyText(rider.perKwh, cb)} per kWh`,
+			removed,
+			changed: (x, y) =>
+				x.perKwh === y.perKwh
+					? []
+					: [`${y.label}: ${moneyText(x.perKwh, ca)} → ${moneyText(y.perKwh, cb)} per kWh`]
+		}),
+		...diffList(before.taxes ?? [], after.taxes ?? [], {
+			added: (tax) => `Added tax ${tax.label} ${figureText(tax.percent)}% of the bill before tax`,
+			removed,
+			changed: (x, y) =>
+				x.percent === y.percent ? [] : [`${y.label}: ${figureText(x.percent)}% → ${figureText(y.percent)}%`]
+		})
+	);
+	const minA = before.minimumMonthly ?? null;
+	const minB = after.minimumMonthly ?? null;
+	if (minA === null && minB !== null) lines.push(`Added minimum bill ${moneyText(minB, cb)} a month`);
+	else if (minA !== null && minB === null) lines.push('Minimum bill removed');
+	else if (minA !== null && minB !== null && minA !== minB) {
+		lines.push(`Minimum bill: ${moneyText(minA, ca)} → ${moneyText(minB, cb)} a month`);
+	}
+	return lines;
+}

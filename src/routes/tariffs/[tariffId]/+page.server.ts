@@ -1,0 +1,64 @@
+import { fail, redirect } from '@sveltejs/kit';
+import { z } from 'zod';
+import { can, requireRole, requireTariffRead } from '$lib/server/guard';
+import { copyTariff } from '$lib/server/services/tariff.service';
+import { listWorkspacesFor } from '$lib/server/services/workspace.service';
+import { features, typicalMonth } from '$lib/server/tariffs/submission';
+import type { Actions, PageServerLoad } from './$types';
+
+export const load = (async (event) => {
+	const { tariff, versions, role } = await requireTariffRead(event, event.params.tariffId);
+	const user = event.locals.user;
+	const canEdit = tariff.workspaceId ? !!role && can(role, 'editor') : !!user?.isAdmin;
+	const copyTargets = user ? (await listWorkspacesFor(user.id)).filter((w) => w.role !== 'viewer') : [];
+	const latest = versions.at(-1);
+	return {
+		tariff: {
+			id: tariff.id,
+			utility: tariff.utility,
+			name: tariff.name,
+			code: tariff.code,
+			country: tariff.country,
+			region: tariff.region,
+			area: tariff.area,
+			customerClass: tariff.customerClass,
+			currency: tariff.currency,
+			timezone: tariff.timezone,
+			holidays: tariff.holidays,
+			description: tariff.description,
+			scope: tariff.workspaceId ? ('private' as const) : ('public' as const),
+			workspaceId: tariff.workspaceId
+		},
+		versions: versions
+			.map((v) => ({
+				id: v.id,
+				number: v.number,
+				effectiveFrom: v.effectiveFrom,
+				effectiveTo: v.effectiveTo,
+				source: v.source,
+				checkedOn: v.checkedOn,
+				changeNote: v.changeNote,
+				publishedBy: v.publishedByName,
+				publishedAt: v.publishedAt,
+				structure: v.structure
+			}))
+			.reverse(),
+		typicalMonth: typicalMonth(tariff, latest),
+		features: latest ? features(latest.structure) : null,
+		canEdit,
+		copyTargets: copyTargets.map((w) => ({ id: w.id, name: w.name }))
+	};
+}) satisfies PageServerLoad;
+
+export const actions = {
+	copy: async (event) => {
+		const { tariff } = await requireTariffRead(event, event.params.tariffId);
+		const parsed = z
+			.object({ workspaceId: z.uuid({ error: 'Pick a workspace' }) })
+			.safeParse(Object.fromEntries(await event.request.formData()));
+		if (!parsed.success) return fail(400, { errors: { workspaceId: 'Pick a workspace to copy it into.' } });
+		const { user } = await requireRole(event, parsed.data.workspaceId, 'editor');
+		const id = await copyTariff(tariff.id, parsed.data.workspaceId, user);
+		redirect(303, `/tariffs/${id}`);
+	}
+} satisfies Actions;

@@ -1,0 +1,66 @@
+import { error, fail } from '@sveltejs/kit';
+import { requireAdmin, requireRole, requireUser } from '$lib/server/guard';
+import { importTariffs } from '$lib/server/services/tariff.service';
+import { listWorkspacesFor } from '$lib/server/services/workspace.service';
+import { describeRowError, MAX_SHEET_BYTES, parseTariffSheet } from '$lib/server/tariffs/sheet-import';
+import type { Actions, PageServerLoad } from './$types';
+
+async function ownerChoices(user: SessionUser) {
+	const workspaces = (await listWorkspacesFor(user.id)).filter((w) => w.role !== 'viewer');
+	return [
+		...workspaces.map((w) => ({ value: w.id, label: `${w.name} (private)` })),
+		...(user.isAdmin ? [{ value: 'public', label: 'The public library' }] : [])
+	];
+}
+
+export const load = (async (event) => {
+	const owners = await ownerChoices(requireUser(event));
+	if (owners.length === 0) error(403, 'Importing tariffs needs the editor role in a workspace.');
+	return { owners, maxMb: MAX_SHEET_BYTES / 1024 / 1024 };
+}) satisfies PageServerLoad;
+
+export const actions = {
+	default: async (event) => {
+		const user = requireUser(event);
+		const form = await event.request.formData();
+		const owner = String(form.get('owner') ?? '');
+		const dryRun = form.get('intent') === 'check';
+		if (owner === 'public') requireAdmin(event);
+		else if (!(await ownerChoices(user)).some((o) => o.value === owner))
+			return fail(400, { owner, errors: { owner: 'Pick where the tariffs go.' } });
+		else await requireRole(event, owner, 'editor');
+
+		const file = form.get('sheet');
+		if (!(file instanceof File) || file.size === 0)
+			return fail(400, { owner, errors: { sheet: 'Choose a CSV or XLSX file.' } });
+		if (file.size > MAX_SHEET_BYTES)
+			return fail(400, { owner, errors: { sheet: `The file is over ${MAX_SHEET_BYTES / 1024 / 1024} MB.` } });
+		const kind = /\.xlsx$/i.test(file.name) ? 'xlsx' : /\.csv$/i.test(file.name) ? 'csv' : null;
+		if (!kind) return fail(400, { owner, errors: { sheet: 'The file must end in .csv or .xlsx.' } });
+
+		const result = await parseTariffSheet(new Uint8Array(await file.arrayBuffer()), kind);
+		const refused = result.errors.map((e) => ({
+			line: e.line,
+			field: e.field,
+			message: describeRowError(e)
+		}));
+		if (result.sheetErrors.length)
+			return fail(400, { owner, sheetErrors: result.sheetErrors, refused, imported: [] });
+		const summary = result.rows.map((r) => ({
+			line: r.line,
+			name: r.meta.name,
+			utility: r.meta.utility,
+			effectiveFrom: r.version.effectiveFrom
+		}));
+		if (dryRun || result.rows.length === 0)
+			return { owner, checked: true, accepted: summary, refused, imported: [] };
+		const ids = await importTariffs(result.rows, owner === 'public' ? null : owner, user);
+		return {
+			owner,
+			checked: false,
+			accepted: [],
+			refused,
+			imported: summary.map((s, i) => ({ ...s, id: ids[i]! }))
+		};
+	}
+} satisfies Actions;
