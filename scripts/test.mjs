@@ -151,7 +151,11 @@ try {
 			else {
 				const out = join(work, 'playwright.json');
 				const r = await timed(() =>
-					run('npx', ['playwright', 'test'], { env: { ...env, PLAYWRIGHT_JSON_OUTPUT_NAME: out } })
+					run(
+						'npx',
+						['playwright', 'test', ...(process.env.E2E_GREP ? ['--grep', process.env.E2E_GREP] : [])],
+						{ env: { ...env, PLAYWRIGHT_JSON_OUTPUT_NAME: out } }
+					)
 				);
 				if (!existsSync(out)) record('e2e', 0, 1, r.seconds);
 				else {
