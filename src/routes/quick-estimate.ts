@@ -27,23 +27,56 @@ export function nextMonth(now = new Date()): string {
 	return `${d.getFullYear()}-${String(d.getMonth() + 1).padStart(2, '0')}`;
 }
 
-/** The calculation request the public estimate sends: one month, a flat rate and an optional monthly charge. */
-export function toRequest(
-	devices: QuickDevice[],
-	perKwh: number,
-	perMonth: number,
-	month: string,
-	timezone: string
-) {
+/** A library tariff as the public estimate uses it: the version in force, with the tariff's own clock. */
+export type LibraryRate = {
+	name: string;
+	structure: unknown;
+	timezone: string;
+	holidays: unknown;
+	versionNumber: number;
+};
+export type Rate = { kind: 'flat'; perKwh: number; perMonth: number } | ({ kind: 'library' } & LibraryRate);
+
+type ExportedVersion = {
+	meta: { name: string; utility: string; timezone: string; holidays: unknown };
+	version: { number: number; effectiveFrom: string; effectiveTo: string | null };
+	structure: unknown;
+};
+
+/** The version in force on the month's first day (latest effective-from on or before it), as the library rules say. */
+export function libraryRate(versions: ExportedVersion[], month: string): LibraryRate | null {
+	const day = `${month}-01`;
+	const inForce = versions
+		.filter((v) => v.version.effectiveFrom <= day && (!v.version.effectiveTo || v.version.effectiveTo >= day))
+		.sort(
+			(a, b) =>
+				a.version.effectiveFrom.localeCompare(b.version.effectiveFrom) || a.version.number - b.version.number
+		)
+		.at(-1);
+	if (!inForce) return null;
+	return {
+		name: `${inForce.meta.name} (${inForce.meta.utility})`,
+		structure: inForce.structure,
+		timezone: inForce.meta.timezone,
+		holidays: inForce.meta.holidays,
+		versionNumber: inForce.version.number
+	};
+}
+
+/** The calculation request the public estimate sends: one month, on a flat rate or a library tariff. */
+export function toRequest(devices: QuickDevice[], rate: Rate, month: string, timezone: string) {
 	return {
 		period: { start: month, months: 1 },
-		timezone,
-		holidays: null,
-		tariff: {
-			currency: 'USD',
-			fixedCharges: perMonth > 0 ? [{ label: 'Customer charge', perMonth }] : [],
-			energyCharges: [{ label: 'Energy', type: 'flat', perKwh }]
-		},
+		timezone: rate.kind === 'library' ? rate.timezone : timezone,
+		holidays: rate.kind === 'library' ? rate.holidays : null,
+		tariff:
+			rate.kind === 'library'
+				? rate.structure
+				: {
+						currency: 'USD',
+						fixedCharges: rate.perMonth > 0 ? [{ label: 'Customer charge', perMonth: rate.perMonth }] : [],
+						energyCharges: [{ label: 'Energy', type: 'flat', perKwh: rate.perKwh }]
+					},
 		equipment: devices.map((d) => ({
 			name: d.name || 'Device',
 			category: 'other',

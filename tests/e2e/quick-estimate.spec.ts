@@ -46,4 +46,19 @@ test.describe('the public quick estimate', () => {
 		await expect(page.getByText('Fix the highlighted fields to see the estimate.')).toBeVisible();
 		await expect(page.getByLabel('Hours per day')).toHaveValue('30');
 	});
+
+	test('prices the devices on a library tariff, with the version in force that month', async ({ page }) => {
+		await gotoReady(page, '/');
+		await page.getByLabel('Billing month').fill('2026-06');
+		await page.getByRole('radio', { name: 'A tariff from the library' }).check();
+		await page
+			.getByLabel('Library tariff')
+			.selectOption({ label: 'Northmere Electric (invented) — Residential time-of-use' });
+		const result = page.getByRole('region', { name: /Estimate for June 2026/ });
+		await expect(result.getByRole('row', { name: /Fixed and minimum charges/ })).toBeVisible();
+		await result.getByText('The rule used').click();
+		await expect(result).toContainText('Residential time-of-use (Northmere Electric (invented)), version 1');
+		await page.getByLabel('Billing month').fill('2027-06');
+		await expect(page.getByRole('region', { name: /Estimate for June 2027/ })).toContainText('version 2');
+	});
 });
