@@ -4,7 +4,17 @@ import bcrypt from 'bcryptjs';
 import { sql } from 'drizzle-orm';
 import { drizzle } from 'drizzle-orm/postgres-js';
 import postgres from 'postgres';
-import { memberships, tariffs, tariffVersions, users, workspaces } from '../src/lib/server/db/schema';
+import {
+	devices,
+	memberships,
+	scenarios,
+	sites,
+	tariffs,
+	tariffVersions,
+	users,
+	workspaces
+} from '../src/lib/server/db/schema';
+import type { DeviceSpec } from '../src/lib/server/db/schema';
 
 type DemoPeople = {
 	password: string;
@@ -23,10 +33,25 @@ type DemoTariffs = {
 	})[];
 };
 
+type DemoSites = {
+	workspaceId: string;
+	sites: (Omit<typeof sites.$inferInsert, 'workspaceId'> & {
+		id: string;
+		scenarios: {
+			id: string;
+			name: string;
+			description: string;
+			isBaseline: boolean;
+			devices: DeviceSpec[];
+		}[];
+	})[];
+};
+
 const url = process.env.DATABASE_URL;
 if (!url) throw new Error('DATABASE_URL is not set');
 const people: DemoPeople = JSON.parse(readFileSync('data/demo-people.json', 'utf8'));
 const library: DemoTariffs = JSON.parse(readFileSync('data/demo-tariffs.json', 'utf8'));
+const demoSites: DemoSites = JSON.parse(readFileSync('data/demo-sites.json', 'utf8'));
 
 const client = postgres(url, { max: 1, onnotice: () => {} });
 const db = drizzle(client);
@@ -63,10 +88,26 @@ await db.transaction(async (tx) => {
 				.values({ ...v, tariffId: t.id, publishedBy: curator?.id, publishedByName: curator?.name })
 				.onConflictDoNothing();
 	}
+	// Demo sites: created once; what a person changes in them afterwards is theirs to keep.
+	for (const { scenarios: list, ...site } of demoSites.sites) {
+		const created = await tx
+			.insert(sites)
+			.values({ ...site, workspaceId: demoSites.workspaceId })
+			.onConflictDoNothing()
+			.returning({ id: sites.id });
+		if (!created.length) continue;
+		for (const [position, { devices: specs, ...scenario }] of list.entries()) {
+			await tx.insert(scenarios).values({ ...scenario, siteId: site.id, position });
+			if (specs.length)
+				await tx
+					.insert(devices)
+					.values(specs.map((spec, i) => ({ scenarioId: scenario.id, position: i, spec })));
+		}
+	}
 });
 
 const [{ n }] = (await db.execute(sql`select count(*)::int as n from "user"`)) as unknown as [{ n: number }];
 console.log(
-	`[seed] demo data loaded (${people.users.length} demo people, ${people.workspaces.length} workspaces, ${library.tariffs.length} public tariffs; ${n} users in all)`
+	`[seed] demo data loaded (${people.users.length} demo people, ${people.workspaces.length} workspaces, ${library.tariffs.length} public tariffs, ${demoSites.sites.length} sites; ${n} users in all)`
 );
 await client.end();

@@ -1,4 +1,5 @@
-import type { Handle, HandleServerError } from '@sveltejs/kit';
+import type { Handle, HandleServerError, ServerInit } from '@sveltejs/kit';
+import { startJobs } from '$lib/server/jobs';
 import { sequence } from '@sveltejs/kit/hooks';
 import { eq } from 'drizzle-orm';
 import { authHandle } from '$lib/server/auth';
@@ -51,4 +52,10 @@ export const handleError: HandleServerError = ({ error, event, status, message }
 	}
 	if (status !== 404) logger.error({ err: error, path: event.url.pathname }, 'unexpected error');
 	return { message: status === 404 ? 'Not found' : message };
+};
+
+/** Starts the job queue's workers with the server. */
+export const init: ServerInit = async () => {
+	await import('$lib/server/services/tariff-notice.service');
+	await startJobs();
 };

@@ -1,8 +1,9 @@
 import { error, redirect, type RequestEvent } from '@sveltejs/kit';
 import { and, eq } from 'drizzle-orm';
 import { db } from './db';
-import { memberships, workspaces } from './db/schema';
+import { memberships, siteGrants, workspaces } from './db/schema';
 import { findTariff } from './services/tariff.service';
+import { findScenario, findSite, type SiteRow } from './services/site.service';
 
 export type Role = 'owner' | 'editor' | 'viewer';
 const RANK: Record<Role, number> = { viewer: 1, editor: 2, owner: 3 };
@@ -85,4 +86,43 @@ async function memberRole(userId: string, workspaceId: string): Promise<Role | n
 		.from(memberships)
 		.where(and(eq(memberships.workspaceId, workspaceId), eq(memberships.userId, userId)));
 	return row?.role ?? null;
+}
+
+export type SiteAccess = { user: SessionUser; site: SiteRow; role: Role; viaGrant: boolean };
+
+/**
+ * Access to one site: a member of its workspace has their workspace role there; someone the site was
+ * shared with has the grant's role (editor or viewer) for that site only. Anyone else gets 404.
+ */
+export async function requireSiteAccess(
+	event: RequestEvent,
+	siteId: string,
+	needed: Role
+): Promise<SiteAccess> {
+	const user = requireUser(event);
+	if (!UUID.test(siteId)) error(404, 'Not found');
+	const site = await findSite(siteId);
+	if (!site) error(404, 'Not found');
+	const member = await memberRole(user.id, site.workspaceId);
+	let role: Role | null = member;
+	if (!role) {
+		const [grant] = await db
+			.select({ role: siteGrants.role })
+			.from(siteGrants)
+			.where(and(eq(siteGrants.siteId, siteId), eq(siteGrants.userId, user.id)));
+		role = grant?.role ?? null;
+	}
+	if (!role) error(404, 'Not found');
+	if (!can(role, needed)) error(403, `This needs the ${needed} role; you are a ${role} here.`);
+	return { user, site, role, viaGrant: !member };
+}
+
+/** A scenario, through its site's access rule. */
+export async function requireScenarioAccess(event: RequestEvent, scenarioId: string, needed: Role) {
+	requireUser(event);
+	if (!UUID.test(scenarioId)) error(404, 'Not found');
+	const scenario = await findScenario(scenarioId);
+	if (!scenario || scenario.deletedAt) error(404, 'Not found');
+	const access = await requireSiteAccess(event, scenario.siteId, needed);
+	return { ...access, scenario };
 }

@@ -3,6 +3,7 @@ import { parseRequest, type InvalidRequest } from '$lib/calc';
 import { requireAdmin, requireRole, requireTariffWrite } from '../guard';
 import { createTariff, publishVersion, TariffConflict } from '../services/tariff.service';
 import { tariffSubmissionSchema } from './submission';
+import { announceVersion } from '../services/tariff-notice.service';
 
 export type PublishOutcome =
 	| { ok: true; tariffId: string; number: number }
@@ -19,12 +20,13 @@ export async function submitTariff(
 	target: { tariffId: string } | { workspaceId: string | null },
 	body: unknown
 ): Promise<PublishOutcome> {
-	const author =
-		'tariffId' in target
-			? (await requireTariffWrite(event, target.tariffId)).user
-			: target.workspaceId
-				? (await requireRole(event, target.workspaceId, 'editor')).user
-				: requireAdmin(event);
+	const writable = 'tariffId' in target ? await requireTariffWrite(event, target.tariffId) : null;
+	const isPublic = !!writable && !writable.tariff.workspaceId;
+	let author: SessionUser;
+	if (writable) author = writable.user;
+	else if ('workspaceId' in target && target.workspaceId)
+		author = (await requireRole(event, target.workspaceId, 'editor')).user;
+	else author = requireAdmin(event);
 	const parsed = parseRequest(tariffSubmissionSchema, body);
 	if (!parsed.success) return { ok: false, status: 400, invalid: parsed.error };
 	const { meta, version, structure, expectedRevision } = parsed.data;
@@ -51,6 +53,8 @@ export async function submitTariff(
 			{ meta, version, structure },
 			author
 		);
+		// A new public version tells every workspace with a site on it, through the job queue.
+		if (isPublic) await announceVersion({ tariffId: target.tariffId, versionNumber: number });
 		return { ok: true, tariffId: target.tariffId, number };
 	} catch (e) {
 		if (e instanceof TariffConflict)

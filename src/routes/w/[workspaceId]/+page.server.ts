@@ -1,6 +1,7 @@
 import { fail, redirect } from '@sveltejs/kit';
 import { z } from 'zod';
 import { requireRole } from '$lib/server/guard';
+import { recentNotices } from '$lib/server/services/tariff-notice.service';
 import { inviteLimiter, TOO_MANY } from '$lib/server/rate-limit';
 import {
 	changeRole,
@@ -21,7 +22,13 @@ export const load = (async (event) => {
 	const { workspace, role } = await requireRole(event, event.params.workspaceId, 'viewer');
 	return {
 		members: await listMembers(workspace.id),
-		invitations: role === 'owner' ? await listPendingInvitations(workspace.id) : []
+		invitations: role === 'owner' ? await listPendingInvitations(workspace.id) : [],
+		notices: (await recentNotices(workspace.id)).map((n) => ({
+			id: n.id,
+			title: n.title,
+			body: n.body,
+			createdAt: n.createdAt.toISOString()
+		}))
 	};
 }) satisfies PageServerLoad;
 

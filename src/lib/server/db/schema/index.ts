@@ -1,3 +1,4 @@
 export * from './auth';
 export * from './workspace';
 export * from './tariff';
+export * from './site';

@@ -35,6 +35,8 @@ export const invitations = pgTable(
 			.references(() => workspaces.id, { onDelete: 'cascade' }),
 		email: text('email').notNull(),
 		role: roleEnum('role').notNull(),
+		/** Set for a site-level share: the invitee gets that site only, as editor or viewer. */
+		siteId: uuid('site_id'),
 		tokenHash: text('token_hash').notNull().unique(),
 		invitedBy: text('invited_by').references(() => users.id, { onDelete: 'set null' }),
 		expiresAt: timestamp('expires_at', { mode: 'date' }).notNull(),
@@ -43,4 +45,21 @@ export const invitations = pgTable(
 		createdAt: timestamp('created_at', { mode: 'date' }).notNull().defaultNow()
 	},
 	(i) => [index('invitation_workspace_idx').on(i.workspaceId)]
+);
+
+/** An in-app notice to a workspace (the same news also goes out by e-mail). */
+export const notices = pgTable(
+	'notice',
+	{
+		id: uuid('id').primaryKey().defaultRandom(),
+		workspaceId: uuid('workspace_id')
+			.notNull()
+			.references(() => workspaces.id, { onDelete: 'cascade' }),
+		/** Makes a retried job idempotent: the same news is recorded once. */
+		dedupeKey: text('dedupe_key').notNull().unique(),
+		title: text('title').notNull(),
+		body: text('body').notNull(),
+		createdAt: timestamp('created_at', { mode: 'date' }).notNull().defaultNow()
+	},
+	(n) => [index('notice_workspace_idx').on(n.workspaceId, n.createdAt)]
 );

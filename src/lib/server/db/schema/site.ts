@@ -1,0 +1,125 @@
+import {
+	boolean,
+	index,
+	integer,
+	jsonb,
+	pgEnum,
+	pgTable,
+	primaryKey,
+	text,
+	timestamp,
+	uuid
+} from 'drizzle-orm/pg-core';
+import type { EquipmentInput } from '$lib/calc';
+import { users } from './auth';
+import { tariffs } from './tariff';
+import { workspaces } from './workspace';
+
+/** A grower's place: a farm, a school garden, a greenhouse. `revision` guards against stale writes. */
+export const sites = pgTable(
+	'site',
+	{
+		id: uuid('id').primaryKey().defaultRandom(),
+		workspaceId: uuid('workspace_id')
+			.notNull()
+			.references(() => workspaces.id, { onDelete: 'cascade' }),
+		name: text('name').notNull(),
+		address: text('address'),
+		timezone: text('timezone').notNull(),
+		country: text('country').notNull(),
+		region: text('region'),
+		supplyVolts: integer('supply_volts'),
+		supplyPhases: integer('supply_phases'),
+		tariffId: uuid('tariff_id').references(() => tariffs.id, { onDelete: 'set null' }),
+		tariffVersion: integer('tariff_version'),
+		currency: text('currency').notNull(),
+		notes: text('notes'),
+		revision: integer('revision').notNull().default(1),
+		archivedAt: timestamp('archived_at', { mode: 'date' }),
+		createdAt: timestamp('created_at', { mode: 'date' }).notNull().defaultNow(),
+		updatedAt: timestamp('updated_at', { mode: 'date' }).notNull().defaultNow()
+	},
+	(s) => [index('site_workspace_idx').on(s.workspaceId), index('site_tariff_idx').on(s.tariffId)]
+);
+
+/** One way of equipping a site. Exactly one live scenario per site is the baseline. */
+export const scenarios = pgTable(
+	'scenario',
+	{
+		id: uuid('id').primaryKey().defaultRandom(),
+		siteId: uuid('site_id')
+			.notNull()
+			.references(() => sites.id, { onDelete: 'cascade' }),
+		name: text('name').notNull(),
+		description: text('description'),
+		isBaseline: boolean('is_baseline').notNull().default(false),
+		tariffId: uuid('tariff_id').references(() => tariffs.id, { onDelete: 'set null' }),
+		tariffVersion: integer('tariff_version'),
+		position: integer('position').notNull().default(0),
+		/** Bumped by every change to the scenario or its equipment: the editor's concurrency token. */
+		revision: integer('revision').notNull().default(1),
+		archivedAt: timestamp('archived_at', { mode: 'date' }),
+		/** Deleted scenarios stay for an undo window before they are purged. */
+		deletedAt: timestamp('deleted_at', { mode: 'date' }),
+		createdAt: timestamp('created_at', { mode: 'date' }).notNull().defaultNow(),
+		updatedAt: timestamp('updated_at', { mode: 'date' }).notNull().defaultNow()
+	},
+	(s) => [index('scenario_site_idx').on(s.siteId)]
+);
+
+export type DeviceSpec = EquipmentInput & { inWater?: boolean; outdoor?: boolean; notes?: string };
+
+/** A row of a scenario's equipment list: the core's Equipment shape plus the safety flags. */
+export const devices = pgTable(
+	'device',
+	{
+		id: uuid('id').primaryKey().defaultRandom(),
+		scenarioId: uuid('scenario_id')
+			.notNull()
+			.references(() => scenarios.id, { onDelete: 'cascade' }),
+		position: integer('position').notNull(),
+		spec: jsonb('spec').$type<DeviceSpec>().notNull(),
+		createdAt: timestamp('created_at', { mode: 'date' }).notNull().defaultNow(),
+		updatedAt: timestamp('updated_at', { mode: 'date' }).notNull().defaultNow()
+	},
+	(d) => [index('device_scenario_idx').on(d.scenarioId, d.position)]
+);
+
+export const siteRoleEnum = pgEnum('site_role', ['editor', 'viewer']);
+
+/** A site shared with someone outside the workspace (an adviser's client, say), for that site only. */
+export const siteGrants = pgTable(
+	'site_grant',
+	{
+		siteId: uuid('site_id')
+			.notNull()
+			.references(() => sites.id, { onDelete: 'cascade' }),
+		userId: text('user_id')
+			.notNull()
+			.references(() => users.id, { onDelete: 'cascade' }),
+		role: siteRoleEnum('role').notNull(),
+		createdAt: timestamp('created_at', { mode: 'date' }).notNull().defaultNow()
+	},
+	(g) => [primaryKey({ columns: [g.siteId, g.userId] }), index('site_grant_user_idx').on(g.userId)]
+);
+
+/** Who changed what, when: every change to a site, scenario or device. */
+export const auditEvents = pgTable(
+	'audit_event',
+	{
+		id: uuid('id').primaryKey().defaultRandom(),
+		workspaceId: uuid('workspace_id')
+			.notNull()
+			.references(() => workspaces.id, { onDelete: 'cascade' }),
+		siteId: uuid('site_id').references(() => sites.id, { onDelete: 'cascade' }),
+		userId: text('user_id').references(() => users.id, { onDelete: 'set null' }),
+		userName: text('user_name'),
+		entity: text('entity', { enum: ['site', 'scenario', 'device'] }).notNull(),
+		entityId: uuid('entity_id').notNull(),
+		action: text('action').notNull(),
+		summary: text('summary').notNull(),
+		changes: jsonb('changes').$type<Record<string, { from: unknown; to: unknown }>>(),
+		createdAt: timestamp('created_at', { mode: 'date' }).notNull().defaultNow()
+	},
+	(a) => [index('audit_site_idx').on(a.siteId, a.createdAt)]
+);

@@ -1,0 +1,119 @@
+import { and, desc, eq, isNull, or } from 'drizzle-orm';
+import { env } from '$env/dynamic/private';
+import { db } from '../db';
+import {
+	memberships,
+	notices,
+	scenarios,
+	sites,
+	tariffs,
+	tariffVersions,
+	users,
+	workspaces
+} from '../db/schema';
+import { defineJob } from '../jobs';
+import { sendMail } from '../mail';
+import { priceScenario } from './results.service';
+import { listDevices, listScenarios } from './site.service';
+
+type Published = { tariffId: string; versionNumber: number };
+type ForWorkspace = Published & { workspaceId: string };
+
+/** The workspaces with a site (or a scenario's override) on this tariff. */
+async function affectedWorkspaces(tariffId: string): Promise<string[]> {
+	const rows = await db
+		.selectDistinct({ workspaceId: sites.workspaceId })
+		.from(sites)
+		.leftJoin(scenarios, eq(scenarios.siteId, sites.id))
+		.where(and(isNull(sites.archivedAt), or(eq(sites.tariffId, tariffId), eq(scenarios.tariffId, tariffId))));
+	return rows.map((r) => r.workspaceId);
+}
+
+/** Per affected site, the baseline's annual cost on the previous version and on the new one, over the new version's first year. */
+export async function costChanges(job: ForWorkspace) {
+	const [tariff] = await db.select().from(tariffs).where(eq(tariffs.id, job.tariffId));
+	const versions = await db.select().from(tariffVersions).where(eq(tariffVersions.tariffId, job.tariffId));
+	const now = versions.find((v) => v.number === job.versionNumber);
+	const before = versions.filter((v) => v.number < job.versionNumber).sort((a, b) => b.number - a.number)[0];
+	if (!tariff || !now || !before) return null;
+	const year = Number(now.effectiveFrom.slice(0, 4));
+	const affected = await db
+		.select()
+		.from(sites)
+		.where(and(eq(sites.workspaceId, job.workspaceId), isNull(sites.archivedAt)));
+	const lines = [];
+	for (const site of affected) {
+		const baseline = (await listScenarios(site.id)).find(
+			(s) => s.isBaseline && !s.deletedAt && !s.archivedAt
+		);
+		if (!baseline || (baseline.tariffId ?? site.tariffId) !== job.tariffId) continue;
+		const specs = (await listDevices(baseline.id)).map((d) => d.spec);
+		const period = { start: `${year}-01`, months: 12 };
+		const [old, next] = await Promise.all([
+			priceScenario(site, baseline, specs, period, before.number),
+			priceScenario(site, baseline, specs, period, now.number)
+		]);
+		if (!old.ok || !next.ok) continue;
+		lines.push({
+			site: site.name,
+			siteId: site.id,
+			currency: site.currency,
+			before: old.result.totals.cost,
+			after: next.result.totals.cost
+		});
+	}
+	return { tariff, now, before, year, lines };
+}
+
+const money = (n: number, currency: string) => n.toLocaleString('en-US', { style: 'currency', currency });
+
+const perWorkspace = defineJob<ForWorkspace>('tariff-version-notice', async (job) => {
+	const changes = await costChanges(job);
+	if (!changes || changes.lines.length === 0) return;
+	const [ws] = await db.select().from(workspaces).where(eq(workspaces.id, job.workspaceId));
+	const owners = await db
+		.select({ email: users.email })
+		.from(memberships)
+		.innerJoin(users, eq(users.id, memberships.userId))
+		.where(and(eq(memberships.workspaceId, job.workspaceId), eq(memberships.role, 'owner')));
+	const { tariff, now, year, lines } = changes;
+	const title = `${tariff.utility} published version ${now.number} of ${tariff.name}, in force from ${now.effectiveFrom}`;
+	const body = [
+		`What the baseline of each of your sites on this tariff would cost in ${year}, on the previous version and on the new one:`,
+		...lines.map((l) => {
+			const delta = l.after - l.before;
+			return `- ${l.site}: ${money(l.before, l.currency)} → ${money(l.after, l.currency)} a year (${delta >= 0 ? '+' : '−'}${money(Math.abs(delta), l.currency)})`;
+		}),
+		now.changeNote ? `\nThe curator's note: ${now.changeNote}` : '',
+		'\nEstimates, not bills.'
+	].join('\n');
+	const origin = env.ORIGIN ?? 'http://127.0.0.1:3000';
+	for (const owner of owners)
+		await sendMail({
+			to: owner.email,
+			subject: `Tariff change: ${tariff.name} (${ws?.name ?? 'your workspace'})`,
+			text: `${title}.\n\n${body}\n\nThe tariff: ${origin}/tariffs/${tariff.id}\n`
+		});
+	// Recorded after the mail went out: a retried job sends again rather than silently dropping the e-mail.
+	await db
+		.insert(notices)
+		.values({ workspaceId: job.workspaceId, dedupeKey: `${now.id}:${job.workspaceId}`, title, body })
+		.onConflictDoNothing();
+});
+
+const fanOut = defineJob<Published>('tariff-version-published', async (job) => {
+	for (const workspaceId of await affectedWorkspaces(job.tariffId))
+		await perWorkspace.send({ ...job, workspaceId });
+});
+
+/** Queues the notices of a new public version; returns at once, the queue does the work (and retries it). */
+export const announceVersion = (job: Published) => fanOut.send(job);
+
+export async function recentNotices(workspaceId: string, limit = 10) {
+	return db
+		.select()
+		.from(notices)
+		.where(eq(notices.workspaceId, workspaceId))
+		.orderBy(desc(notices.createdAt))
+		.limit(limit);
+}

@@ -1,0 +1,45 @@
+import { json } from '@sveltejs/kit';
+import { parseRequest } from '$lib/calc';
+import { apiError, readJsonBody } from '$lib/server/api';
+import { requireScenarioAccess } from '$lib/server/guard';
+import { listDevices } from '$lib/server/services/site.service';
+import { priceScenario } from '$lib/server/services/results.service';
+import { previewSchema } from '$lib/server/sites/device-specs';
+import type { RequestHandler } from './$types';
+
+const yearPeriod = () => ({ start: `${new Date().getUTCFullYear()}-01`, months: 12 });
+
+function answer(priced: Awaited<ReturnType<typeof priceScenario>>) {
+	if (priced.ok)
+		return json(
+			{ ...priced.result, tariff: priced.tariff },
+			{ headers: { 'Cache-Control': 'private, no-store' } }
+		);
+	if (priced.invalid) return json({ ...priced.invalid, message: priced.message }, { status: 400 });
+	return apiError(409, priced.reason === 'no-tariff' ? 'no_tariff' : 'not_priceable', priced.message);
+}
+
+/** GET — the calculation response for the stored scenario over the 12 months of this year. */
+export const GET: RequestHandler = async (event) => {
+	const { site, scenario } = await requireScenarioAccess(event, event.params.scenarioId, 'viewer');
+	const devices = await listDevices(scenario.id);
+	return answer(
+		await priceScenario(
+			site,
+			scenario,
+			devices.map((d) => d.spec),
+			yearPeriod()
+		)
+	);
+};
+
+/** POST `{ devices }` — the same, for an edited list not yet saved (the page's live results). */
+export const POST: RequestHandler = async (event) => {
+	const { site, scenario } = await requireScenarioAccess(event, event.params.scenarioId, 'viewer');
+	const read = await readJsonBody(event);
+	if (!read.ok) return read.response;
+	const parsed = parseRequest(previewSchema, read.body);
+	if (!parsed.success)
+		return json({ ...parsed.error, message: 'Some fields need attention.' }, { status: 400 });
+	return answer(await priceScenario(site, scenario, parsed.data.devices, yearPeriod()));
+};

@@ -1,0 +1,47 @@
+import { json } from '@sveltejs/kit';
+import { z } from 'zod';
+import { holidaysSchema, timezoneSchema } from '$lib/calc';
+import { apiError, readJsonBody } from '$lib/server/api';
+import { requireRole } from '$lib/server/guard';
+import { createSite, listSites } from '$lib/server/services/site.service';
+import { siteSchema } from '$lib/forms/site.schema';
+import type { RequestHandler } from './$types';
+
+const issuesOf = (error: z.ZodError) =>
+	error.issues.map((i) => ({ path: i.path.join('.'), message: i.message }));
+
+/** GET /api/v1/sites?workspaceId=… — the workspace's sites. */
+export const GET: RequestHandler = async (event) => {
+	const id = event.url.searchParams.get('workspaceId') ?? '';
+	const { workspace } = await requireRole(event, id, 'viewer');
+	const sites = await listSites(workspace.id);
+	return json(
+		{ sites: sites.map(({ revision, ...s }) => ({ ...s, revision })) },
+		{ headers: { 'Cache-Control': 'private, no-store' } }
+	);
+};
+
+/** POST /api/v1/sites `{ workspaceId, …site }` — creates the site with an empty baseline scenario. */
+export const POST: RequestHandler = async (event) => {
+	const read = await readJsonBody(event);
+	if (!read.ok) return read.response;
+	const body = read.body as Record<string, unknown>;
+	const { workspace, user } = await requireRole(event, String(body?.workspaceId ?? ''), 'editor');
+	const parsed = siteSchema
+		.extend({ timezone: timezoneSchema })
+		.superRefine((s, ctx) => {
+			if (
+				!holidaysSchema.safeParse({ country: s.country, ...(s.region ? { region: s.region } : {}) }).success
+			)
+				ctx.addIssue({
+					code: 'custom',
+					path: [s.region ? 'region' : 'country'],
+					message: 'No public-holiday calendar for this country or region'
+				});
+		})
+		.safeParse(body);
+	if (!parsed.success)
+		return apiError(400, 'invalid_request', 'Some fields need attention.', issuesOf(parsed.error));
+	const id = await createSite(workspace.id, parsed.data, user);
+	return json({ id }, { status: 201, headers: { Location: `/api/v1/sites/${id}` } });
+};

@@ -1,0 +1,119 @@
+import { fail, redirect } from '@sveltejs/kit';
+import { z } from 'zod';
+import { requireSiteAccess } from '$lib/server/guard';
+import { siteTrail } from '$lib/server/services/audit.service';
+import { findTariff } from '$lib/server/services/tariff.service';
+import {
+	changeScenario,
+	createScenario,
+	listDevices,
+	listScenarios,
+	UNDO_MS
+} from '$lib/server/services/site.service';
+import { priceScenario } from '$lib/server/services/results.service';
+import { scenarioSchema } from '$lib/forms/site.schema';
+import { fieldErrors, keepValues } from '$lib/forms/errors';
+import { hasMainsInWater } from '$lib/cautions';
+import type { Actions, PageServerLoad } from './$types';
+
+export const load = (async (event) => {
+	const { site } = await requireSiteAccess(event, event.params.siteId, 'viewer');
+	const year = new Date().getUTCFullYear();
+	const all = await listScenarios(site.id);
+	const undoAfter = Date.now() - UNDO_MS;
+	const rows = await Promise.all(
+		all
+			.filter((s) => !s.deletedAt || s.deletedAt.getTime() > undoAfter)
+			.map(async (s) => {
+				const devices = await listDevices(s.id);
+				const priced = s.deletedAt
+					? null
+					: await priceScenario(
+							site,
+							s,
+							devices.map((d) => d.spec),
+							{ start: `${year}-01`, months: 12 }
+						);
+				return {
+					id: s.id,
+					name: s.name,
+					description: s.description,
+					isBaseline: s.isBaseline,
+					archived: !!s.archivedAt,
+					deleted: !!s.deletedAt,
+					deviceCount: devices.length,
+					caution: hasMainsInWater(devices.map((d) => d.spec)),
+					annual: priced?.ok ? { cost: priced.result.totals.cost, kwh: priced.result.totals.kwh } : null,
+					problem: priced && !priced.ok ? priced.message : null
+				};
+			})
+	);
+	const tariff = site.tariffId ? await findTariff(site.tariffId) : null;
+	return {
+		scenarios: rows,
+		year,
+		tariff: tariff
+			? { id: tariff.tariff.id, name: tariff.tariff.name, utility: tariff.tariff.utility }
+			: null,
+		trail: (await siteTrail(site.id, 50)).map((e) => ({ ...e, createdAt: e.createdAt.toISOString() }))
+	};
+}) satisfies PageServerLoad;
+
+const idSchema = z.object({ scenarioId: z.uuid() });
+
+/** Every scenario action: the editor role on this site, a scenario of this site. */
+async function scenarioAction(event: Parameters<Actions[string]>[0]) {
+	const access = await requireSiteAccess(event, event.params.siteId!, 'editor');
+	const form = await event.request.formData();
+	const parsed = idSchema.safeParse(Object.fromEntries(form));
+	const scenario = parsed.success
+		? (await listScenarios(access.site.id)).find((s) => s.id === parsed.data.scenarioId)
+		: undefined;
+	return { ...access, form, scenario };
+}
+
+export const actions = {
+	create: async (event) => {
+		const { site, user } = await requireSiteAccess(event, event.params.siteId, 'editor');
+		const form = await event.request.formData();
+		const parsed = scenarioSchema.safeParse(Object.fromEntries(form));
+		if (!parsed.success)
+			return fail(400, { action: 'create', values: keepValues(form), errors: fieldErrors(parsed.error) });
+		const from = String(form.get('fromId') ?? '');
+		const scenarios = await listScenarios(site.id);
+		if (from && !scenarios.some((s) => s.id === from))
+			return fail(400, {
+				action: 'create',
+				values: keepValues(form),
+				errors: { fromId: 'Pick a scenario of this site' }
+			});
+		const id = await createScenario(site, parsed.data, from || null, user);
+		redirect(303, `/sites/${site.id}/scenarios/${id}`);
+	},
+	baseline: async (event) => {
+		const { site, user, scenario } = await scenarioAction(event);
+		if (!scenario || scenario.deletedAt || scenario.archivedAt)
+			return fail(400, { action: 'baseline', errors: { form: 'Pick a live scenario of this site.' } });
+		await changeScenario(site, scenario, { kind: 'baseline' }, user);
+		return { action: 'baseline', ok: true };
+	},
+	archive: async (event) => {
+		const { site, user, scenario, form } = await scenarioAction(event);
+		if (!scenario) return fail(400, { action: 'archive', errors: { form: 'Pick a scenario of this site.' } });
+		await changeScenario(site, scenario, { kind: form.get('undo') ? 'unarchive' : 'archive' }, user);
+		return { action: 'archive', ok: true };
+	},
+	delete: async (event) => {
+		const { site, user, scenario, form } = await scenarioAction(event);
+		if (!scenario) return fail(400, { action: 'delete', errors: { form: 'Pick a scenario of this site.' } });
+		if (!form.get('undo') && form.get('confirm') !== 'yes')
+			return fail(400, { action: 'delete', errors: { form: 'Confirm the deletion.' } });
+		await changeScenario(site, scenario, { kind: form.get('undo') ? 'restore' : 'delete' }, user);
+		return {
+			action: 'delete',
+			ok: true,
+			undoable: !form.get('undo') ? scenario.id : null,
+			name: scenario.name
+		};
+	}
+} satisfies Actions;

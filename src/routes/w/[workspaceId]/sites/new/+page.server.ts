@@ -1,0 +1,20 @@
+import { redirect } from '@sveltejs/kit';
+import { requireRole } from '$lib/server/guard';
+import { createSite } from '$lib/server/services/site.service';
+import { readSiteForm, tariffChoices } from '$lib/server/sites/site-form';
+import type { Actions, PageServerLoad } from './$types';
+
+export const load = (async (event) => {
+	const { workspace } = await requireRole(event, event.params.workspaceId, 'editor');
+	return { tariffs: await tariffChoices(workspace.id) };
+}) satisfies PageServerLoad;
+
+export const actions = {
+	default: async (event) => {
+		const { workspace, user } = await requireRole(event, event.params.workspaceId, 'editor');
+		const read = await readSiteForm(event, workspace.id);
+		if (!read.ok) return read.failure;
+		const id = await createSite(workspace.id, read.input, user);
+		redirect(303, `/sites/${id}`);
+	}
+} satisfies Actions;
