@@ -17,6 +17,12 @@ const publicTariff = (
 	JSON.parse(readFileSync('data/demo-tariffs.json', 'utf8')) as { tariffs: { id: string }[] }
 ).tariffs[0]!.id;
 const ws = `/w/${DEMO_WS.id}`;
+const demoSites = JSON.parse(readFileSync('data/demo-sites.json', 'utf8')) as {
+	sites: { id: string; scenarios: { id: string }[] }[];
+};
+const SITE = demoSites.sites[0]!.id;
+const SCENARIO = demoSites.sites[0]!.scenarios[0]!.id;
+const OTHER_SITE = demoSites.sites[1]!.id;
 let privateTariff = '';
 
 type Route = {
@@ -100,6 +106,79 @@ const routes: Route[] = [
 		json: { workspaceId: null },
 		expect: [401, 403, 403, 403, 403, 400]
 	},
+	// Sites, scenarios and equipment (a demo site of the owner's workspace).
+	{ method: 'GET', path: () => `${ws}/sites`, expect: [303, 200, 200, 200, 404, 404] },
+	{ method: 'GET', path: () => `${ws}/sites/new`, expect: [303, 403, 200, 200, 404, 404] },
+	{
+		method: 'POST',
+		path: () => `${ws}/sites/new`,
+		form: { name: '' },
+		expect: [401, 403, 400, 400, 404, 404]
+	},
+	{ method: 'GET', path: () => `/sites/${SITE}`, expect: [303, 200, 200, 200, 404, 404] },
+	{ method: 'GET', path: () => `/sites/${SITE}/edit`, expect: [303, 403, 200, 200, 404, 404] },
+	{
+		method: 'POST',
+		path: () => `/sites/${SITE}/edit`,
+		form: { name: '' },
+		expect: [401, 403, 400, 400, 404, 404]
+	},
+	{
+		method: 'GET',
+		path: () => `/sites/${SITE}/scenarios/${SCENARIO}`,
+		expect: [303, 200, 200, 200, 404, 404]
+	},
+	{
+		method: 'GET',
+		path: () => `/sites/${OTHER_SITE}/scenarios/${SCENARIO}`,
+		expect: [303, 404, 404, 404, 404, 404]
+	},
+	...['create', 'baseline', 'archive', 'delete'].map((action) => ({
+		method: 'POST' as const,
+		path: () => `/sites/${SITE}?/${action}`,
+		form: { name: '', scenarioId: 'x' },
+		expect: [401, 403, 400, 400, 404, 404]
+	})),
+	{
+		method: 'GET',
+		path: () => `/api/v1/sites?workspaceId=${DEMO_WS.id}`,
+		expect: [401, 200, 200, 200, 404, 404]
+	},
+	{
+		method: 'POST',
+		path: () => '/api/v1/sites',
+		json: { workspaceId: DEMO_WS.id },
+		expect: [401, 403, 400, 400, 404, 404]
+	},
+	{ method: 'GET', path: () => `/api/v1/sites/${SITE}/scenarios`, expect: [401, 200, 200, 200, 404, 404] },
+	{
+		method: 'POST',
+		path: () => `/api/v1/sites/${SITE}/scenarios`,
+		json: {},
+		expect: [401, 403, 400, 400, 404, 404]
+	},
+	{
+		method: 'GET',
+		path: () => `/api/v1/scenarios/${SCENARIO}/equipment`,
+		expect: [401, 200, 200, 200, 404, 404]
+	},
+	{
+		method: 'PUT',
+		path: () => `/api/v1/scenarios/${SCENARIO}/equipment`,
+		json: {},
+		expect: [401, 403, 400, 400, 404, 404]
+	},
+	{
+		method: 'GET',
+		path: () => `/api/v1/scenarios/${SCENARIO}/results`,
+		expect: [401, 200, 200, 200, 404, 404]
+	},
+	{
+		method: 'POST',
+		path: () => `/api/v1/scenarios/${SCENARIO}/results`,
+		json: {},
+		expect: [401, 400, 400, 400, 404, 404]
+	},
 	{
 		method: 'POST',
 		path: () => `/tariffs/${privateTariff}?/copy`,
@@ -167,10 +246,14 @@ for (const [column, who] of WHO.entries()) {
 							})
 						: await request.fetch(path, { method: route.method, data: route.json, maxRedirects: 0 });
 			expect([route.expect[column]], `${who} ${route.method} ${path}`).toContain(await effectiveStatus(res));
-			if (who === 'outsider' && (path.startsWith(ws) || path.includes(privateTariff))) {
+			if (
+				who === 'outsider' &&
+				(path.startsWith(ws) || path.includes(privateTariff) || path.includes(SITE))
+			) {
 				const text = await res.text();
 				expect(text).not.toContain(DEMO_WS.name);
 				expect(text).not.toContain('Private matrix tariff');
+				expect(text).not.toContain('Alder Creek');
 			}
 		}
 	});

@@ -1,0 +1,115 @@
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import {
+	numberText,
+	parseNumber,
+	powerEcho,
+	powerForm,
+	switchPower,
+	toggleMonth,
+	typedWatts
+} from './device-fields';
+
+// Power figures follow P = V × I × PF (single phase) and P = √3 × V × I × PF (balanced three phase,
+// line-to-line volts), the usual handbook power formulas; the figures are invented examples.
+
+describe('the power shown beside what was typed', () => {
+	it.each<[string, object, string]>([
+		['amps × volts as watts', { amps: 0.9, volts: 120 }, '≈ 108 W'],
+		['with a motor power factor', { amps: 1, volts: 120, powerFactor: 0.8 }, '≈ 96 W'],
+		['three phase, line-to-line volts', { amps: 10, volts: 230, powerFactor: 0.8, phases: 3 }, '≈ 3,187 W'],
+		['a small load with a decimal', { amps: 0.05, volts: 120 }, '≈ 6 W'],
+		['watts as amps at the supply voltage', { watts: 108 }, '0.9 A at 120 V'],
+		['watts with two decimals of amps', { watts: 100 }, '0.83 A at 120 V']
+	])('shows %s', (_situation, power, text) => {
+		expect(powerEcho(power)).toBe(text);
+	});
+
+	it('uses the site supply voltage for the amps of a watts entry', () => {
+		expect(powerEcho({ watts: 460 }, 230)).toBe('2 A at 230 V');
+	});
+
+	it('shows nothing while a needed figure is missing', () => {
+		expect(powerEcho({ amps: 2 })).toBe('');
+		expect(powerEcho({ watts: undefined })).toBe('');
+		expect(powerEcho(undefined)).toBe('');
+		expect(typedWatts({ amps: 1, volts: 120, powerFactor: undefined })).toBe(120);
+	});
+
+	it('tells the two forms apart by the fields present', () => {
+		expect(powerForm({ watts: 5 })).toBe('watts');
+		expect(powerForm({ amps: undefined, volts: 120 })).toBe('amps');
+		expect(powerForm({})).toBe('watts');
+		expect(powerForm(null)).toBe('watts');
+	});
+});
+
+describe('switching the power form', () => {
+	it('turns watts into amps at the supply voltage, and back', () => {
+		expect(switchPower({ watts: 240 }, 'amps')).toEqual({ amps: 2, volts: 120, powerFactor: 1, phases: 1 });
+		expect(switchPower({ amps: 2, volts: 120, powerFactor: 0.5 }, 'watts')).toEqual({ watts: 120 });
+	});
+
+	it('starts from zero when nothing usable was typed', () => {
+		expect(switchPower({ watts: undefined }, 'amps')).toEqual({
+			amps: 0,
+			volts: 120,
+			powerFactor: 1,
+			phases: 1
+		});
+		expect(switchPower({ amps: 3 }, 'watts')).toEqual({ watts: 0 });
+	});
+});
+
+describe('a number box', () => {
+	it('writes the number typed', () => {
+		expect(parseNumber(' 12.5 ')).toEqual({ value: 12.5, bad: false });
+		expect(parseNumber('.5')).toEqual({ value: 0.5, bad: false });
+		expect(parseNumber('-3')).toEqual({ value: -3, bad: false });
+	});
+
+	it('writes nothing for an empty box, so the schema says the field is required', () => {
+		expect(parseNumber('')).toEqual({ value: undefined, bad: false });
+		expect(parseNumber('  ')).toEqual({ value: undefined, bad: false });
+	});
+
+	it('writes nothing, and flags the box, for text that is not a number', () => {
+		expect(parseNumber('12abc')).toEqual({ value: undefined, bad: true });
+		expect(parseNumber('0,9')).toEqual({ value: undefined, bad: true });
+		expect(parseNumber('Infinity')).toEqual({ value: undefined, bad: true });
+		expect(parseNumber('1e999')).toEqual({ value: undefined, bad: true });
+	});
+
+	it('never writes NaN or an infinite number, whatever is typed', () => {
+		fc.assert(
+			fc.property(fc.string(), (text) => {
+				const { value } = parseNumber(text);
+				return value === undefined || Number.isFinite(value);
+			})
+		);
+		expect(parseNumber('NaN').value).toBeUndefined();
+	});
+
+	it('shows a stored number, and nothing for a missing one', () => {
+		expect(numberText(0.31)).toBe('0.31');
+		expect(numberText(undefined)).toBe('');
+		expect(numberText(null)).toBe('');
+		expect(numberText(Number.NaN)).toBe('');
+	});
+});
+
+describe('active months', () => {
+	it('turns a month off from all year, and back on to all year', () => {
+		const withoutJuly = toggleMonth(undefined, 7);
+		expect(withoutJuly).toEqual([1, 2, 3, 4, 5, 6, 8, 9, 10, 11, 12]);
+		expect(toggleMonth(withoutJuly, 7)).toBeUndefined();
+	});
+
+	it('keeps the months in calendar order', () => {
+		expect(toggleMonth([11, 12], 1)).toEqual([1, 11, 12]);
+	});
+
+	it('keeps an empty list, for the schema to refuse', () => {
+		expect(toggleMonth([5], 5)).toEqual([]);
+	});
+});

@@ -1,0 +1,134 @@
+import type { EQUIPMENT_CATEGORIES, EquipmentInput } from '$lib/calc/equipment.schema';
+
+export type PowerInput = EquipmentInput['power'];
+export type PowerForm = 'watts' | 'amps';
+
+/** Words for the categories, in the order the core lists them. */
+export const CATEGORY_NAMES: Record<(typeof EQUIPMENT_CATEGORIES)[number], string> = {
+	'water-pump': 'Water pump',
+	'air-pump': 'Air pump',
+	aerator: 'Aerator',
+	lighting: 'Lighting',
+	heater: 'Heater',
+	chiller: 'Chiller',
+	uv: 'UV steriliser',
+	fan: 'Fan',
+	controls: 'Controls',
+	other: 'Other'
+};
+
+/** Which form a power is entered in: amps × volts once either of those is there, else watts. */
+export function powerForm(power: unknown): PowerForm {
+	if (power !== null && typeof power === 'object' && ('amps' in power || 'volts' in power)) return 'amps';
+	return 'watts';
+}
+
+const finite = (value: unknown): number | undefined =>
+	typeof value === 'number' && Number.isFinite(value) ? value : undefined;
+
+/** Real watts per unit as typed so far, or undefined while a needed figure is missing. */
+export function typedWatts(power: unknown): number | undefined {
+	if (power === null || typeof power !== 'object') return undefined;
+	const p = power as Record<string, unknown>;
+	if (powerForm(power) === 'watts') return finite(p.watts);
+	const amps = finite(p.amps);
+	const volts = finite(p.volts);
+	if (amps === undefined || volts === undefined) return undefined;
+	const powerFactor = p.powerFactor === undefined ? 1 : finite(p.powerFactor);
+	if (powerFactor === undefined) return undefined;
+	return (p.phases === 3 ? Math.sqrt(3) : 1) * volts * amps * powerFactor;
+}
+
+// One formatter per precision: toLocaleString builds a new one on every call, too slow for 500 rows.
+const FORMATS = new Map<number, Intl.NumberFormat>();
+
+/** A figure with up to `digits` decimals and thousands separators: 3187.3 → "3,187". */
+export function figure(value: number, digits: number): string {
+	let format = FORMATS.get(digits);
+	if (!format) {
+		format = new Intl.NumberFormat('en-US', { maximumFractionDigits: digits });
+		FORMATS.set(digits, format);
+	}
+	return format.format(value);
+}
+
+/**
+ * The other form of a power, as it is computed: "≈ 108 W" beside amps × volts, "0.83 A at 120 V"
+ * beside watts (at the site's supply voltage, single phase, power factor 1). Empty while incomplete.
+ */
+export function powerEcho(power: unknown, supplyVolts = 120): string {
+	const watts = typedWatts(power);
+	if (watts === undefined) return '';
+	if (powerForm(power) === 'amps') return `≈ ${figure(watts, watts < 10 ? 1 : 0)} W`;
+	return `${figure(watts / supplyVolts, 2)} A at ${figure(supplyVolts, 0)} V`;
+}
+
+/**
+ * The same device's power in the other form, so switching forms keeps what was typed: watts become
+ * amps at the supply voltage (power factor 1, single phase); amps × volts become their watts.
+ */
+export function switchPower(power: unknown, form: PowerForm, supplyVolts = 120): PowerInput {
+	const watts = typedWatts(power);
+	if (form === 'watts') return { watts: watts === undefined ? 0 : round(watts, 1) };
+	const amps = watts === undefined ? 0 : round(watts / supplyVolts, 2);
+	return { amps, volts: supplyVolts, powerFactor: 1, phases: 1 };
+}
+
+function round(value: number, digits: number): number {
+	const scale = 10 ** digits;
+	return Math.round(value * scale) / scale;
+}
+
+const DECIMAL = /^[-+]?(\d+\.?\d*|\.\d+)(e[-+]?\d+)?$/i;
+
+/**
+ * What a number box means: a finite number, nothing for an empty box (the schema then says "Watts is
+ * required"), or `bad` for text that is not a number — which also writes nothing, never NaN.
+ */
+export function parseNumber(text: string): { value: number | undefined; bad: boolean } {
+	const trimmed = text.trim();
+	if (trimmed === '') return { value: undefined, bad: false };
+	const parsed = Number(trimmed);
+	if (!DECIMAL.test(trimmed) || !Number.isFinite(parsed)) return { value: undefined, bad: true };
+	return { value: parsed, bad: false };
+}
+
+/** What a number box shows for a value it did not type itself. */
+export function numberText(value: unknown): string {
+	return typeof value === 'number' && Number.isFinite(value) ? String(value) : '';
+}
+
+/**
+ * Writes a field of a device while it is being typed. The Equipment type says "number" because that
+ * is the valid shape; an empty box holds nothing until the person fills it, which the schema reports.
+ */
+export function writeField(target: object, key: string, value: unknown): void {
+	(target as Record<string, unknown>)[key] = value;
+}
+
+export const MONTH_NAMES = [
+	'January',
+	'February',
+	'March',
+	'April',
+	'May',
+	'June',
+	'July',
+	'August',
+	'September',
+	'October',
+	'November',
+	'December'
+] as const;
+
+/**
+ * Active months after a toggle. No list means all year, and a toggle back to all twelve returns to no
+ * list, so a device that runs all year stores nothing. An empty list stays (the schema refuses it).
+ */
+export function toggleMonth(months: readonly number[] | undefined, month: number): number[] | undefined {
+	const current = months ?? [1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11, 12];
+	const next = current.includes(month)
+		? current.filter((m) => m !== month)
+		: [...current, month].sort((a, b) => a - b);
+	return next.length === 12 ? undefined : next;
+}
