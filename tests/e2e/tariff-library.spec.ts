@@ -138,4 +138,19 @@ test.describe('the tariff library', () => {
 		await expect(page.getByRole('main')).toContainText('Imported 2 tariffs.');
 		await expect(page.getByRole('main')).toContainText('Row 4, source: Source is required');
 	});
+
+	test('a tariff page lists where the reader’s workspaces use it, and nothing of other workspaces', async ({
+		page
+	}) => {
+		const id = byName('Agricultural irrigation pumping');
+		await signInWithPassword(page, 'owner@example.org');
+		await gotoReady(page, `/tariffs/${id}`);
+		await expect(page.getByRole('region', { name: 'Where your workspaces use it' })).toContainText(
+			'Alder Creek trout hatchery (demo)'
+		);
+		await page.getByRole('button', { name: 'Sign out' }).click();
+		await signInWithPassword(page, 'grower@example.org');
+		await gotoReady(page, `/tariffs/${id}`);
+		await expect(page.getByText('Alder Creek')).toHaveCount(0);
+	});
 });

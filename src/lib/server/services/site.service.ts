@@ -1,4 +1,4 @@
-import { and, asc, eq, isNull } from 'drizzle-orm';
+import { and, asc, eq, inArray, isNull, or } from 'drizzle-orm';
 import type { SiteInput } from '$lib/forms/site.schema';
 import { db } from '../db';
 import { devices, scenarios, sites, type DeviceSpec } from '../db/schema';
@@ -257,4 +257,43 @@ export async function saveDevices(
 		});
 		return bumped.revision;
 	});
+}
+
+/** Where a tariff is used, among the workspaces given: sites on it, and scenarios that override to it. */
+export async function tariffUsage(tariffId: string, workspaceIds: string[]) {
+	if (workspaceIds.length === 0) return [];
+	const rows = await db
+		.select({
+			siteId: sites.id,
+			siteName: sites.name,
+			siteTariff: sites.tariffId,
+			scenarioId: scenarios.id,
+			scenarioName: scenarios.name,
+			scenarioTariff: scenarios.tariffId,
+			deletedAt: scenarios.deletedAt
+		})
+		.from(sites)
+		.leftJoin(scenarios, eq(scenarios.siteId, sites.id))
+		.where(
+			and(
+				inArray(sites.workspaceId, workspaceIds),
+				isNull(sites.archivedAt),
+				or(eq(sites.tariffId, tariffId), eq(scenarios.tariffId, tariffId))
+			)
+		);
+	const bySite = new Map<
+		string,
+		{ siteId: string; siteName: string; wholeSite: boolean; scenarios: string[] }
+	>();
+	for (const r of rows) {
+		const entry = bySite.get(r.siteId) ?? {
+			siteId: r.siteId,
+			siteName: r.siteName,
+			wholeSite: r.siteTariff === tariffId,
+			scenarios: []
+		};
+		if (r.scenarioTariff === tariffId && r.scenarioName && !r.deletedAt) entry.scenarios.push(r.scenarioName);
+		bySite.set(r.siteId, entry);
+	}
+	return [...bySite.values()];
 }

@@ -1,7 +1,8 @@
 import { fail, redirect } from '@sveltejs/kit';
 import { z } from 'zod';
 import { can, requireRole, requireTariffRead } from '$lib/server/guard';
-import { copyTariff } from '$lib/server/services/tariff.service';
+import { copyTariff, workspaceIdsOf } from '$lib/server/services/tariff.service';
+import { tariffUsage } from '$lib/server/services/site.service';
 import { listWorkspacesFor } from '$lib/server/services/workspace.service';
 import { features, typicalMonth } from '$lib/server/tariffs/submission';
 import type { Actions, PageServerLoad } from './$types';
@@ -46,7 +47,8 @@ export const load = (async (event) => {
 		typicalMonth: typicalMonth(tariff, latest),
 		features: latest ? features(latest.structure) : null,
 		canEdit,
-		copyTargets: copyTargets.map((w) => ({ id: w.id, name: w.name }))
+		copyTargets: copyTargets.map((w) => ({ id: w.id, name: w.name })),
+		usage: await tariffUsage(tariff.id, await workspaceIdsOf(user?.id))
 	};
 }) satisfies PageServerLoad;
 
