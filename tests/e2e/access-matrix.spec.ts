@@ -133,10 +133,10 @@ const routes: Route[] = [
 		path: () => `/sites/${OTHER_SITE}/scenarios/${SCENARIO}`,
 		expect: [303, 404, 404, 404, 404, 404]
 	},
-	...['create', 'baseline', 'archive', 'delete'].map((action) => ({
+	...['create', 'baseline', 'archive', 'delete', 'share', 'unshare'].map((action) => ({
 		method: 'POST' as const,
 		path: () => `/sites/${SITE}?/${action}`,
-		form: { name: '', scenarioId: 'x' },
+		form: { name: '', scenarioId: 'x', email: 'bad', userId: '' },
 		expect: [401, 403, 400, 400, 404, 404]
 	})),
 	{

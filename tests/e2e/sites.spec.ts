@@ -1,6 +1,6 @@
 import { expect, test } from '@playwright/test';
 import { readFileSync } from 'node:fs';
-import { DEMO_WS, gotoReady, signInWithPassword } from './helpers';
+import { DEMO_WS, gotoReady, latestMail, linkIn, signInWithPassword, uniqueEmail } from './helpers';
 
 const demoSites = JSON.parse(readFileSync('data/demo-sites.json', 'utf8')) as {
 	sites: { id: string; name: string; scenarios: { id: string; name: string }[] }[];
@@ -88,5 +88,34 @@ test.describe('sites and scenarios', () => {
 		await other.getByRole('button', { name: 'Save the list' }).click();
 		await expect(other.getByText(/Someone else saved this scenario while you were editing/)).toBeVisible();
 		await expect(other.getByText('Changes not saved')).toBeVisible();
+	});
+
+	test('an owner shares one site with a client, who sees that site only', async ({ page, browser }) => {
+		const hatchery = demoSites.sites[0]!;
+		const email = uniqueEmail('client');
+		await signInWithPassword(page, 'owner@example.org');
+		await gotoReady(page, `/sites/${hatchery.id}`);
+		await page.locator('#share-email').fill(email);
+		await page.getByLabel('As', { exact: true }).selectOption('viewer');
+		await page.getByRole('button', { name: 'Share', exact: true }).click();
+		await expect(page.getByText(`Invitation sent to ${email}.`)).toBeVisible();
+
+		const mail = await latestMail(email, /is shared with you/);
+		const client = await (await browser.newContext()).newPage();
+		await gotoReady(client, new URL(linkIn(mail.text)).pathname);
+		await expect(client.getByText('of this site only')).toBeVisible();
+		await client.getByLabel('Your name').fill('Client (invented)');
+		await client.getByLabel('Password', { exact: true }).fill('client password 123');
+		await client.getByLabel('Password again').fill('client password 123');
+		await client.getByRole('button', { name: 'Create account and join' }).click();
+		await expect(client.getByRole('heading', { name: hatchery.name, level: 1, exact: true })).toBeVisible();
+		await expect(client.getByRole('button', { name: 'Create scenario' })).toHaveCount(0);
+		for (const other of [`/sites/${demoSites.sites[1]!.id}`, `/w/${DEMO_WS.id}`])
+			expect((await client.request.get(other, { maxRedirects: 0 })).status(), other).toBe(404);
+		await gotoReady(client, `/sites/${hatchery.id}`);
+		await expect(client.getByRole('heading', { name: hatchery.name, level: 1, exact: true })).toBeVisible();
+
+		await page.reload();
+		await expect(page.getByRole('list', { name: 'Shared with' })).toContainText('Client (invented)');
 	});
 });

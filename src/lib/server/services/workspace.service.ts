@@ -1,6 +1,6 @@
 import { and, asc, count, eq, gt, isNull } from 'drizzle-orm';
 import { db } from '../db';
-import { invitations, memberships, users, workspaces } from '../db/schema';
+import { invitations, memberships, siteGrants, sites, users, workspaces } from '../db/schema';
 import type { Role } from '../guard';
 import { hashPassword } from '../auth/password';
 import { HOUR_MS, hashToken, newToken } from '../auth/tokens';
@@ -164,10 +164,13 @@ export async function findOpenInvitation(token: string) {
 			role: invitations.role,
 			workspaceId: invitations.workspaceId,
 			workspaceName: workspaces.name,
+			siteId: invitations.siteId,
+			siteName: sites.name,
 			expiresAt: invitations.expiresAt
 		})
 		.from(invitations)
 		.innerJoin(workspaces, eq(workspaces.id, invitations.workspaceId))
+		.leftJoin(sites, eq(sites.id, invitations.siteId))
 		.where(
 			and(
 				eq(invitations.tokenHash, hashToken(token)),
@@ -186,7 +189,7 @@ export async function findOpenInvitation(token: string) {
 export async function acceptInvitation(
 	token: string,
 	who: { userId: string } | { name: string; password: string }
-): Promise<{ workspaceId: string; email: string } | null> {
+): Promise<{ workspaceId: string; siteId: string | null; email: string } | null> {
 	const passwordHash = 'password' in who ? await hashPassword(who.password) : null;
 	return db.transaction(async (tx) => {
 		const [inv] = await tx
@@ -213,10 +216,63 @@ export async function acceptInvitation(
 			if (!created) throw new MembershipRuleError('An account already uses this address: sign in to accept.');
 			userId = created.id;
 		}
-		await tx
-			.insert(memberships)
-			.values({ workspaceId: inv.workspaceId, userId, role: inv.role })
-			.onConflictDoNothing();
-		return { workspaceId: inv.workspaceId, email: inv.email };
+		// A site-level share gives that site only; a workspace invitation makes a member.
+		if (inv.siteId)
+			await tx
+				.insert(siteGrants)
+				.values({ siteId: inv.siteId, userId, role: inv.role === 'editor' ? 'editor' : 'viewer' })
+				.onConflictDoUpdate({
+					target: [siteGrants.siteId, siteGrants.userId],
+					set: { role: inv.role === 'editor' ? 'editor' : 'viewer' }
+				});
+		else
+			await tx
+				.insert(memberships)
+				.values({ workspaceId: inv.workspaceId, userId, role: inv.role })
+				.onConflictDoNothing();
+		return { workspaceId: inv.workspaceId, siteId: inv.siteId, email: inv.email };
 	});
+}
+
+/** Shares one site with someone outside the workspace (a client, say) as its editor or viewer, by e-mail. */
+export async function inviteToSite(
+	input: {
+		site: { id: string; name: string; workspaceId: string };
+		email: string;
+		role: 'editor' | 'viewer';
+		invitedBy: SessionUser;
+	},
+	origin: string
+) {
+	const { token, tokenHash } = newToken();
+	await db.insert(invitations).values({
+		workspaceId: input.site.workspaceId,
+		siteId: input.site.id,
+		email: input.email,
+		role: input.role,
+		tokenHash,
+		invitedBy: input.invitedBy.id,
+		expiresAt: new Date(Date.now() + INVITATION_DAYS * 24 * HOUR_MS)
+	});
+	const who = input.invitedBy.name
+		? `${input.invitedBy.name} (${input.invitedBy.email})`
+		: input.invitedBy.email;
+	await sendMail({
+		to: input.email,
+		subject: `${input.site.name} is shared with you on Runrate`,
+		text: `${who} shares the site "${input.site.name}" with you on Runrate, as ${input.role === 'editor' ? 'an editor' : 'a viewer'} of that site only.\n\nOpen this link to accept (it works once, for ${INVITATION_DAYS} days):\n\n${origin}/invite/${token}\n`
+	});
+}
+
+export async function siteGuests(siteId: string) {
+	return db
+		.select({ userId: users.id, name: users.name, email: users.email, role: siteGrants.role })
+		.from(siteGrants)
+		.innerJoin(users, eq(users.id, siteGrants.userId))
+		.where(eq(siteGrants.siteId, siteId))
+		.orderBy(asc(users.email));
+}
+
+export async function removeSiteGuest(siteId: string, userId: string) {
+	await db.delete(siteGrants).where(and(eq(siteGrants.siteId, siteId), eq(siteGrants.userId, userId)));
 }

@@ -27,7 +27,13 @@ export const load = (async ({ params, locals }) => {
 	if (!invitation) return { invitation: null, hasAccount: false };
 	const [existing] = await db.select({ id: users.id }).from(users).where(eq(users.email, invitation.email));
 	return {
-		invitation: { email: invitation.email, role: invitation.role, workspaceName: invitation.workspaceName },
+		invitation: {
+			email: invitation.email,
+			role: invitation.role,
+			// A site share names the site only, not the workspace around it.
+			workspaceName: invitation.siteName ?? invitation.workspaceName,
+			siteOnly: !!invitation.siteId
+		},
 		hasAccount: !!existing,
 		signedInAs: locals.user?.email ?? null
 	};
@@ -50,7 +56,7 @@ export const actions = {
 			});
 		const accepted = await acceptInvitation(event.params.token, { userId: user.id });
 		if (!accepted) error(404, 'This invitation has been used, withdrawn or has expired.');
-		redirect(303, `/w/${accepted.workspaceId}`);
+		redirect(303, accepted.siteId ? `/sites/${accepted.siteId}` : `/w/${accepted.workspaceId}`);
 	},
 
 	join: async (event) => {
@@ -73,8 +79,8 @@ export const actions = {
 		await handOver(event, 'password', {
 			email: accepted.email,
 			password: parsed.data.password,
-			next: `/w/${accepted.workspaceId}`
+			next: accepted.siteId ? `/sites/${accepted.siteId}` : `/w/${accepted.workspaceId}`
 		});
-		redirect(303, `/w/${accepted.workspaceId}`);
+		redirect(303, accepted.siteId ? `/sites/${accepted.siteId}` : `/w/${accepted.workspaceId}`);
 	}
 } satisfies Actions;

@@ -1,4 +1,7 @@
-import { fail, redirect } from '@sveltejs/kit';
+import { error, fail, redirect } from '@sveltejs/kit';
+import { inviteLimiter, TOO_MANY } from '$lib/server/rate-limit';
+import { inviteToSite, removeSiteGuest, siteGuests } from '$lib/server/services/workspace.service';
+import { emailField } from '$lib/forms/auth.schema';
 import { z } from 'zod';
 import { requireSiteAccess } from '$lib/server/guard';
 import { siteTrail } from '$lib/server/services/audit.service';
@@ -17,7 +20,7 @@ import { hasMainsInWater } from '$lib/cautions';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load = (async (event) => {
-	const { site } = await requireSiteAccess(event, event.params.siteId, 'viewer');
+	const { site, role, viaGrant } = await requireSiteAccess(event, event.params.siteId, 'viewer');
 	const year = new Date().getUTCFullYear();
 	const all = await listScenarios(site.id);
 	const undoAfter = Date.now() - UNDO_MS;
@@ -55,6 +58,8 @@ export const load = (async (event) => {
 		tariff: tariff
 			? { id: tariff.tariff.id, name: tariff.tariff.name, utility: tariff.tariff.utility }
 			: null,
+		canShare: !viaGrant && role !== 'viewer',
+		guests: !viaGrant && role !== 'viewer' ? await siteGuests(site.id) : [],
 		trail: (await siteTrail(site.id, 50)).map((e) => ({ ...e, createdAt: e.createdAt.toISOString() }))
 	};
 }) satisfies PageServerLoad;
@@ -72,7 +77,40 @@ async function scenarioAction(event: Parameters<Actions[string]>[0]) {
 	return { ...access, form, scenario };
 }
 
+/** Sharing is for the workspace's own editors: a guest of the site cannot pass it on. */
+async function requireSharer(event: Parameters<Actions[string]>[0]) {
+	const access = await requireSiteAccess(event, event.params.siteId!, 'editor');
+	if (access.viaGrant) error(403, 'Only the workspace that owns this site can share it.');
+	return access;
+}
+
+const shareSchema = z.object({
+	email: emailField,
+	role: z.enum(['editor', 'viewer'], { error: 'Pick editor or viewer' })
+});
+
 export const actions = {
+	share: async (event) => {
+		const { site, user } = await requireSharer(event);
+		const form = await event.request.formData();
+		const parsed = shareSchema.safeParse(Object.fromEntries(form));
+		if (!parsed.success)
+			return fail(400, { action: 'share', values: keepValues(form), errors: fieldErrors(parsed.error) });
+		if (await inviteLimiter.isLimited(event))
+			return fail(429, { action: 'share', values: keepValues(form), errors: { email: TOO_MANY } });
+		await inviteToSite({ site, invitedBy: user, ...parsed.data }, event.url.origin);
+		return { action: 'share', ok: true, shared: parsed.data.email };
+	},
+	unshare: async (event) => {
+		const { site } = await requireSharer(event);
+		const parsed = z
+			.object({ userId: z.string().min(1).max(100) })
+			.safeParse(Object.fromEntries(await event.request.formData()));
+		if (!parsed.success)
+			return fail(400, { action: 'unshare', errors: { form: 'Pick a person to stop sharing with.' } });
+		await removeSiteGuest(site.id, parsed.data.userId);
+		return { action: 'unshare', ok: true };
+	},
 	create: async (event) => {
 		const { site, user } = await requireSiteAccess(event, event.params.siteId, 'editor');
 		const form = await event.request.formData();

@@ -1,0 +1,63 @@
+import { afterAll, describe, expect, it } from 'vitest';
+import { and, eq } from 'drizzle-orm';
+import { client, db } from '$lib/server/db';
+import { memberships, siteGrants, users } from '$lib/server/db/schema';
+import { createSite } from '$lib/server/services/site.service';
+import { acceptInvitation, createWorkspace, inviteToSite } from '$lib/server/services/workspace.service';
+
+// Against the real PostgreSQL of `npm test`; invented people and sites.
+const tag = `share-${Date.now()}`;
+
+afterAll(async () => {
+	await client.end({ timeout: 5 });
+});
+
+describe('sharing one site', () => {
+	it('gives the invitee a grant on that site and no membership of the workspace', async () => {
+		const [owner] = await db
+			.insert(users)
+			.values({ email: `owner-${tag}@example.org`, name: 'Owner' })
+			.returning();
+		const ws = await createWorkspace(`Share ${tag}`, owner!.id);
+		const siteInput = {
+			name: `Site ${tag}`,
+			address: null,
+			timezone: 'America/Chicago',
+			country: 'US',
+			region: null,
+			supplyVolts: null,
+			supplyPhases: null,
+			tariffId: null,
+			tariffVersion: null,
+			currency: 'USD',
+			notes: null
+		};
+		const siteId = await createSite(ws, siteInput, owner!);
+		const email = `client-${tag}@example.org`;
+		await inviteToSite(
+			{
+				site: { id: siteId, name: siteInput.name, workspaceId: ws },
+				email,
+				role: 'viewer',
+				invitedBy: { ...owner!, isAdmin: false }
+			},
+			'http://127.0.0.1'
+		);
+		const mails = (await (await fetch(`${process.env.MAIL_VIEW_URL}/messages?to=${email}`)).json()) as {
+			text: string;
+		}[];
+		const token = mails.at(-1)!.text.match(/\/invite\/([\w-]+)/)![1]!;
+		const accepted = await acceptInvitation(token, { name: 'Client', password: 'client password 123' });
+		expect(accepted).toMatchObject({ siteId, workspaceId: ws });
+		const [guest] = await db.select().from(users).where(eq(users.email, email));
+		expect(
+			await db
+				.select()
+				.from(memberships)
+				.where(and(eq(memberships.workspaceId, ws), eq(memberships.userId, guest!.id)))
+		).toEqual([]);
+		expect(
+			await db.select({ role: siteGrants.role }).from(siteGrants).where(eq(siteGrants.userId, guest!.id))
+		).toEqual([{ role: 'viewer' }]);
+	});
+});
