@@ -149,6 +149,7 @@ test.describe('the tariff library', () => {
 			'Alder Creek trout hatchery (demo)'
 		);
 		await page.getByRole('button', { name: 'Sign out' }).click();
+		await expect(page.getByRole('banner').getByRole('link', { name: 'Sign in' })).toBeVisible();
 		await signInWithPassword(page, 'grower@example.org');
 		await gotoReady(page, `/tariffs/${id}`);
 		await expect(page.getByText('Alder Creek')).toHaveCount(0);
