@@ -1,3 +1,4 @@
+import { MONTH_NAMES } from '$lib/calc/months';
 import type { Tariff, TariffInput } from '$lib/calc/tariff.schema';
 
 /**
@@ -15,21 +16,6 @@ export interface WindowInput {
 	start: string;
 	end: string;
 }
-
-const MONTH_NAMES = [
-	'January',
-	'February',
-	'March',
-	'April',
-	'May',
-	'June',
-	'July',
-	'August',
-	'September',
-	'October',
-	'November',
-	'December'
-] as const;
 
 const formatters = new Map<string, Intl.NumberFormat>();
 

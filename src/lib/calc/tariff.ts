@@ -1,3 +1,4 @@
+import { MONTH_NAMES } from './months';
 import {
 	type ClockWindow,
 	type DaySelector,
@@ -17,21 +18,6 @@ export interface RuleIssue {
 	path: Array<string | number>;
 	message: string;
 }
-
-const MONTH_NAMES = [
-	'January',
-	'February',
-	'March',
-	'April',
-	'May',
-	'June',
-	'July',
-	'August',
-	'September',
-	'October',
-	'November',
-	'December'
-];
 
 /** Tiers end at increasing kWh, and only the last is open-ended (`uptoKwh: null`). */
 export function tierIssues(tiers: ReadonlyArray<{ uptoKwh: number | null }>): RuleIssue[] {

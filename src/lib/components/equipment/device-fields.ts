@@ -1,3 +1,4 @@
+import { MONTH_NAMES } from '$lib/calc/months';
 import type { EQUIPMENT_CATEGORIES, EquipmentInput } from '$lib/calc/equipment.schema';
 
 export type PowerInput = EquipmentInput['power'];
@@ -106,20 +107,7 @@ export function writeField(target: object, key: string, value: unknown): void {
 	(target as Record<string, unknown>)[key] = value;
 }
 
-export const MONTH_NAMES = [
-	'January',
-	'February',
-	'March',
-	'April',
-	'May',
-	'June',
-	'July',
-	'August',
-	'September',
-	'October',
-	'November',
-	'December'
-] as const;
+export { MONTH_NAMES };
 
 /**
  * Active months after a toggle. No list means all year, and a toggle back to all twelve returns to no
