@@ -1,13 +1,9 @@
 import ExcelJS from 'exceljs';
 import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
-import {
-	MAX_SHEET_ROWS,
-	TARIFF_SHEET_COLUMNS,
-	describeRowError,
-	parseTariffSheet,
-	tariffSheetTemplateCsv
-} from './sheet-import';
+import { MAX_SHEET_ROWS, TARIFF_SHEET_COLUMNS } from './sheet-columns';
+import { describeRowError, parseTariffSheet } from './sheet-import';
+import { tariffSheetTemplateCsv } from './sheet-template';
 
 // Invented rows: the utilities and rates are fictional.
 const FLAT: Record<string, string> = {

@@ -1,7 +1,5 @@
-import ExcelJS from 'exceljs';
-import Papa from 'papaparse';
 import { type Tariff, holidaysSchema, parseRequest, tariffSchema, timezoneSchema } from '$lib/calc';
-import { type Bounds, amount } from '$lib/calc/fields';
+import { amount } from '$lib/calc/fields';
 import {
 	CUSTOMER_CLASSES,
 	type TariffMeta,
@@ -9,77 +7,22 @@ import {
 	tariffMetaSchema,
 	versionMetaSchema
 } from '$lib/forms/tariff-meta.schema';
+import {
+	type Grid,
+	type SheetKind,
+	MAX_SHEET_BYTES,
+	numberCell,
+	readSheet
+} from '$lib/server/sheets/read-sheet';
+import { MAX_SHEET_ROWS, MAX_TIERS, NUMBERS, TARIFF_SHEET_COLUMNS } from './sheet-columns';
+
+export { MAX_SHEET_BYTES, MAX_SHEET_ROWS };
 
 /**
  * The batch import sheet: one row per tariff version of a flat or tiered tariff, as CSV or as the
  * first worksheet of an XLSX workbook. Cells are trimmed and otherwise taken as they are; rows are
  * checked with the same schemas as the editor and the API. Nothing here touches the database.
  */
-export interface TariffSheetColumn {
-	name: string;
-	/** The header must have the column; a required cell may still be refused when empty. */
-	required: boolean;
-	meaning: string;
-}
-
-export const MAX_SHEET_ROWS = 2000;
-export const MAX_SHEET_BYTES = 5 * 1024 * 1024;
-export const MAX_TIERS = 5;
-
-const column = (name: string, meaning: string, required = false): TariffSheetColumn => ({
-	name,
-	required,
-	meaning
-});
-const tierColumns = Array.from({ length: MAX_TIERS }, (_, i) => [
-	column(
-		`tier${i + 1}_upto_kwh`,
-		`Tier ${i + 1} ends at this many kWh a month; empty on the last tier ("and above").`
-	),
-	column(`tier${i + 1}_per_kwh`, `Rate per kWh within tier ${i + 1}. Fill tiers in order from tier 1.`)
-]).flat();
-
-export const TARIFF_SHEET_COLUMNS: readonly TariffSheetColumn[] = [
-	column('utility', 'The utility that bills the tariff.', true),
-	column('name', 'The tariff’s name, as the utility writes it.', true),
-	column('code', 'The utility’s tariff code, such as R-1.'),
-	column('country', 'Two-letter country code, such as US.', true),
-	column('region', 'State or province code, such as WI.'),
-	column('area', 'Free-text area within the region.'),
-	column('customer_class', `One of: ${CUSTOMER_CLASSES.join(', ')}.`, true),
-	column('currency', 'Three-letter currency code, such as USD.', true),
-	column('timezone', 'IANA time zone, such as America/Chicago.', true),
-	column('holiday_country', 'Country whose public holidays apply; empty for none.'),
-	column('holiday_region', 'State or province whose public holidays apply (with holiday_country).'),
-	column('description', 'Free text shown on the tariff page.'),
-	column('effective_from', 'First day this version applies, as 2027-01-01.', true),
-	column('effective_to', 'Last day it applies; empty while it is in force.'),
-	column('source', 'Where the figures come from: a web address or a document name.', true),
-	column('checked_on', 'When someone last checked the figures against the source, as 2027-01-01.', true),
-	column('change_note', 'What changed from the previous version.'),
-	column('customer_charge_per_month', 'Fixed customer charge per billing month.'),
-	column('customer_charge_per_day', 'Fixed customer charge per day of the billing period.'),
-	column('energy_per_kwh', 'Flat energy rate per kWh. Give this or the tiers, not both.'),
-	...tierColumns,
-	column('rider_label', 'Name of a per-kWh rider, such as Fuel cost adjustment.'),
-	column('rider_per_kwh', 'Rider per kWh; below zero for a credit.'),
-	column('tax_label', 'Name of a percentage tax, such as Sales tax.'),
-	column('tax_percent', 'Tax as a percent of the bill before tax.'),
-	column('minimum_monthly', 'Minimum bill per month before tax.')
-];
-
-const NUMBERS: Record<string, { label: string; bounds: Bounds }> = {
-	customer_charge_per_month: { label: 'Customer charge per month', bounds: { min: 0 } },
-	customer_charge_per_day: { label: 'Customer charge per day', bounds: { min: 0 } },
-	energy_per_kwh: { label: 'Energy per kWh', bounds: { min: 0 } },
-	rider_per_kwh: { label: 'Rider per kWh', bounds: {} },
-	tax_percent: { label: 'Tax percent', bounds: { min: 0 } },
-	minimum_monthly: { label: 'Minimum monthly', bounds: { min: 0 } }
-};
-for (let n = 1; n <= MAX_TIERS; n++) {
-	NUMBERS[`tier${n}_upto_kwh`] = { label: `Tier ${n} up to kWh`, bounds: { above: 0 } };
-	NUMBERS[`tier${n}_per_kwh`] = { label: `Tier ${n} per kWh`, bounds: { min: 0 } };
-}
 
 export interface SheetRow {
 	/** The row number a person sees in the sheet; the header is row 1 when it is the first row. */
@@ -105,59 +48,6 @@ export function describeRowError(error: SheetRowError): string {
 	return `Row ${error.line}, ${error.field}: ${error.message}`;
 }
 
-type Grid = { line: number; cells: string[] }[];
-type Read = { grid: Grid } | { error: string };
-
-function readCsv(bytes: Uint8Array): Read {
-	let text: string;
-	try {
-		text = new TextDecoder('utf-8', { fatal: true }).decode(bytes);
-	} catch {
-		return { error: 'The file is not a CSV text file (it is not UTF-8 text)' };
-	}
-	if (text.includes('\0')) return { error: 'The file is not a CSV text file' };
-	const parsed = Papa.parse<string[]>(text, { skipEmptyLines: false });
-	const quote = parsed.errors.find((error) => error.type === 'Quotes');
-	if (quote) return { error: `Row ${(quote.row ?? 0) + 1}: a quoted cell is never closed` };
-	return { grid: parsed.data.map((cells, i) => ({ line: i + 1, cells: cells.map((cell) => cell.trim()) })) };
-}
-
-function cellText(value: ExcelJS.CellValue): string {
-	if (value === null || value === undefined) return '';
-	// Date cells come back as UTC midnight of the date the sheet shows.
-	if (value instanceof Date) return Number.isNaN(value.getTime()) ? '' : value.toISOString().slice(0, 10);
-	if (typeof value !== 'object') return String(value);
-	if ('richText' in value) return value.richText.map((run) => run.text).join('');
-	if ('error' in value) return value.error;
-	if ('formula' in value || 'sharedFormula' in value) return cellText(value.result as ExcelJS.CellValue);
-	if ('text' in value) return cellText(value.text as ExcelJS.CellValue);
-	return '';
-}
-
-async function readXlsx(bytes: Uint8Array): Promise<Read> {
-	const workbook = new ExcelJS.Workbook();
-	try {
-		// exceljs types its argument as an ArrayBuffer; a copy gives exactly the file's bytes.
-		await workbook.xlsx.load(bytes.slice().buffer);
-	} catch {
-		return { error: 'The file is not a readable XLSX workbook' };
-	}
-	const sheet = workbook.worksheets[0];
-	if (!sheet) return { error: 'The workbook has no worksheet' };
-	if (sheet.actualRowCount > MAX_SHEET_ROWS + 1) return { error: tooManyRows(sheet.actualRowCount - 1) };
-	const grid: Grid = [];
-	sheet.eachRow((row, line) => {
-		const cells: string[] = [];
-		row.eachCell((cell, col) => (cells[col - 1] = cellText(cell.value).trim()));
-		grid.push({ line, cells: Array.from(cells, (cell) => cell ?? '') });
-	});
-	return { grid };
-}
-
-const tooManyRows = (count: number) =>
-	`The sheet has ${count} tariff rows; one import can hold at most ${MAX_SHEET_ROWS}`;
-const blank = (cells: string[]) => cells.every((cell) => cell === '');
-
 /** Column name → cell index, or the sheet-level errors of the header. */
 function headerOf(header: string[], body: Grid): { index: Map<string, number> } | { errors: string[] } {
 	const known = new Set(TARIFF_SHEET_COLUMNS.map((c) => c.name));
@@ -182,9 +72,6 @@ function headerOf(header: string[], body: Grid): { index: Map<string, number> } 
 	return errors.length ? { errors } : { index };
 }
 
-const PLAIN_NUMBER = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
-const COMMA_DECIMAL = /^[+-]?\d+,\d+$/;
-
 type Cell = (name: string) => string;
 type Fail = (field: string, message: string) => void;
 type Issues = { path: string; message: string }[];
@@ -194,15 +81,14 @@ function numberReader(cell: Cell, fail: Fail) {
 		const raw = cell(name);
 		const spec = NUMBERS[name];
 		if (raw === '' || !spec) return null;
-		if (COMMA_DECIMAL.test(raw)) {
-			fail(name, `${spec.label} must use a dot for decimals, like 0.12 (not 0,12)`);
-		} else if (!PLAIN_NUMBER.test(raw)) {
-			fail(name, `${spec.label} must be a number with a dot for decimals, like 0.12`);
-		} else {
-			const checked = amount(spec.label, spec.bounds).safeParse(Number(raw));
-			if (checked.success) return checked.data;
-			fail(name, checked.error.issues[0]?.message ?? `${spec.label} is not a valid number`);
+		const read = numberCell(raw, spec.label);
+		if ('message' in read) {
+			fail(name, read.message);
+			return null;
 		}
+		const checked = amount(spec.label, spec.bounds).safeParse(read.value);
+		if (checked.success) return checked.data;
+		fail(name, checked.error.issues[0]?.message ?? `${spec.label} is not a valid number`);
 		return null;
 	};
 }
@@ -368,18 +254,11 @@ const versionKey = ({ meta, version }: SheetRow) =>
  * column; a sheet that cannot be read at all (empty, too big, not a sheet, wrong columns) gives
  * sheet-level errors and no rows. Never throws for bad input.
  */
-export async function parseTariffSheet(bytes: Uint8Array, kind: 'csv' | 'xlsx'): Promise<SheetResult> {
+export async function parseTariffSheet(bytes: Uint8Array, kind: SheetKind): Promise<SheetResult> {
 	const refuse = (...sheetErrors: string[]): SheetResult => ({ rows: [], errors: [], sheetErrors });
-	if (bytes.byteLength === 0) return refuse('The file is empty');
-	if (bytes.byteLength > MAX_SHEET_BYTES) {
-		return refuse('The file is larger than 5 MB, the most an import sheet can be');
-	}
-	const read = kind === 'csv' ? readCsv(bytes) : await readXlsx(bytes);
-	if ('error' in read) return refuse(read.error);
-	const [header, ...body] = read.grid.filter((row) => !blank(row.cells));
-	if (!header) return refuse('The sheet is empty: it needs a header row and at least one tariff row');
-	if (body.length === 0) return refuse('The sheet has a header row but no tariff rows');
-	if (body.length > MAX_SHEET_ROWS) return refuse(tooManyRows(body.length));
+	const table = await readSheet(bytes, kind, { maxRows: MAX_SHEET_ROWS, rowWord: 'tariff' });
+	if ('error' in table) return refuse(table.error);
+	const { header, body } = table;
 	const columns = headerOf(header.cells, body);
 	if ('errors' in columns) return refuse(...columns.errors);
 
@@ -406,59 +285,4 @@ export async function parseTariffSheet(bytes: Uint8Array, kind: 'csv' | 'xlsx'):
 		}
 	}
 	return result;
-}
-
-const TEMPLATE_ROWS: Record<string, string>[] = [
-	{
-		utility: 'Demo Valley Power Cooperative (invented)',
-		name: 'Residential service',
-		code: 'DV-R1',
-		country: 'US',
-		region: 'ID',
-		customer_class: 'residential',
-		currency: 'USD',
-		timezone: 'America/Boise',
-		holiday_country: 'US',
-		holiday_region: 'ID',
-		description: 'Invented example: a flat tariff',
-		effective_from: '2027-01-01',
-		source: 'Invented for the template',
-		checked_on: '2026-11-20',
-		customer_charge_per_month: '15.50',
-		energy_per_kwh: '0.124',
-		rider_label: 'Power cost adjustment',
-		rider_per_kwh: '0.011',
-		tax_label: 'Franchise tax',
-		tax_percent: '3'
-	},
-	{
-		utility: 'Northmere Electric (invented)',
-		name: 'Residential inclining block',
-		code: 'NM-R2',
-		country: 'US',
-		region: 'WI',
-		customer_class: 'residential',
-		currency: 'USD',
-		timezone: 'America/Chicago',
-		holiday_country: 'US',
-		holiday_region: 'WI',
-		description: 'Invented example: three inclining tiers and a minimum bill',
-		effective_from: '2027-01-01',
-		source: 'Invented for the template',
-		checked_on: '2026-11-20',
-		change_note: 'Second tier now ends at 1000 kWh',
-		customer_charge_per_day: '0.40',
-		tier1_upto_kwh: '500',
-		tier1_per_kwh: '0.098',
-		tier2_upto_kwh: '1000',
-		tier2_per_kwh: '0.128',
-		tier3_per_kwh: '0.162',
-		minimum_monthly: '18'
-	}
-];
-
-/** A CSV with every column of the format and two invented example rows (one flat, one tiered). */
-export function tariffSheetTemplateCsv(): string {
-	const fields = TARIFF_SHEET_COLUMNS.map((c) => c.name);
-	return `${Papa.unparse({ fields, data: TEMPLATE_ROWS.map((row) => fields.map((name) => row[name] ?? '')) })}\r\n`;
 }

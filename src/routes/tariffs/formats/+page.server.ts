@@ -1,4 +1,4 @@
-import { TARIFF_SHEET_COLUMNS } from '$lib/server/tariffs/sheet-import';
+import { TARIFF_SHEET_COLUMNS } from '$lib/server/tariffs/sheet-columns';
 import type { PageServerLoad } from './$types';
 
 export const load = (() => ({

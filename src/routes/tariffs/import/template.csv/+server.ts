@@ -1,4 +1,4 @@
-import { tariffSheetTemplateCsv } from '$lib/server/tariffs/sheet-import';
+import { tariffSheetTemplateCsv } from '$lib/server/tariffs/sheet-template';
 import type { RequestHandler } from './$types';
 
 /** The batch import template: our header and two invented example rows. */
