@@ -133,6 +133,22 @@ const routes: Route[] = [
 		path: () => `/sites/${OTHER_SITE}/scenarios/${SCENARIO}`,
 		expect: [303, 404, 404, 404, 404, 404]
 	},
+	...['equipment.csv', 'equipment.xlsx', 'import/template.csv'].map((file) => ({
+		method: 'GET' as const,
+		path: () => `/sites/${SITE}/scenarios/${SCENARIO}/${file}`,
+		expect: [303, 200, 200, 200, 404, 404]
+	})),
+	{
+		method: 'GET',
+		path: () => `/sites/${SITE}/scenarios/${SCENARIO}/import`,
+		expect: [303, 403, 200, 200, 404, 404]
+	},
+	{
+		method: 'POST',
+		path: () => `/sites/${SITE}/scenarios/${SCENARIO}/import`,
+		form: { intent: 'check' },
+		expect: [401, 403, 400, 400, 404, 404]
+	},
 	...['create', 'baseline', 'archive', 'delete', 'share', 'unshare'].map((action) => ({
 		method: 'POST' as const,
 		path: () => `/sites/${SITE}?/${action}`,
