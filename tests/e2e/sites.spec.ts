@@ -112,6 +112,9 @@ test.describe('sites and scenarios', () => {
 		await expect(client.getByRole('button', { name: 'Create scenario' })).toHaveCount(0);
 		for (const other of [`/sites/${demoSites.sites[1]!.id}`, `/w/${DEMO_WS.id}`])
 			expect((await client.request.get(other, { maxRedirects: 0 })).status(), other).toBe(404);
+		const response = await client.goto(`/sites/${demoSites.sites[1]!.id}`);
+		expect(response?.status()).toBe(404);
+		await expect(client.getByRole('main')).toContainText('Not found');
 		await gotoReady(client, `/sites/${hatchery.id}`);
 		await expect(client.getByRole('heading', { name: hatchery.name, level: 1, exact: true })).toBeVisible();
 
