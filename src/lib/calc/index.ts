@@ -40,3 +40,5 @@ export type * from './types';
 export { calculateAcrossVersions, NoVersionInForce, versionInForce } from './versions';
 export type { DatedTariff, VersionedResponse } from './versions';
 export { REFERENCE_WATTS, referenceMonthlyCost } from './reference';
+export { DUTY_OF, redundancy } from './redundancy';
+export type { Duty, DutyRedundancy } from './redundancy';
