@@ -11,9 +11,11 @@ export const deviceSpecSchema = z.intersection(
 	})
 );
 
+const expectedRevision = z.number({ error: 'Send the revision you edited (expectedRevision)' }).int().min(0);
+
 export const equipmentListSchema = z
 	.object({
-		expectedRevision: z.number({ error: 'Send the revision you edited (expectedRevision)' }).int().min(0),
+		expectedRevision,
 		devices: z.array(deviceSpecSchema).max(2000, 'A scenario holds at most 2000 devices')
 	})
 	.superRefine((body, ctx) => {
@@ -32,4 +34,11 @@ export const equipmentListSchema = z
 
 export const previewSchema = z.object({
 	devices: z.array(deviceSpecSchema).max(2000, 'A scenario holds at most 2000 devices')
+});
+
+/** One row of the list through the API: `{ expectedRevision, device }`; a new row may say where it goes (0 = first). */
+export const deviceRowSchema = z.object({ expectedRevision, device: deviceSpecSchema });
+
+export const newDeviceRowSchema = deviceRowSchema.extend({
+	position: z.number({ error: 'Position must be a whole number' }).int().min(0).optional()
 });

@@ -1,9 +1,11 @@
 import { json } from '@sveltejs/kit';
 import { parseRequest } from '$lib/calc';
-import { apiError, readJsonBody } from '$lib/server/api';
+import { readJsonBody } from '$lib/server/api';
 import { requireScenarioAccess } from '$lib/server/guard';
 import { listDevices, saveDevices, StaleWrite } from '$lib/server/services/site.service';
-import { equipmentListSchema } from '$lib/server/sites/device-specs';
+import { equipmentListSchema, newDeviceRowSchema } from '$lib/server/sites/device-specs';
+import { conflict, invalid, methodNotAllowed } from '../../../site-api.server';
+import { writeList } from './rows.server';
 import type { RequestHandler } from './$types';
 
 /** GET — the scenario's equipment list, in order, with the revision to send back when saving. */
@@ -43,4 +45,32 @@ export const PUT: RequestHandler = async (event) => {
 	}
 };
 
-export const fallback: RequestHandler = () => apiError(405, 'method_not_allowed', 'Use GET or PUT.');
+/**
+ * POST `{ expectedRevision, device, position? }` — adds one device at `position` (0 = first), or at the
+ * end. Answers 201 with the new revision and the device's position; a stale revision gets 409.
+ */
+export const POST: RequestHandler = async (event) => {
+	const access = await requireScenarioAccess(event, event.params.scenarioId, 'editor');
+	const read = await readJsonBody(event);
+	if (!read.ok) return read.response;
+	const parsed = parseRequest(newDeviceRowSchema, read.body);
+	if (!parsed.success) return invalid(parsed.error.issues);
+	const { expectedRevision, device } = parsed.data;
+	if (expectedRevision !== access.scenario.revision) return conflict(access.scenario.revision);
+	const list = (await listDevices(access.scenario.id)).map((d) => d.spec);
+	const position = parsed.data.position ?? list.length;
+	if (position > list.length)
+		return invalid([{ path: 'position', message: `Position must be from 0 to ${list.length}` }]);
+	list.splice(position, 0, device);
+	const written = await writeList(access, expectedRevision, list, position);
+	if (!written.ok) return written.response;
+	return json(
+		{ revision: written.revision, position },
+		{
+			status: 201,
+			headers: { Location: `/api/v1/scenarios/${access.scenario.id}/equipment/${position}` }
+		}
+	);
+};
+
+export const fallback: RequestHandler = () => methodNotAllowed('GET', 'POST', 'PUT');
