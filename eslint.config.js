@@ -34,6 +34,7 @@ export default ts.config(
 	{
 		ignores: [
 			'build/',
+			'.test-build/',
 			'.svelte-kit/',
 			'.data/',
 			'node_modules/',

@@ -32,7 +32,7 @@ export default defineConfig({
 		}
 	},
 	webServer: {
-		command: 'node build',
+		command: `node ${process.env.RUNRATE_BUILD_DIR || 'build'}`,
 		url: `${baseURL}/health`,
 		reuseExistingServer: false,
 		timeout: 60_000,

@@ -5,7 +5,8 @@ import { vitePreprocess } from '@sveltejs/vite-plugin-svelte';
 const config = {
 	preprocess: vitePreprocess(),
 	kit: {
-		adapter: adapter(),
+		// `npm test` builds into its own folder, so a test run never replaces the bundle `npm start` serves.
+		adapter: adapter({ out: process.env.RUNRATE_BUILD_DIR || 'build' }),
 		// Keep SvelteKit's origin check on: form posts from another origin are refused.
 		csrf: { trustedOrigins: [] }
 	}

@@ -138,13 +138,13 @@ function calculation(devices: number, seed = 1): CalculateRequestInput {
 	};
 }
 
-function comparison(): CompareRequestInput {
+function comparison(count = 5, devices = 100): CompareRequestInput {
 	const { equipment: _, ...fields } = calculation(0);
 	return {
 		...fields,
-		scenarios: Array.from({ length: 5 }, (_, i) => ({
+		scenarios: Array.from({ length: count }, (_, i) => ({
 			name: `Scenario ${i + 1}`,
-			equipment: equipment(100, 10 + i)
+			equipment: equipment(devices, 10 + i)
 		})),
 		baseline: 0,
 		finance: { horizonYears: 10, discountPercent: 5, escalationPercent: 3 },
@@ -194,6 +194,7 @@ async function post(url: string, body: string): Promise<number> {
 const small = calculateRequestSchema.parse(calculation(100));
 const large = calculateRequestSchema.parse(calculation(1000));
 const scenarios = compareRequestSchema.parse(comparison());
+const export6x200 = compareRequestSchema.parse(comparison(6, 200));
 
 // The very first call also loads the holiday data and compiles the code; later calls reuse both.
 const coldStart = performance.now();
@@ -205,6 +206,7 @@ console.log(
 await time('calculate(), 100 devices, 12 months', () => calculate(small));
 await time('calculate(), 1,000 devices, 12 months', () => calculate(large));
 await time('compare(), 5 scenarios × 100 devices', () => compare(scenarios));
+await time('compare(), 6 scenarios × 200 devices (the export size)', () => compare(export6x200));
 await time('parse + calculate(), 100 devices', () =>
 	calculate(calculateRequestSchema.parse(calculation(100)))
 );

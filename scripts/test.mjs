@@ -2,7 +2,7 @@
 // "N passed, N failed". `npm test -- unit e2e` runs only the named suites.
 import { chmodSync, existsSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
-import { join } from 'node:path';
+import { basename, join } from 'node:path';
 import {
 	ensureDependencies,
 	freePort,
@@ -90,6 +90,16 @@ async function ensureChromium() {
 	});
 }
 
+/** LibreOffice Calc recalculates the exported workbook in the integration tests (headless, no GUI). */
+async function ensureLibreOffice() {
+	if (existsSync('/usr/bin/soffice')) return;
+	log('test', "installing Debian's libreoffice-calc-nogui for the workbook recalculation test");
+	await runOrThrow('apt-get', ['update', '-qq']);
+	await runOrThrow('apt-get', ['install', '-y', '-qq', 'libreoffice-calc-nogui'], {
+		env: { DEBIAN_FRONTEND: 'noninteractive' }
+	});
+}
+
 async function startServices() {
 	const [pgPort, smtpPort, mailViewPort, s3Port, appPort] = await Promise.all([
 		freePort(),
@@ -115,7 +125,9 @@ async function startServices() {
 		S3_SECRET_ACCESS_KEY: 'S3RVER',
 		APP_PORT: String(appPort),
 		PGPORT: String(pgPort),
-		PGDATA: pgEnv.PGDATA
+		PGDATA: pgEnv.PGDATA,
+		// Inside the project (so the bundle finds node_modules), one folder per run.
+		RUNRATE_BUILD_DIR: join('.test-build', basename(work))
 	};
 	await runOrThrow(...tsNode('scripts/migrate.ts'), { env });
 	await runOrThrow(...tsNode('scripts/seed.ts'), { env });
@@ -129,6 +141,7 @@ async function cleanup() {
 	for (const child of children) stopGroup(child);
 	if (pgEnv) await run('bash', ['scripts/pg.sh', 'stop'], { env: pgEnv, quiet: true });
 	rmSync(work, { recursive: true, force: true });
+	rmSync(join('.test-build', basename(work)), { recursive: true, force: true });
 }
 
 let exitCode = 0;
@@ -142,6 +155,7 @@ try {
 	if (suites.includes('unit')) await vitest('unit', {});
 	if (needsServices) {
 		if (suites.includes('e2e')) await ensureChromium();
+		if (suites.includes('integration')) await ensureLibreOffice();
 		const env = await startServices();
 		if (suites.includes('integration')) await vitest('integration', env);
 		if (suites.includes('e2e')) {

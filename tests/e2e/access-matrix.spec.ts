@@ -23,10 +23,13 @@ const demoSites = JSON.parse(readFileSync('data/demo-sites.json', 'utf8')) as {
 const SITE = demoSites.sites[0]!.id;
 const SCENARIO = demoSites.sites[0]!.scenarios[0]!.id;
 const OTHER_SITE = demoSites.sites[1]!.id;
+const PAIR = `scenarios=${SCENARIO},${demoSites.sites[0]!.scenarios[1]!.id}`;
 let privateTariff = '';
+/** A scenario of a site made for this test, which editors and owners delete and bring back. */
+let throwaway = '';
 
 type Route = {
-	method: 'GET' | 'POST' | 'PUT';
+	method: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
 	path: () => string;
 	form?: Record<string, string>;
 	json?: unknown;
@@ -133,6 +136,68 @@ const routes: Route[] = [
 		path: () => `/sites/${OTHER_SITE}/scenarios/${SCENARIO}`,
 		expect: [303, 404, 404, 404, 404, 404]
 	},
+	// The machine API of sites, scenarios and single devices.
+	{ method: 'GET', path: () => `/api/v1/sites/${SITE}`, expect: [401, 200, 200, 200, 404, 404] },
+	{ method: 'PUT', path: () => `/api/v1/sites/${SITE}`, json: {}, expect: [401, 403, 400, 400, 404, 404] },
+	{ method: 'GET', path: () => `/api/v1/scenarios/${SCENARIO}`, expect: [401, 200, 200, 200, 404, 404] },
+	{
+		method: 'PATCH',
+		path: () => `/api/v1/scenarios/${SCENARIO}`,
+		json: {},
+		expect: [401, 403, 400, 400, 404, 404]
+	},
+	{
+		method: 'PATCH',
+		path: () => `/api/v1/scenarios/${SCENARIO}`,
+		json: { restored: true },
+		expect: [401, 403, 409, 409, 404, 404]
+	},
+	{
+		method: 'POST',
+		path: () => `/api/v1/scenarios/${SCENARIO}/equipment`,
+		json: {},
+		expect: [401, 403, 400, 400, 404, 404]
+	},
+	{
+		method: 'GET',
+		path: () => `/api/v1/scenarios/${SCENARIO}/equipment/0`,
+		expect: [401, 200, 200, 200, 404, 404]
+	},
+	{
+		method: 'GET',
+		path: () => `/api/v1/scenarios/${SCENARIO}/equipment/999`,
+		expect: [401, 404, 404, 404, 404, 404]
+	},
+	{
+		method: 'PUT',
+		path: () => `/api/v1/scenarios/${SCENARIO}/equipment/0`,
+		json: {},
+		expect: [401, 403, 400, 400, 404, 404]
+	},
+	{
+		method: 'DELETE',
+		path: () => `/api/v1/scenarios/${SCENARIO}/equipment/0`,
+		expect: [401, 403, 400, 400, 404, 404]
+	},
+	{ method: 'DELETE', path: () => `/api/v1/scenarios/${throwaway}`, expect: [401, 403, 200, 200, 404, 404] },
+	{
+		method: 'PATCH',
+		path: () => `/api/v1/scenarios/${throwaway}`,
+		json: { restored: true },
+		expect: [401, 403, 200, 200, 404, 404]
+	},
+	// Comparisons of scenarios the caller may read, and their exports.
+	{ method: 'GET', path: () => '/compare', expect: [303, 200, 200, 200, 200, 200] },
+	...['/compare', '/compare/report'].map((page) => ({
+		method: 'GET' as const,
+		path: () => `${page}?${PAIR}`,
+		expect: [303, 200, 200, 200, 404, 404]
+	})),
+	...['/api/v1/compare', '/api/v1/compare/export.csv', '/api/v1/compare/export.xlsx'].map((api) => ({
+		method: 'GET' as const,
+		path: () => `${api}?${PAIR}`,
+		expect: [401, 200, 200, 200, 404, 404]
+	})),
 	...['equipment.csv', 'equipment.xlsx', 'import/template.csv'].map((file) => ({
 		method: 'GET' as const,
 		path: () => `/sites/${SITE}/scenarios/${SCENARIO}/${file}`,
@@ -244,6 +309,21 @@ test.beforeAll(async ({ browser, baseURL }) => {
 	});
 	expect(res.status()).toBe(201);
 	privateTariff = (await res.json()).id;
+	const site = await owner.post('/api/v1/sites', {
+		data: {
+			workspaceId: DEMO_WS.id,
+			name: 'Matrix test site (invented)',
+			timezone: 'America/Chicago',
+			country: 'US',
+			currency: 'USD'
+		}
+	});
+	expect(site.status()).toBe(201);
+	const made = await owner.post(`/api/v1/sites/${(await site.json()).id}/scenarios`, {
+		data: { name: 'Matrix throwaway' }
+	});
+	expect(made.status()).toBe(201);
+	throwaway = (await made.json()).id;
 });
 
 for (const [column, who] of WHO.entries()) {

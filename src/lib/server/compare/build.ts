@@ -1,0 +1,165 @@
+import type { RequestEvent } from '@sveltejs/kit';
+import {
+	compare,
+	compareRequestSchema,
+	parseRequest,
+	redundancy,
+	versionInForce,
+	type CompareRequest,
+	type Tariff
+} from '$lib/calc';
+import { hasMainsInWater } from '$lib/cautions';
+import type { ComparedScenario, ComparisonQuery, ComparisonReport } from '$lib/compare/types';
+import type { DeviceSpec } from '$lib/server/db/schema';
+import { requireScenarioAccess } from '$lib/server/guard';
+import { equipmentOf, tariffFor } from '$lib/server/services/results.service';
+import { findTariff } from '$lib/server/services/tariff.service';
+import { listDevices, type ScenarioRow, type SiteRow } from '$lib/server/services/site.service';
+import { assumptionsOf } from './assumptions';
+
+/** Everything a comparison of stored scenarios is made of: the report, and the exact request given to compare(). */
+export interface Comparison {
+	report: ComparisonReport;
+	request: CompareRequest;
+	specs: DeviceSpec[][];
+}
+
+export type Built = { ok: true; comparison: Comparison } | { ok: false; message: string; path: string };
+
+interface Loaded {
+	site: SiteRow;
+	scenario: ScenarioRow;
+	specs: DeviceSpec[];
+	tariff: Tariff;
+	tariffName: string;
+	tariffVersion: number;
+	holidays: unknown;
+	source: string;
+	checkedOn: string;
+}
+
+async function load(event: RequestEvent, id: string, firstDay: string): Promise<Loaded | string> {
+	// Unreadable, deleted or unknown scenarios are all "not found" (404), as everywhere else.
+	const { site, scenario } = await requireScenarioAccess(event, id, 'viewer');
+	const resolved = await tariffFor(site, scenario);
+	if (!resolved) return `“${scenario.name}” (${site.name}) has no tariff: pick one for the site first`;
+	const version = versionInForce(resolved.versions, firstDay);
+	if (!version) {
+		return `No version of ${resolved.tariff.name} is in force on ${firstDay}, the first day compared: choose another first month`;
+	}
+	const specs = (await listDevices(scenario.id)).map((d) => d.spec);
+	const stored = (await findTariff(resolved.tariff.id))?.versions.find((v) => v.id === version.id);
+	return {
+		source: stored?.source ?? '',
+		checkedOn: stored?.checkedOn ?? '',
+		site,
+		scenario,
+		specs,
+		tariff: version.tariff,
+		tariffName: `${resolved.tariff.utility} — ${resolved.tariff.name}`,
+		tariffVersion: version.number,
+		holidays: resolved.tariff.holidays ?? {
+			country: site.country,
+			...(site.region ? { region: site.region } : {})
+		}
+	};
+}
+
+/** Per device category, the year's kWh, from the periods' device shares (devices in request order). */
+function kwhByCategory(
+	specs: DeviceSpec[],
+	periods: ComparisonReport['result']['scenarios'][number]['periods']
+) {
+	const totals: Record<string, number> = {};
+	specs.forEach((spec, i) => {
+		const category = spec.category ?? 'other';
+		totals[category] =
+			(totals[category] ?? 0) + periods.reduce((sum, p) => sum + (p.equipment[i]?.kwh ?? 0), 0);
+	});
+	return totals;
+}
+
+/**
+ * Compares stored scenarios the caller may read, over the 12 months from `query.start`, each on the
+ * tariff version in force on the first day compared. Times and holidays follow the baseline's site.
+ */
+export async function buildComparison(event: RequestEvent, query: ComparisonQuery): Promise<Built> {
+	const firstDay = `${query.start}-01`;
+	const loaded: Loaded[] = [];
+	for (const id of query.scenarios) {
+		const one = await load(event, id, firstDay);
+		if (typeof one === 'string') return { ok: false, message: one, path: 'scenarios' };
+		loaded.push(one);
+	}
+	const baseline = query.scenarios.indexOf(query.baseline);
+	const base = loaded[baseline]!;
+	const currencies = new Set(loaded.map((l) => l.tariff.currency));
+	if (currencies.size > 1) {
+		return {
+			ok: false,
+			path: 'scenarios',
+			message: `These scenarios are priced in different currencies (${[...currencies].join(', ')}); compare scenarios in one currency`
+		};
+	}
+	const names = loaded.map((l) => l.scenario.name);
+	const label = (l: Loaded, i: number) =>
+		names.indexOf(l.scenario.name) === i && names.lastIndexOf(l.scenario.name) === i
+			? l.scenario.name
+			: `${l.scenario.name} (${l.site.name})`;
+	const parsed = parseRequest(compareRequestSchema, {
+		period: { start: query.start, months: 12 },
+		timezone: base.site.timezone,
+		holidays: base.holidays,
+		tariff: base.tariff,
+		scenarios: loaded.map((l, i) => ({
+			name: label(l, i),
+			equipment: l.specs.map(equipmentOf),
+			tariff: l.tariff
+		})),
+		baseline,
+		finance: {
+			horizonYears: query.horizonYears,
+			discountPercent: query.discountPercent,
+			escalationPercent: query.escalationPercent
+		},
+		emissionFactorKgPerKwh: query.emissionKgPerKwh
+	});
+	if (!parsed.success) {
+		const issue = parsed.error.issues[0];
+		return {
+			ok: false,
+			path: 'scenarios',
+			message: issue ? `${issue.path}: ${issue.message}` : 'These scenarios cannot be compared'
+		};
+	}
+	const result = compare(parsed.data);
+	const scenarios: ComparedScenario[] = loaded.map((l, i) => ({
+		id: l.scenario.id,
+		name: label(l, i),
+		siteId: l.site.id,
+		siteName: l.site.name,
+		tariffName: l.tariffName,
+		tariffVersion: l.tariffVersion,
+		tariffSource: l.source,
+		tariffCheckedOn: l.checkedOn,
+		deviceCount: l.specs.length,
+		kwhByCategory: kwhByCategory(l.specs, result.scenarios[i]?.periods ?? []),
+		redundancy: redundancy(parsed.data.scenarios[i]?.equipment ?? []),
+		caution: hasMainsInWater(l.specs)
+	}));
+	const report: ComparisonReport = {
+		query,
+		currency: base.tariff.currency,
+		timezone: base.site.timezone,
+		baseline,
+		scenarios,
+		result,
+		assumptions: assumptionsOf(
+			query,
+			scenarios,
+			loaded.map((l) => l.site.timezone),
+			base.site.timezone
+		)
+	};
+	return { ok: true, comparison: { report, request: parsed.data, specs: loaded.map((l) => l.specs) } };
+}

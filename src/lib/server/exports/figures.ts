@@ -1,0 +1,102 @@
+import { buildCalendar } from '$lib/calc/calendar';
+import { DemandMeter } from '$lib/calc/demand';
+import { UsageMeter } from '$lib/calc/energy';
+import type { Equipment, Schedule } from '$lib/calc/equipment.schema';
+import { ProfileBook, groupLoads } from '$lib/calc/loads';
+import { billingSpans } from '$lib/calc/periods';
+import { RateBook } from '$lib/calc/rates';
+import type { CompareRequest } from '$lib/calc/request.schema';
+import type { Tariff } from '$lib/calc/tariff.schema';
+
+/**
+ * What the workbook cannot express as a simple formula, computed with the core's own modules: the
+ * 15-minute grid in the site's time zone (daylight-saving days, weekends, holidays), time-of-use
+ * periods and the moment of each demand peak. Everything else in the workbook is a formula over these.
+ */
+export interface MonthFigures {
+	label: string;
+	/** 1–12. */
+	month: number;
+	year: number;
+	days: number;
+	hours: number;
+}
+
+/** Devices that share a schedule and active months, as the core groups them. */
+export interface ScheduleFigures {
+	schedule: Schedule;
+	months: number[];
+	/** Per month: hours the devices draw power (standby or running), and hours they run. */
+	hours: number[];
+	onHours: number[];
+	/** Per time-of-use energy charge (by index into the tariff's energy charges), per month: Σ price × hours. */
+	tou: Map<number, { weighted: number[]; onWeighted: number[] }>;
+	/** Per demand charge, per month: the share of running power they may draw at the peak, or null. */
+	atPeak: Array<Array<number | null>>;
+}
+
+export interface ScenarioFigures {
+	tariff: Tariff;
+	months: MonthFigures[];
+	schedules: ScheduleFigures[];
+	/** Per device (the request's order): index into `schedules`, and its running and standby kW. */
+	deviceSchedule: number[];
+	runKw: number[];
+	standbyKw: number[];
+	/** Per demand charge, per month: the peak kW the charge prices, or null when it measures nothing. */
+	peakKw: Array<Array<number | null>>;
+}
+
+/** The figures of one scenario of a comparison, on its own tariff (or the request's). */
+export function scenarioFigures(
+	request: CompareRequest,
+	equipment: readonly Equipment[],
+	tariff: Tariff
+): ScenarioFigures {
+	const spans = billingSpans(request.period);
+	const calendar = buildCalendar(request.timezone, request.holidays, spans);
+	const loads = groupLoads(equipment);
+	const profiles = new ProfileBook(loads, calendar);
+	const rates = new RateBook(tariff, calendar);
+	const usage = new UsageMeter(calendar, loads, profiles, rates);
+	const demand = new DemandMeter(calendar, profiles, loads.groups);
+	const touCharges = tariff.energyCharges.flatMap((charge, e) => (charge.type === 'tou' ? [e] : []));
+	const schedules: ScheduleFigures[] = loads.groups.map((group) => ({
+		schedule: loads.schedules[group.schedule] ?? { type: 'always' },
+		months: [...group.months.keys()].filter((month) => group.months[month] === 1),
+		hours: [],
+		onHours: [],
+		tou: new Map(touCharges.map((e) => [e, { weighted: [], onWeighted: [] }])),
+		atPeak: tariff.demandCharges.map(() => [])
+	}));
+	const peakKw: ScenarioFigures['peakKw'] = tariff.demandCharges.map(() => []);
+	const months = spans.map((span, i) => {
+		const days = calendar.spans[i];
+		if (!days) throw new Error('Calendar is missing a billing period');
+		const sums = usage.spanUsage(days);
+		schedules.forEach((figures, g) => {
+			figures.hours.push(sums.hours[g] ?? 0);
+			figures.onHours.push(sums.onHours[g] ?? 0);
+			for (const [e, tou] of figures.tou) {
+				tou.weighted.push(sums.weighted[g * sums.charges + e] ?? 0);
+				tou.onWeighted.push(sums.onWeighted[g * sums.charges + e] ?? 0);
+			}
+		});
+		tariff.demandCharges.forEach((charge, k) => {
+			const peak = demand.spanPeak(days, (c) => rates.demandMask(k, c), charge.intervalMinutes);
+			peakKw[k]?.push(peak ? peak.kw : null);
+			schedules.forEach((figures, g) => figures.atPeak[k]?.push(peak ? demand.mayRunAt(g, peak) : null));
+		});
+		const [year = 0, month = 0] = span.from.split('-').map(Number);
+		return { label: span.label, month, year, days: days.days, hours: days.hours };
+	});
+	return {
+		tariff,
+		months,
+		schedules,
+		deviceSchedule: loads.devices.map((load) => load.group),
+		runKw: loads.devices.map((load) => load.runKw),
+		standbyKw: loads.devices.map((load) => load.standbyKw),
+		peakKw
+	};
+}

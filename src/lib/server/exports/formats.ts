@@ -1,0 +1,58 @@
+import { MONTH_ABBREVIATIONS } from '$lib/calc/months';
+import type { MonthFigures } from './figures';
+
+/** Number formats of the workbook, with money in one currency. */
+export interface Formats {
+	money: string;
+	/** Per kWh and per kW rates: up to five decimals, as tariffs publish them. */
+	rate: string;
+	kwh: string;
+	kw: string;
+	hours: string;
+	percent: string;
+	years: string;
+	fraction: string;
+	whole: string;
+}
+
+/** The symbol a reader knows the currency by ("$", "€", "CA$"), or its code. */
+function currencySymbol(currency: string): string {
+	try {
+		const parts = new Intl.NumberFormat('en-US', { style: 'currency', currency }).formatToParts(1);
+		return parts.find((part) => part.type === 'currency')?.value ?? currency;
+	} catch {
+		return currency;
+	}
+}
+
+export function formatsFor(currency: string): Formats {
+	const symbol = `"${currencySymbol(currency).replaceAll('"', '')}"`;
+	return {
+		money: `${symbol}#,##0.00`,
+		rate: `${symbol}0.00###`,
+		kwh: '#,##0.000',
+		kw: '#,##0.000',
+		hours: '#,##0.00',
+		percent: '0.00%',
+		years: '0.00',
+		fraction: '0.0000',
+		whole: '0'
+	};
+}
+
+/** "Jan 2027", for month columns. */
+export function monthHeading(month: MonthFigures): string {
+	return `${MONTH_ABBREVIATIONS[month.month - 1] ?? month.label} ${month.year}`;
+}
+
+/**
+ * A sheet name from a scenario's position and name: at most 31 characters, none of the characters a
+ * sheet name may not hold (and no apostrophes, so references never need escaping).
+ */
+export function scenarioSheetName(index: number, name: string): string {
+	const clean = name
+		.replace(/[\\/?*[\]:']/g, ' ')
+		.replace(/\s+/g, ' ')
+		.trim();
+	return `${index + 1} ${clean}`.slice(0, 31).trim();
+}

@@ -1,0 +1,48 @@
+/**
+ * The calculation rules in words, as the /rules page and the core's doc comments state them, for the
+ * workbook's Assumptions & sources sheet. Each entry is a heading and its sentences.
+ */
+export const RULES: ReadonlyArray<readonly [string, string]> = [
+	[
+		'Power',
+		'Each unit draws its watts, or volts × amps × power factor on single phase, or √3 × volts × amps × power factor on three phase (line-to-line volts). The power factor defaults to 1, so nameplate amps × volts overstates a motor’s real power. Running power = per unit × quantity × duty %; when its schedule has it off a device draws its standby watts × quantity; outside its active months it draws nothing.'
+	],
+	[
+		'Time and the calendar',
+		'Time runs on 15-minute intervals of real time in the site’s time zone: a day when clocks spring forward has 23 hours, the day they fall back has 25. Time windows are wall-clock times; a window ending before it starts (22:00–06:00) covers the evening and the early morning of the same date. For equipment a public holiday is an ordinary day; for tariff periods and demand windows it prices like a weekend unless the tariff says otherwise.'
+	],
+	[
+		'Schedules',
+		'Always on: every interval. Hours a day: spread evenly over the day’s intervals on the chosen days. Time windows: on inside them. On/off cycling: on for on ÷ (on + off) of every interval inside its windows. Triggered runs: runs × minutes per run, spread evenly over its windows.'
+	],
+	[
+		'Energy charges',
+		'Several energy charges add up. A flat charge prices every kWh alike; a tiered charge prices the month’s total kWh tier by tier; a time-of-use charge prices each interval at the rate of the first matching period of its season, or the season’s other rate. A charge limited to some months applies only in those months.'
+	],
+	[
+		'Demand charges',
+		'The largest kW of the month over the charge’s months, days and windows, counting each device at full running power wherever its schedule may run it (a deliberate worst case) and at standby otherwise; for 60-minute demand, each hour’s kW is the mean of its four quarter hours.'
+	],
+	[
+		'Fixed charges, riders, minimum bill and taxes',
+		'A per-month charge is billed once a month, a per-day charge × the days in the month. Riders are per kWh on all kWh. Subtotal = fixed + energy + demand + riders; below the minimum, a minimum line adds the difference. Each tax is its percent of that subtotal; taxes do not compound.'
+	],
+	[
+		'Rounding',
+		'Each charge line is rounded to the cent, halves away from zero, as a bill is; the month’s total is the sum of the rounded lines, and the year’s cost the sum of the months. kWh are not rounded.'
+	],
+	[
+		'Each device’s share',
+		'A device’s cost is its energy charges at the rates its own intervals met (a tiered charge at the month’s average tier rate), its riders, its part of each demand charge (its kW at the peak), and the taxes on those, rounded to the cent. Fixed charges and the minimum line are shared cost; devices + shared cost = the bill, within rounding.'
+	],
+	[
+		'Comparing scenarios',
+		'Capital cost = Σ quantity × (purchase + installation) + one-off costs. Year 0’s cash flow is the capital cost; year t’s is the annual cost × (1 + escalation)^(t − 1) + maintenance + the purchase price of every device whose life ends in year t (before the horizon). Lifecycle cost = Σ cash flow ÷ (1 + discount rate)^year. Savings = the baseline’s annual cost − this scenario’s. Simple payback = extra capital over the baseline ÷ savings (none when nothing is saved). CO₂ = kWh × the emission factor.'
+	]
+];
+
+/** What the workbook holds as values, and why; everything else is a formula. */
+export const VALUES_NOTE = [
+	'Most figures here are live formulas: change a quantity, the watts, amps, volts, power factor, duty, standby watts, costs or life of a device, a flat or tiered rate, a demand rate, a fixed charge, rider, tax or minimum, or the discount rate, escalation, horizon or emission factor, and the workbook recalculates.',
+	'Some rules are no simple formula, so each scenario sheet holds what Runrate computed for them as values (the schedules table): hours in use and running hours per month (the 15-minute grid, daylight-saving days, weekdays and weekends), the price-weighted hours of each time-of-use charge (its periods, seasons and holidays), and each schedule’s share of running power at each demand peak (when the peak happens). Changing a schedule, active months or a time-of-use rate therefore needs Runrate; a large change in a quantity could also move a demand peak to another moment, which the workbook does not follow.'
+];

@@ -1,0 +1,108 @@
+import type { Tariff } from '$lib/calc/tariff.schema';
+import { demandText, riderText, taxText } from '$lib/tariff-sentences';
+import type { SheetWriter } from './cells';
+import { formatsFor } from './formats';
+import { type EnergyCells, TariffRows } from './tariff-rows';
+
+/** Where a tariff's figures sit on the Tariff sheet, as fixed references the other sheets use. */
+export interface TariffCells {
+	tariff: Tariff;
+	fixed: Array<{ perMonth: string } | { perDay: string }>;
+	/** Per energy charge: a flat rate, tier rows, or null for time-of-use (priced through computed values). */
+	energy: EnergyCells[];
+	demand: string[];
+	riders: string[];
+	/** The riders' sum per kWh, and the taxes' sum as a fraction (null when the tariff has none). */
+	ridersPerKwh: string | null;
+	taxRate: string | null;
+	taxes: string[];
+	minimum: string | null;
+}
+
+export interface TariffUse {
+	tariff: Tariff;
+	name: string;
+	version: number | null;
+	scenarios: string[];
+}
+
+const sum = (values: readonly number[]) => values.reduce((total, value) => total + value, 0);
+
+const MINIMUM_NOTE = 'A minimum line adds the difference when the subtotal is below it';
+const COLUMNS = ['Kind', 'Charge', 'Rate or amount', 'Unit', 'Up to kWh', 'When, and notes'];
+
+/** Writes one block per distinct tariff; answers the cells of each, in the order given. */
+export function writeTariffSheet(out: SheetWriter, uses: readonly TariffUse[]): TariffCells[] {
+	out.widths([20, 30, 16, 12, 12, 90]);
+	out.line(
+		1,
+		'Tariffs used in this comparison (invented or as entered; check them against your own)',
+		6,
+		'title'
+	);
+	out.line(
+		2,
+		'Pale cells are live: change a rate, tier, rider, tax or minimum and the Monthly sheet and the Summary follow. Time-of-use rates are shown for reference only: the scenario sheets hold their price-weighted hours as computed values, so changing a time-of-use rate here does not recalculate them.',
+		6,
+		'note'
+	);
+	out.sheet.getRow(2).height = 45;
+	out.freeze(2, 0);
+	let row = 4;
+	return uses.map((use) => {
+		const written = writeBlock(out, use, row);
+		row = written.next + 1;
+		return written.cells;
+	});
+}
+
+function writeBlock(out: SheetWriter, use: TariffUse, start: number): { cells: TariffCells; next: number } {
+	const { tariff } = use;
+	const { currency } = tariff;
+	const formats = formatsFor(currency);
+	const version = use.version === null ? 'no version number' : `version ${use.version}`;
+	out.text(start, 1, `${use.name} (${version})`, 'heading');
+	out.text(start + 1, 1, `Used by: ${use.scenarios.join('; ')}`);
+	const holidays = tariff.holidaysAsWeekends ? 'yes' : 'no';
+	out.text(start + 2, 1, `Currency ${currency}. Public holidays price as weekends: ${holidays}.`);
+	out.headers(start + 3, 1, COLUMNS);
+	const rows = new TariffRows(out, formats, start + 4);
+	const fixed = tariff.fixedCharges.map((charge) =>
+		charge.perMonth !== undefined
+			? { perMonth: rows.put('Fixed', charge.label, charge.perMonth, formats.money, 'per month') }
+			: { perDay: rows.put('Fixed', charge.label, charge.perDay, formats.money, 'per day') }
+	);
+	const energy = tariff.energyCharges.map((charge) => rows.energy(charge));
+	const demand = tariff.demandCharges.map((charge) =>
+		rows.put('Demand', charge.label, charge.perKw, formats.rate, 'per kW', demandText(charge, currency))
+	);
+	const riders = tariff.riders.map((rider) =>
+		rows.put('Rider', rider.label, rider.perKwh, formats.rate, 'per kWh', riderText(rider.perKwh, currency))
+	);
+	const minimum =
+		tariff.minimumMonthly != null
+			? rows.put(
+					'Minimum bill',
+					'Minimum monthly',
+					tariff.minimumMonthly,
+					formats.money,
+					'per month',
+					MINIMUM_NOTE
+				)
+			: null;
+	const taxes = tariff.taxes.map((tax) =>
+		rows.put('Tax', tax.label, tax.percent, '0.####', 'percent', taxText(tax.percent))
+	);
+	// The core adds the riders per kWh, and the taxes as fractions, before it allocates them to devices.
+	const riderSum = sum(tariff.riders.map((rider) => rider.perKwh));
+	const ridersPerKwh =
+		riders.length > 0 ? rows.helper('Riders together', riders.join('+'), riderSum, formats.rate) : null;
+	const taxSum = sum(tariff.taxes.map((tax) => tax.percent / 100));
+	const taxFormula = taxes.map((tax) => `${tax}/100`).join('+');
+	const taxRate =
+		taxes.length > 0 ? rows.helper('Taxes together (fraction)', taxFormula, taxSum, formats.fraction) : null;
+	return {
+		cells: { tariff, fixed, energy, demand, riders, ridersPerKwh, taxRate, taxes, minimum },
+		next: rows.row
+	};
+}

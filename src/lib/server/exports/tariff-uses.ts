@@ -1,0 +1,33 @@
+import type { Tariff } from '$lib/calc/tariff.schema';
+import type { TariffUse } from './tariff-sheet';
+
+/**
+ * The distinct tariffs of a comparison (equal JSON is one tariff), each with the name and version the
+ * first scenario priced on it gives, and the sheets of the scenarios that use it; `useOf[s]` is the
+ * index of scenario s's tariff among them.
+ */
+export function tariffUses(
+	tariffs: readonly Tariff[],
+	sheets: readonly string[],
+	meta: ReadonlyArray<{ tariffName: string; tariffVersion: number | null } | undefined>
+): { uses: TariffUse[]; useOf: number[] } {
+	const uses: TariffUse[] = [];
+	const keys: string[] = [];
+	const useOf = tariffs.map((tariff, s) => {
+		const key = JSON.stringify(tariff);
+		let index = keys.indexOf(key);
+		if (index < 0) {
+			index = keys.push(key) - 1;
+			const about = meta[s];
+			uses.push({
+				tariff,
+				name: about?.tariffName ?? 'Tariff',
+				version: about?.tariffVersion ?? null,
+				scenarios: []
+			});
+		}
+		uses[index]?.scenarios.push(sheets[s] ?? '');
+		return index;
+	});
+	return { uses, useOf };
+}

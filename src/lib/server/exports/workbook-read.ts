@@ -1,0 +1,38 @@
+/** Reading an exported workbook back in the workbook's tests. */
+import ExcelJS from 'exceljs';
+import { type ComparisonExport, comparisonWorkbook } from './comparison-workbook';
+
+/** Builds the workbook of an export and reads it back with exceljs, as a reader's program would open it. */
+export async function readBack(input: ComparisonExport): Promise<ExcelJS.Workbook> {
+	const buffer = await comparisonWorkbook(input);
+	const workbook = new ExcelJS.Workbook();
+	// exceljs types its input as its own Buffer (an ArrayBuffer); Node's Buffer is what it reads at run time.
+	await workbook.xlsx.load(buffer as unknown as ExcelJS.Buffer);
+	return workbook;
+}
+
+export function sheet(workbook: ExcelJS.Workbook, name: string): ExcelJS.Worksheet {
+	const found = workbook.getWorksheet(name);
+	if (!found) throw new Error(`No sheet ${name}`);
+	return found;
+}
+
+/** A formula cell's formula (shared copies give theirs translated) and cached result. */
+export function formulaAt(
+	worksheet: ExcelJS.Worksheet,
+	address: string
+): { formula: string; result: unknown } {
+	const cell = worksheet.getCell(address);
+	if (cell.type !== ExcelJS.ValueType.Formula) throw new Error(`${address} holds no formula`);
+	// exceljs reads a cached 0 back as no result.
+	return { formula: cell.formula, result: cell.result ?? 0 };
+}
+
+/** Every text cell of a sheet. */
+export function texts(worksheet: ExcelJS.Worksheet): string[] {
+	const found: string[] = [];
+	worksheet.eachRow((row) =>
+		row.eachCell((cell) => void (typeof cell.value === 'string' && found.push(cell.value)))
+	);
+	return found;
+}

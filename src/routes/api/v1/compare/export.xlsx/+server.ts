@@ -1,0 +1,28 @@
+import { ELECTRICAL_CAUTION } from '$lib/cautions';
+import { comparisonFromQuery } from '$lib/server/compare/request';
+import { exportFileName } from '$lib/server/compare/file-name';
+import { comparisonWorkbook } from '$lib/server/exports/comparison-workbook';
+import { download } from '$lib/server/exports/download';
+import type { RequestHandler } from './$types';
+
+/** GET …/export.xlsx?… — the comparison as a workbook that recalculates; viewers may export. */
+export const GET: RequestHandler = async (event) => {
+	const found = await comparisonFromQuery(event);
+	if (!found.ok) return found.response;
+	const { report, request } = found.comparison;
+	const sites = [...new Set(report.scenarios.map((s) => s.siteName))];
+	const workbook = await comparisonWorkbook({
+		title: sites.join(', '),
+		generatedAt: new Date().toISOString(),
+		request,
+		response: report.result,
+		scenarios: report.scenarios.map((s) => ({
+			siteName: s.siteName,
+			tariffName: s.tariffName,
+			tariffVersion: s.tariffVersion
+		})),
+		emissionSource: report.query.emissionSource || 'Not given',
+		cautions: report.scenarios.some((s) => s.caution) ? [ELECTRICAL_CAUTION] : []
+	});
+	return download(new Uint8Array(workbook), exportFileName(report, 'comparison'), 'xlsx');
+};
