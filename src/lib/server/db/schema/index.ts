@@ -2,3 +2,4 @@ export * from './auth';
 export * from './workspace';
 export * from './tariff';
 export * from './site';
+export * from './bill';

@@ -114,7 +114,7 @@ export const auditEvents = pgTable(
 		siteId: uuid('site_id').references(() => sites.id, { onDelete: 'cascade' }),
 		userId: text('user_id').references(() => users.id, { onDelete: 'set null' }),
 		userName: text('user_name'),
-		entity: text('entity', { enum: ['site', 'scenario', 'device'] }).notNull(),
+		entity: text('entity', { enum: ['site', 'scenario', 'device', 'bill'] }).notNull(),
 		entityId: uuid('entity_id').notNull(),
 		action: text('action').notNull(),
 		summary: text('summary').notNull(),
