@@ -10,12 +10,38 @@ class PerAddress implements RateLimiterPlugin<string> {
 }
 
 // In-memory stores: one app process. Past one process these move to a shared store (see DEVELOPERS.md).
-export const signInLimiter = new RateLimiter<string>({
-	// Per client generous enough for a shared school or office network; per address strict.
+
+/**
+ * Password sign-in counts failed attempts only, so people who sign in often are never slowed down.
+ * Per client generous enough for a shared school or office network; per address strict: the tenth
+ * wrong password for an address locks it (and the client) for 15 minutes, before any further guess
+ * is even checked.
+ */
+const signInFailures = new RateLimiter<string>({
 	IP: [120, '15m'],
 	IPUA: [60, '15m'],
-	plugins: [new PerAddress([10, '15m'])]
+	plugins: [new PerAddress([9, '15m'])]
 });
+const LOCK_MS = 15 * 60 * 1000;
+const lockedUntil = new Map<string, number>();
+const clientKey = (event: RequestEvent) =>
+	`client:${event.getClientAddress()}|${event.request.headers.get('user-agent') ?? ''}`;
+
+export function signInLocked(event: RequestEvent, email: string): boolean {
+	const now = Date.now();
+	return [`addr:${email}`, clientKey(event)].some((key) => {
+		const until = lockedUntil.get(key);
+		if (until !== undefined && until <= now) lockedUntil.delete(key);
+		return until !== undefined && until > now;
+	});
+}
+
+export async function recordSignInFailure(event: RequestEvent, email: string): Promise<void> {
+	if (!(await signInFailures.isLimited(event, email))) return;
+	const until = Date.now() + LOCK_MS;
+	lockedUntil.set(`addr:${email}`, until);
+	lockedUntil.set(clientKey(event), until);
+}
 
 export const signUpLimiter = new RateLimiter({ IP: [20, 'h'], IPUA: [10, 'h'] });
 

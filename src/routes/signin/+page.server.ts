@@ -4,7 +4,7 @@ import { handOver } from '$lib/server/auth/hand-over';
 import { verifyPassword } from '$lib/server/auth/password';
 import { db } from '$lib/server/db';
 import { users } from '$lib/server/db/schema';
-import { mailLinkLimiter, signInLimiter, TOO_MANY } from '$lib/server/rate-limit';
+import { mailLinkLimiter, recordSignInFailure, signInLocked, TOO_MANY } from '$lib/server/rate-limit';
 import { sendVerification } from '$lib/server/services/account.service';
 import { magicLinkSchema, signInSchema } from '$lib/forms/auth.schema';
 import { fieldErrors, keepValues } from '$lib/forms/errors';
@@ -29,13 +29,15 @@ export const actions = {
 		const parsed = signInSchema.safeParse(Object.fromEntries(form));
 		if (!parsed.success) return fail(400, { action: 'password', values, errors: fieldErrors(parsed.error) });
 		const { email, password } = parsed.data;
-		if (await signInLimiter.isLimited(event, email))
+		if (signInLocked(event, email))
 			return fail(429, { action: 'password', values, errors: { form: TOO_MANY } });
 
 		const [user] = await db.select().from(users).where(eq(users.email, email));
 		// One message whether the address is unknown or the password wrong: the form must not tell who has an account.
-		if (!(await verifyPassword(password, user?.passwordHash)) || !user)
+		if (!(await verifyPassword(password, user?.passwordHash)) || !user) {
+			await recordSignInFailure(event, email);
 			return fail(400, { action: 'password', values, errors: { password: NO_MATCH } });
+		}
 		if (!user.emailVerified) {
 			await sendVerification(user.id, user.email, event.url.origin);
 			return fail(400, {
