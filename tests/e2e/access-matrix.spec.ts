@@ -27,6 +27,9 @@ const PAIR = `scenarios=${SCENARIO},${demoSites.sites[0]!.scenarios[1]!.id}`;
 let privateTariff = '';
 /** A scenario of a site made for this test, which editors and owners delete and bring back. */
 let throwaway = '';
+/** A bill of the demo site and its attached PDF (invented), made for this test. */
+let bill = '';
+let attachment = '';
 
 type Route = {
 	method: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
@@ -186,6 +189,67 @@ const routes: Route[] = [
 		json: { restored: true },
 		expect: [401, 403, 200, 200, 404, 404]
 	},
+	// Bills, their files and metered usage of the demo site.
+	...['bills', 'bills/template.csv', 'usage'].map((page) => ({
+		method: 'GET' as const,
+		path: () => `/sites/${SITE}/${page}`,
+		expect: [303, 200, 200, 200, 404, 404]
+	})),
+	...['bills?/add', 'bills?/import', 'usage?/import'].map((action) => ({
+		method: 'POST' as const,
+		path: () => `/sites/${SITE}/${action}`,
+		form: { none: '' },
+		expect: [401, 403, 400, 400, 404, 404]
+	})),
+	{ method: 'GET', path: () => `/sites/${SITE}/bills/${bill}`, expect: [303, 200, 200, 200, 404, 404] },
+	{ method: 'GET', path: () => `/sites/${OTHER_SITE}/bills/${bill}`, expect: [303, 404, 404, 404, 404, 404] },
+	{
+		method: 'POST',
+		path: () => `/sites/${SITE}/bills/${bill}?/update`,
+		form: { kwh: 'x' },
+		expect: [401, 403, 400, 400, 404, 404]
+	},
+	{
+		method: 'GET',
+		path: () => `/sites/${SITE}/bills/${bill}/attachments/${attachment}`,
+		expect: [303, 200, 200, 200, 404, 404]
+	},
+	{
+		method: 'GET',
+		path: () => `/sites/${OTHER_SITE}/bills/${bill}/attachments/${attachment}`,
+		expect: [303, 404, 404, 404, 404, 404]
+	},
+	{ method: 'GET', path: () => `/api/v1/sites/${SITE}/bills`, expect: [401, 200, 200, 200, 404, 404] },
+	{
+		method: 'POST',
+		path: () => `/api/v1/sites/${SITE}/bills`,
+		json: {},
+		expect: [401, 403, 400, 400, 404, 404]
+	},
+	...['', '/reconciliation'].map((tail) => ({
+		method: 'GET' as const,
+		path: () => `/api/v1/sites/${SITE}/bills/${bill}${tail}`,
+		expect: [401, 200, 200, 200, 404, 404]
+	})),
+	{
+		method: 'PUT',
+		path: () => `/api/v1/sites/${SITE}/bills/${bill}`,
+		json: {},
+		expect: [401, 403, 400, 400, 404, 404]
+	},
+	{
+		method: 'POST',
+		path: () => `/api/v1/sites/${SITE}/bills/${bill}/attachment`,
+		json: {},
+		expect: [401, 403, 400, 400, 404, 404]
+	},
+	{ method: 'GET', path: () => `/api/v1/sites/${SITE}/usage`, expect: [401, 200, 200, 200, 404, 404] },
+	{
+		method: 'POST',
+		path: () => `/api/v1/sites/${SITE}/usage`,
+		json: {},
+		expect: [401, 403, 415, 415, 404, 404]
+	},
 	// Comparisons of scenarios the caller may read, and their exports.
 	{ method: 'GET', path: () => '/compare', expect: [303, 200, 200, 200, 200, 200] },
 	...['/compare', '/compare/report'].map((page) => ({
@@ -324,6 +388,19 @@ test.beforeAll(async ({ browser, baseURL }) => {
 	});
 	expect(made.status()).toBe(201);
 	throwaway = (await made.json()).id;
+	const billed = await owner.post(`/api/v1/sites/${SITE}/bills`, {
+		data: { periodFrom: '2026-01-01', periodTo: '2026-01-31', kwh: 1200, amount: 180, confirmOverlap: true }
+	});
+	expect(billed.status()).toBe(201);
+	bill = (await billed.json()).id;
+	const pdf = Buffer.from('%PDF-1.4\n1 0 obj << >> endobj\ntrailer << >>\n%%EOF\n');
+	const attached = await owner.post(`/api/v1/sites/${SITE}/bills/${bill}/attachment`, {
+		// A multipart post is a form post: SvelteKit's origin check wants the origin.
+		headers: { origin: baseURL! },
+		multipart: { file: { name: 'invented-bill.pdf', mimeType: 'application/pdf', buffer: pdf } }
+	});
+	expect(attached.status()).toBe(201);
+	attachment = (await attached.json()).id;
 });
 
 for (const [column, who] of WHO.entries()) {

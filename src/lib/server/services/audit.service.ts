@@ -7,7 +7,7 @@ export type Actor = { id: string; name: string | null; email: string };
 export type AuditEntry = {
 	workspaceId: string;
 	siteId: string | null;
-	entity: 'site' | 'scenario' | 'device';
+	entity: 'site' | 'scenario' | 'device' | 'bill';
 	entityId: string;
 	action: string;
 	summary: string;

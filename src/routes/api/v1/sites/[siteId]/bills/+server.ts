@@ -1,0 +1,33 @@
+import { json } from '@sveltejs/kit';
+import { readJsonBody } from '$lib/server/api';
+import { billJson, overlapAnswer, parseBillBody } from '$lib/server/bills/bill-api';
+import { createBills, findBill, listBills, overlappingBills } from '$lib/server/bills/bill.service';
+import { requireSiteAccess } from '$lib/server/guard';
+import { PRIVATE, invalid, methodNotAllowed } from '../../../site-api.server';
+import type { RequestHandler } from './$types';
+
+/** GET — the site's bills, oldest first. */
+export const GET: RequestHandler = async (event) => {
+	const { site } = await requireSiteAccess(event, event.params.siteId, 'viewer');
+	return json({ bills: (await listBills(site.id)).map(billJson) }, { headers: PRIVATE });
+};
+
+/** POST — a new bill; 409 when its period overlaps another unless confirmOverlap is true. */
+export const POST: RequestHandler = async (event) => {
+	const { site, user } = await requireSiteAccess(event, event.params.siteId, 'editor');
+	const read = await readJsonBody(event);
+	if (!read.ok) return read.response;
+	const parsed = parseBillBody(read.body);
+	if (!parsed.success) return invalid(parsed.error.issues);
+	const { confirmOverlap, expectedRevision: _, ...bill } = parsed.data;
+	const overlaps = await overlappingBills(site.id, bill.periodFrom, bill.periodTo);
+	if (overlaps.length && !confirmOverlap) return overlapAnswer(overlaps);
+	const [id] = await createBills(site, [bill], user);
+	const created = await findBill(id!);
+	return json(billJson(created!), {
+		status: 201,
+		headers: { Location: `/api/v1/sites/${site.id}/bills/${id}` }
+	});
+};
+
+export const fallback: RequestHandler = () => methodNotAllowed('GET', 'POST');

@@ -1,0 +1,74 @@
+import { fail, redirect } from '@sveltejs/kit';
+import { readBillForm } from '$lib/server/bills/bill-form';
+import { createBills, listBills, overlappingBills } from '$lib/server/bills/bill.service';
+import { BILL_COLUMNS, parseBillSheet } from '$lib/server/bills/bill-sheet';
+import { billEstimates } from '$lib/server/bills/estimates';
+import { requireSiteAccess } from '$lib/server/guard';
+import { MAX_SHEET_BYTES, sheetKind } from '$lib/server/sheets/read-sheet';
+import type { Actions, PageServerLoad } from './$types';
+
+export const load = (async (event) => {
+	const { site, role } = await requireSiteAccess(event, event.params.siteId, 'viewer');
+	const bills = await listBills(site.id);
+	return {
+		bills: bills.map((b) => ({
+			id: b.id,
+			periodFrom: b.periodFrom,
+			periodTo: b.periodTo,
+			kwh: b.kwh,
+			amount: b.amount,
+			peakKw: b.peakKw
+		})),
+		estimates: await billEstimates(site, bills),
+		columns: BILL_COLUMNS.map((c) => ({ name: c.name, meaning: c.meaning })),
+		canEdit: role !== 'viewer'
+	};
+}) satisfies PageServerLoad;
+
+export const actions = {
+	add: async (event) => {
+		const { site, user } = await requireSiteAccess(event, event.params.siteId, 'editor');
+		const read = readBillForm(await event.request.formData());
+		if (!read.ok) return fail(400, { form: 'add', values: read.values, errors: read.errors });
+		const overlaps = await overlappingBills(site.id, read.bill.periodFrom, read.bill.periodTo);
+		if (overlaps.length && !read.confirmOverlap) {
+			return fail(409, {
+				form: 'add',
+				values: read.values,
+				errors: {},
+				overlaps: overlaps.map((o) => `${o.periodFrom} to ${o.periodTo}`)
+			});
+		}
+		const [id] = await createBills(site, [read.bill], user);
+		redirect(303, `/sites/${site.id}/bills/${id}`);
+	},
+
+	import: async (event) => {
+		const { site, user } = await requireSiteAccess(event, event.params.siteId, 'editor');
+		const file = (await event.request.formData()).get('sheet');
+		const refuse = (message: string) => fail(400, { form: 'import', sheetError: message, refused: [] });
+		if (!(file instanceof File) || file.size === 0) return refuse('Choose a CSV or XLSX file.');
+		if (file.size > MAX_SHEET_BYTES) return refuse(`The file is over ${MAX_SHEET_BYTES / 1024 / 1024} MB.`);
+		const kind = sheetKind(file.name);
+		if (!kind) return refuse('The file must end in .csv or .xlsx.');
+		const stored = await listBills(site.id);
+		const sheet = await parseBillSheet(new Uint8Array(await file.arrayBuffer()), kind, stored);
+		if ('error' in sheet) return refuse(sheet.error);
+		const refused = sheet.errors.map((e) => `Row ${e.line}, ${e.field}: ${e.message}`);
+		if (refused.length || sheet.rows.length === 0) {
+			return fail(400, {
+				form: 'import',
+				sheetError: refused.length
+					? 'Nothing was imported: fix these rows and import the sheet again.'
+					: 'No bill rows.',
+				refused
+			});
+		}
+		await createBills(
+			site,
+			sheet.rows.map((r) => r.bill),
+			user
+		);
+		return { form: 'import', imported: sheet.rows.length };
+	}
+} satisfies Actions;
