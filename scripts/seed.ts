@@ -7,6 +7,7 @@ import postgres from 'postgres';
 import {
 	devices,
 	memberships,
+	bills,
 	scenarios,
 	sites,
 	tariffs,
@@ -44,6 +45,8 @@ type DemoSites = {
 			isBaseline: boolean;
 			devices: DeviceSpec[];
 		}[];
+		/** Invented bills, entered with the site. */
+		bills?: { periodFrom: string; periodTo: string; kwh: number; amount: number; notes: string }[];
 	})[];
 };
 
@@ -89,7 +92,7 @@ await db.transaction(async (tx) => {
 				.onConflictDoNothing();
 	}
 	// Demo sites: created once; what a person changes in them afterwards is theirs to keep.
-	for (const { scenarios: list, ...site } of demoSites.sites) {
+	for (const { scenarios: list, bills: demoBills = [], ...site } of demoSites.sites) {
 		const created = await tx
 			.insert(sites)
 			.values({ ...site, workspaceId: demoSites.workspaceId })
@@ -103,6 +106,7 @@ await db.transaction(async (tx) => {
 					.insert(devices)
 					.values(specs.map((spec, i) => ({ scenarioId: scenario.id, position: i, spec })));
 		}
+		if (demoBills.length) await tx.insert(bills).values(demoBills.map((b) => ({ ...b, siteId: site.id })));
 	}
 });
 
