@@ -3,6 +3,7 @@ import type { z } from 'zod';
 import { NoVersionInForce, parseRequest, type DatedTariff } from '$lib/calc';
 import { resolveTariffId } from './tariffs/by-id';
 import { RateLimiter } from 'sveltekit-rate-limiter/server';
+import { env } from '$env/dynamic/private';
 import { logger } from './log';
 
 export const MAX_BODY_BYTES = 1024 * 1024;
@@ -53,7 +54,8 @@ export async function readJsonBody(
 // Anonymous callers (the public quick estimate, outside tools) share a per-client budget; signed-in
 // users get a larger one.
 const anonymousLimiter = new RateLimiter({ IP: [120, 'm'], IPUA: [60, 'm'] });
-const memberLimiter = new RateLimiter({ IP: [600, 'm'] });
+// MEMBER_REQUESTS_PER_MINUTE lifts the members' budget for a load test on loopback (npm run load).
+const memberLimiter = new RateLimiter({ IP: [Number(env.MEMBER_REQUESTS_PER_MINUTE ?? 600), 'm'] });
 
 /**
  * The shape every calculation endpoint shares: rate limit, bounded JSON body, zod validation with

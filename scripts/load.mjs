@@ -1,0 +1,205 @@
+// npm run load — 50 connections for 30 s (LOAD_SECONDS) against the production build on loopback, on
+// three routes: POST /api/v1/calculate with a 100-device time-of-use scenario, a signed-in user's sites
+// dashboard, and the comparison workbook export. Everything runs on a throwaway PostgreSQL with the
+// demo data; the app runs on both cores (scripts/cluster.mjs). Prints requests per second and
+// p50/p95/p99 latency per route. All data is invented.
+import autocannon from 'autocannon';
+import { chmodSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { availableParallelism, tmpdir } from 'node:os';
+import { basename, join } from 'node:path';
+import { freePort, log, run, runOrThrow, startService, stopGroup, tsNode } from './lib.mjs';
+
+const SECONDS = Number(process.env.LOAD_SECONDS ?? 30);
+const CONNECTIONS = Number(process.env.LOAD_CONNECTIONS ?? 50);
+const work = mkdtempSync(join(tmpdir(), 'runrate-load-'));
+// PostgreSQL's tools run as Debian's postgres user when this runs as root: they must reach the folder.
+chmodSync(work, 0o755);
+const children = [];
+let pgEnv;
+
+const people = JSON.parse(readFileSync('data/demo-people.json', 'utf8'));
+const demoSites = JSON.parse(readFileSync('data/demo-sites.json', 'utf8'));
+
+/** The calculation body: 100 invented devices on an invented two-season time-of-use tariff. */
+function calculation() {
+	const kinds = [
+		{ type: 'always' },
+		{ type: 'hours', hoursPerDay: 12 },
+		{ type: 'windows', windows: [{ start: '06:00', end: '22:00' }] },
+		{ type: 'cycle', onMinutes: 15, offMinutes: 45 }
+	];
+	return {
+		period: { start: '2027-01', months: 12 },
+		timezone: 'America/Chicago',
+		holidays: { country: 'US', region: 'WI' },
+		tariff: {
+			currency: 'USD',
+			fixedCharges: [{ label: 'Customer charge (invented)', perMonth: 18 }],
+			energyCharges: [
+				{
+					label: 'Energy',
+					type: 'tou',
+					seasons: [
+						{
+							months: [6, 7, 8, 9],
+							periods: [
+								{
+									label: 'On-peak',
+									perKwh: 0.29,
+									days: 'weekdays',
+									windows: [{ start: '14:00', end: '19:00' }]
+								}
+							],
+							otherPerKwh: 0.1
+						},
+						{
+							months: [1, 2, 3, 4, 5, 10, 11, 12],
+							periods: [
+								{ label: 'Peak', perKwh: 0.21, days: 'all', windows: [{ start: '17:00', end: '20:00' }] }
+							],
+							otherPerKwh: 0.11
+						}
+					]
+				}
+			],
+			demandCharges: [{ label: 'Demand', perKw: 6.5, intervalMinutes: 15 }],
+			taxes: [{ label: 'Tax', percent: 5 }]
+		},
+		equipment: Array.from({ length: 100 }, (_, i) => ({
+			name: `Load test device ${i + 1}`,
+			category: 'water-pump',
+			quantity: 1 + (i % 3),
+			power: { watts: 40 + ((i * 53) % 1500) },
+			schedule: kinds[i % kinds.length]
+		}))
+	};
+}
+
+async function signIn(base, email) {
+	const res = await fetch(`${base}/signin?/password`, {
+		method: 'POST',
+		headers: {
+			origin: base,
+			'content-type': 'application/x-www-form-urlencoded',
+			'x-sveltekit-action': 'true'
+		},
+		body: new URLSearchParams({ email, password: people.password }),
+		redirect: 'manual'
+	});
+	const cookie = res.headers
+		.getSetCookie()
+		.map((c) => c.split(';')[0])
+		.find((c) => c.includes('session-token'));
+	if (!cookie) throw new Error(`sign-in as ${email} failed (${res.status})`);
+	return cookie;
+}
+
+const quantile = (sorted, q) =>
+	Math.round((sorted[Math.min(sorted.length - 1, Math.floor(q * sorted.length))] ?? 0) * 10) / 10;
+
+async function hammer(name, options) {
+	const latencies = [];
+	const instance = autocannon({ connections: CONNECTIONS, duration: SECONDS, ...options });
+	instance.on('response', (_client, _status, _bytes, ms) => latencies.push(ms));
+	const result = await instance;
+	latencies.sort((a, b) => a - b);
+	const errors = result.errors + result.timeouts + result.non2xx;
+	return {
+		route: name,
+		requests: result.requests.total,
+		perSecond: Math.round(result.requests.average),
+		p50: quantile(latencies, 0.5),
+		p95: quantile(latencies, 0.95),
+		p99: quantile(latencies, 0.99),
+		errors
+	};
+}
+
+async function main() {
+	const [pgPort, smtpPort, viewPort, s3Port, appPort] = await Promise.all(
+		Array.from({ length: 5 }, freePort)
+	);
+	pgEnv = { PGDATA: join(work, 'pg'), PGPORT: String(pgPort) };
+	const buildDir = join('.test-build', basename(work));
+	const env = {
+		DATABASE_URL: `postgres://postgres@127.0.0.1:${pgPort}/runrate`,
+		AUTH_SECRET: 'load-test-only-secret-0123456789abcdef',
+		SMTP_URL: `smtp://127.0.0.1:${smtpPort}`,
+		SMTP_PORT: String(smtpPort),
+		MAIL_VIEW_PORT: String(viewPort),
+		MAIL_VIEW_URL: `http://127.0.0.1:${viewPort}`,
+		S3_PORT: String(s3Port),
+		S3_DIR: join(work, 's3'),
+		S3_ENDPOINT: `http://127.0.0.1:${s3Port}`,
+		S3_BUCKET: 'runrate-uploads',
+		S3_ACCESS_KEY_ID: 'S3RVER',
+		S3_SECRET_ACCESS_KEY: 'S3RVER',
+		RUNRATE_BUILD_DIR: buildDir
+	};
+	await runOrThrow('bash', ['scripts/pg.sh', 'start'], { env: pgEnv });
+	await runOrThrow(...tsNode('scripts/migrate.ts'), { env });
+	await runOrThrow(...tsNode('scripts/seed.ts'), { env });
+	children.push(
+		await startService('stand-ins', ...tsNode('scripts/stand-ins.ts'), { env, ready: /\[stand-ins\]/ })
+	);
+	log('load', 'building the production bundle');
+	await runOrThrow('npx', ['vite', 'build', '--logLevel', 'error'], { env });
+	const base = `http://127.0.0.1:${appPort}`;
+	const workers = Number(process.env.WORKERS ?? availableParallelism());
+	children.push(
+		await startService('app', 'node', ['scripts/cluster.mjs'], {
+			env: {
+				...env,
+				WORKERS: String(workers),
+				HOST: '127.0.0.1',
+				PORT: String(appPort),
+				ORIGIN: base,
+				NODE_ENV: 'production',
+				MEMBER_REQUESTS_PER_MINUTE: '100000000'
+			},
+			ready: /Listening on \d+ workers/
+		})
+	);
+	const cookie = await signIn(base, 'owner@example.org');
+	const headers = { cookie, 'content-type': 'application/json' };
+	const ws = people.workspaces[0].id;
+	const pair = demoSites.sites[0].scenarios.map((s) => s.id).join(',');
+	const routes = [
+		[
+			'POST /api/v1/calculate (100 devices, TOU)',
+			{ url: `${base}/api/v1/calculate`, method: 'POST', headers, body: JSON.stringify(calculation()) }
+		],
+		['GET /w/:workspace/sites (dashboard, signed in)', { url: `${base}/w/${ws}/sites`, headers: { cookie } }],
+		[
+			'GET /api/v1/compare/export.xlsx (2 demo scenarios)',
+			{ url: `${base}/api/v1/compare/export.xlsx?scenarios=${pair}`, headers: { cookie } }
+		]
+	];
+	log(
+		'load',
+		`${CONNECTIONS} connections, ${SECONDS} s per route, ${workers} app workers on ${availableParallelism()} cores`
+	);
+	const rows = [];
+	for (const [name, options] of routes) rows.push(await hammer(name, options));
+	console.log(
+		'\n| route | requests | req/s | p50 ms | p95 ms | p99 ms | errors |\n|---|---|---|---|---|---|---|'
+	);
+	for (const r of rows)
+		console.log(
+			`| ${r.route} | ${r.requests} | ${r.perSecond} | ${r.p50} | ${r.p95} | ${r.p99} | ${r.errors} |`
+		);
+	return rows.every((r) => r.errors === 0) ? 0 : 1;
+}
+
+let code = 1;
+try {
+	code = await main();
+} catch (error) {
+	console.error(error);
+} finally {
+	for (const child of children) stopGroup(child);
+	if (pgEnv) await run('bash', ['scripts/pg.sh', 'stop'], { env: pgEnv, quiet: true });
+	rmSync(work, { recursive: true, force: true });
+	rmSync(join('.test-build', basename(work)), { recursive: true, force: true });
+}
+process.exit(code);
