@@ -1,5 +1,5 @@
 import { expect, test, type APIRequestContext, type APIResponse, type Browser } from '@playwright/test';
-import { readFileSync } from 'node:fs';
+import { readdirSync, readFileSync } from 'node:fs';
 import { DEMO_PASSWORD, DEMO_WS, gotoReady } from './helpers';
 
 // Every route that exists, against every kind of caller. 303 = sent to sign-in.
@@ -250,6 +250,61 @@ const routes: Route[] = [
 		json: {},
 		expect: [401, 403, 415, 415, 404, 404]
 	},
+	// The workspace's own data, and the account.
+	{ method: 'GET', path: () => `${ws}/export.json`, expect: [303, 403, 403, 200, 404, 404] },
+	{
+		method: 'POST',
+		path: () => `${ws}?/restore`,
+		form: { none: '' },
+		expect: [401, 403, 403, 200, 404, 404]
+	},
+	{ method: 'GET', path: () => '/account', expect: [303, 200, 200, 200, 200, 200] },
+	{
+		method: 'POST',
+		path: () => '/account?/delete',
+		form: { confirmEmail: 'wrong' },
+		expect: [401, 400, 400, 400, 400, 400]
+	},
+	// Public pages and the anonymous calculation API: open to everyone.
+	...[
+		'/',
+		'/rules',
+		'/health',
+		'/forgot',
+		'/signup/sent',
+		'/signin/check-email',
+		'/signin/problem',
+		'/tariffs/formats',
+		'/tariffs/import/template.csv'
+	].map((page) => ({
+		method: 'GET' as const,
+		path: () => page,
+		expect: [200, 200, 200, 200, 200, 200]
+	})),
+	...['/signin', '/signup'].map((page) => ({
+		method: 'GET' as const,
+		path: () => page,
+		// Someone already signed in is sent on to their workspaces.
+		expect: [200, 303, 303, 303, 303, 303]
+	})),
+	...['/reset?token=x', '/signup/confirm?token=x', '/invite/not-a-real-invitation-token-000'].map((page) => ({
+		method: 'GET' as const,
+		path: () => page,
+		expect: [200, 200, 200, 200, 200, 200]
+	})),
+	...['/api/v1/calculate', '/api/v1/pumping'].map((api) => ({
+		method: 'POST' as const,
+		path: () => api,
+		json: {},
+		expect: [400, 400, 400, 400, 400, 400]
+	})),
+	{
+		method: 'POST',
+		path: () => `/sites/${SITE}/bills/${bill}/attachments`,
+		// A plain form post without a file goes back to the bill page, which shows why.
+		form: { none: '' },
+		expect: [401, 403, 303, 303, 404, 404]
+	},
 	// Comparisons of scenarios the caller may read, and their exports.
 	{ method: 'GET', path: () => '/compare', expect: [303, 200, 200, 200, 200, 200] },
 	...['/compare', '/compare/report'].map((page) => ({
@@ -329,7 +384,9 @@ const routes: Route[] = [
 		path: () => `/tariffs/${privateTariff}?/copy`,
 		form: { workspaceId: DEMO_WS.id },
 		expect: [404, 403, 303, 303, 404, 404]
-	}
+	},
+	// Last: it ends the caller's session. Auth.js answers with its own redirect.
+	{ method: 'POST', path: () => '/signout', form: { none: '' }, expect: [302, 302, 302, 302, 302, 302] }
 ];
 
 async function signedIn(browser: Browser, baseURL: string, who: Who): Promise<APIRequestContext> {
@@ -418,7 +475,9 @@ for (const [column, who] of WHO.entries()) {
 								maxRedirects: 0
 							})
 						: await request.fetch(path, { method: route.method, data: route.json, maxRedirects: 0 });
-			expect([route.expect[column]], `${who} ${route.method} ${path}`).toContain(await effectiveStatus(res));
+			expect
+				.soft([route.expect[column]], `${who} ${route.method} ${path}`)
+				.toContain(await effectiveStatus(res));
 			if (
 				who === 'outsider' &&
 				(path.startsWith(ws) || path.includes(privateTariff) || path.includes(SITE))
@@ -431,3 +490,35 @@ for (const [column, who] of WHO.entries()) {
 		}
 	});
 }
+
+/** Every page, form action and endpoint folder under src/routes, as a pattern of its addresses. */
+function routeTree(dir = 'src/routes', prefix = ''): { route: string; pattern: RegExp }[] {
+	const entries = readdirSync(dir, { withFileTypes: true });
+	const here = entries.some((e) => /^\+(page\.svelte|page\.server\.ts|server\.ts)$/.test(e.name))
+		? [
+				{
+					route: prefix || '/',
+					pattern: new RegExp(
+						`^${(prefix || '/')
+							.replace(/\[\.\.\.[^\]]+\]/g, '.*')
+							.replace(/\[[^\]]+\]/g, '[^/]+')
+							.replace(/\./g, '\\.')}$`.replace(/\\\.\*/g, '.*')
+					)
+				}
+			]
+		: [];
+	return [
+		...here,
+		...entries
+			.filter((e) => e.isDirectory())
+			.flatMap((e) => routeTree(`${dir}/${e.name}`, /^\(.*\)$/.test(e.name) ? prefix : `${prefix}/${e.name}`))
+	];
+}
+
+test('every route in the tree has a row in the matrix, so a new route cannot be forgotten', () => {
+	const covered = routes.map((r) => new URL(r.path(), 'http://x').pathname);
+	const missing = routeTree()
+		.filter(({ pattern }) => !covered.some((path) => pattern.test(path)))
+		.map(({ route }) => route);
+	expect(missing).toEqual([]);
+});

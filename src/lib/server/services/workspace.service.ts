@@ -10,7 +10,12 @@ export const INVITATION_DAYS = 7;
 
 export async function listWorkspacesFor(userId: string) {
 	return db
-		.select({ id: workspaces.id, name: workspaces.name, role: memberships.role })
+		.select({
+			id: workspaces.id,
+			name: workspaces.name,
+			role: memberships.role,
+			deleteAfter: workspaces.deleteAfter
+		})
 		.from(memberships)
 		.innerJoin(workspaces, eq(workspaces.id, memberships.workspaceId))
 		.where(eq(memberships.userId, userId))
@@ -29,6 +34,7 @@ export async function renameWorkspace(workspaceId: string, name: string) {
 	await db.update(workspaces).set({ name }).where(eq(workspaces.id, workspaceId));
 }
 
+/** Deletes at once; owners go through scheduleWorkspaceDeletion (workspace-deletion.service) instead. */
 export async function deleteWorkspace(workspaceId: string) {
 	await db.delete(workspaces).where(eq(workspaces.id, workspaceId));
 }

@@ -5,7 +5,6 @@ import { recentNotices } from '$lib/server/services/tariff-notice.service';
 import { inviteLimiter, TOO_MANY } from '$lib/server/rate-limit';
 import {
 	changeRole,
-	deleteWorkspace,
 	invite,
 	listMembers,
 	listPendingInvitations,
@@ -14,13 +13,22 @@ import {
 	renameWorkspace,
 	revokeInvitation
 } from '$lib/server/services/workspace.service';
+import {
+	deletionDate,
+	purgeSoon,
+	restoreWorkspace,
+	scheduleWorkspaceDeletion
+} from '$lib/server/services/workspace-deletion.service';
 import { emailField, roleField, workspaceNameField } from '$lib/forms/auth.schema';
 import { fieldErrors, keepValues } from '$lib/forms/errors';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load = (async (event) => {
 	const { workspace, role } = await requireRole(event, event.params.workspaceId, 'viewer');
+	purgeSoon();
+	const deleteAfter = await deletionDate(workspace.id);
 	return {
+		deleteAfter: deleteAfter?.toISOString() ?? null,
 		members: await listMembers(workspace.id),
 		invitations: role === 'owner' ? await listPendingInvitations(workspace.id) : [],
 		notices: (await recentNotices(workspace.id)).map((n) => ({
@@ -114,7 +122,13 @@ export const actions = {
 				values: keepValues(form),
 				errors: { confirmName: 'Type the workspace name exactly to confirm.' }
 			});
-		await deleteWorkspace(workspace.id);
-		redirect(303, '/workspaces');
+		await scheduleWorkspaceDeletion(workspace.id);
+		return { action: 'delete', ok: true };
+	},
+
+	restore: async (event) => {
+		const { workspace } = await requireRole(event, event.params.workspaceId, 'owner');
+		await restoreWorkspace(workspace.id);
+		return { action: 'restore', ok: true };
 	}
 } satisfies Actions;

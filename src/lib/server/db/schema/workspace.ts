@@ -7,6 +7,8 @@ export const roleEnum = pgEnum('workspace_role', ['owner', 'editor', 'viewer']);
 export const workspaces = pgTable('workspace', {
 	id: uuid('id').primaryKey().defaultRandom(),
 	name: text('name').notNull(),
+	/** Set when an owner deletes the workspace: it is kept (and can be restored) until then, then purged. */
+	deleteAfter: timestamp('delete_after', { mode: 'date' }),
 	createdAt: timestamp('created_at', { mode: 'date' }).notNull().defaultNow()
 });
 
