@@ -1,0 +1,84 @@
+import fc from 'fast-check';
+import { expect, test } from '@playwright/test';
+import { readFileSync } from 'node:fs';
+import { signInWithPassword } from './helpers';
+
+// Hostile JSON against the JSON endpoints: random values, boundary numbers, NaN-like strings, deep
+// nesting, long and unicode strings, wrong types. The answer is never a 500 and never a stack trace.
+const demoSites = JSON.parse(readFileSync('data/demo-sites.json', 'utf8')) as {
+	sites: { id: string; scenarios: { id: string }[] }[];
+};
+const site = demoSites.sites[0]!;
+
+const nasty = fc.oneof(
+	fc.constantFrom(
+		1e308,
+		-1e308,
+		-0,
+		Number.MAX_SAFE_INTEGER + 2,
+		'NaN',
+		'Infinity',
+		'-0',
+		'1e999',
+		'',
+		'\u0000',
+		'💧'.repeat(500)
+	),
+	fc.string({ maxLength: 3000 }),
+	fc.double(),
+	fc.integer()
+);
+const deep = (depth: number): unknown => (depth === 0 ? 1 : { a: [deep(depth - 1)] });
+const body = fc.oneof(
+	fc.anything({ maxDepth: 4, withNullPrototype: false }),
+	fc.dictionary(
+		fc.constantFrom(
+			'period',
+			'tariff',
+			'equipment',
+			'scenarios',
+			'periodFrom',
+			'periodTo',
+			'kwh',
+			'amount',
+			'devices',
+			'expectedRevision',
+			'name'
+		),
+		nasty
+	),
+	fc.constant(deep(200))
+);
+
+const ENDPOINTS = [
+	['POST', '/api/v1/calculate'],
+	['POST', '/api/v1/compare'],
+	['POST', '/api/v1/pumping'],
+	['POST', '/api/v1/sites'],
+	['POST', `/api/v1/sites/${site.id}/bills`],
+	['POST', `/api/v1/sites/${site.id}/scenarios`],
+	['PUT', `/api/v1/scenarios/${site.scenarios[0]!.id}/equipment`],
+	['POST', '/api/v1/tariffs']
+] as const;
+
+test('hostile JSON never gets a 500 or a stack trace from any JSON endpoint', async ({ page }) => {
+	test.setTimeout(120_000);
+	// An editor's requests reach validation. 25 runs × 8 endpoints stay well inside a member's 600 a minute.
+	await signInWithPassword(page, 'editor@example.org');
+	for (const [method, path] of ENDPOINTS) {
+		await fc.assert(
+			fc.asyncProperty(body, async (data) => {
+				const res = await page.request.fetch(path, {
+					method,
+					headers: { 'content-type': 'application/json' },
+					data: JSON.stringify(data)
+				});
+				const text = await res.text();
+				expect(res.status(), `${method} ${path}`).toBeLessThan(500);
+				expect(text).not.toMatch(/\n\s+at .+\(.+:\d+:\d+\)/);
+				if (res.status() === 400) expect(JSON.parse(text)).toHaveProperty('message');
+			}),
+			{ numRuns: 25, seed: 20261202 }
+		);
+	}
+});
