@@ -3,17 +3,23 @@ import { startJobs } from '$lib/server/jobs';
 import { sequence } from '@sveltejs/kit/hooks';
 import { eq } from 'drizzle-orm';
 import { authHandle } from '$lib/server/auth';
+import { rememberSession, sessionToken, verifiedUserId } from '$lib/server/auth/session-cache';
 import { db } from '$lib/server/db';
 import { isDatabaseUnavailable } from '$lib/server/db/errors';
 import { users } from '$lib/server/db/schema';
 import { logger } from '$lib/server/log';
 import { unavailableResponse } from '$lib/server/unavailable';
 
-/** Resolves the signed-in user once; every load, action and endpoint reads `locals.user`. */
+/** Resolves the signed-in user once; every load, action and endpoint reads `locals.user`. The user row
+ * is read on every request, so a deleted account or a changed admin flag takes effect at once. */
 const resolveUser: Handle = async ({ event, resolve }) => {
 	event.locals.user = null;
-	const session = await event.locals.auth();
-	const id = session?.user?.id;
+	const token = sessionToken(event.cookies);
+	let id = verifiedUserId(token);
+	if (!id) {
+		id = (await event.locals.auth())?.user?.id;
+		if (id) rememberSession(event.cookies, token, id);
+	}
 	if (id) {
 		try {
 			const [row] = await db

@@ -1,0 +1,34 @@
+import type { Cookies } from '@sveltejs/kit';
+import { LRUCache } from 'lru-cache';
+
+/**
+ * Session tokens this process has verified in the last minute, by token text.
+ *
+ * Reading an Auth.js session decrypts the token, derives its key and encrypts a renewed token: about
+ * a millisecond of CPU on every request. A token seen and verified a moment ago is the same token, so
+ * the user id it carried is taken from here instead; after a minute the token is verified (and the
+ * session renewed) again. The cost is that a token stays usable for at most a minute past its own
+ * expiry, which for 30-day sessions is noise. The cache is per process and holds ids only.
+ */
+const verified = new LRUCache<string, string>({ max: 10_000, ttl: 60_000 });
+
+// Auth.js names the cookie with a __Secure- prefix on https; a token over 4 kB is split into .0, .1…
+const NAMES = ['__Secure-authjs.session-token', 'authjs.session-token'];
+
+/** The session token the request carries, when it is a single cookie. */
+export function sessionToken(cookies: Cookies): string | undefined {
+	for (const name of NAMES) {
+		const value = cookies.get(name);
+		if (value) return value;
+	}
+	return undefined;
+}
+
+export const verifiedUserId = (token: string | undefined) => (token ? verified.get(token) : undefined);
+
+/** Remembers the token the request came with and the renewed one Auth.js set on the response. */
+export function rememberSession(cookies: Cookies, sent: string | undefined, userId: string) {
+	if (sent) verified.set(sent, userId);
+	const renewed = sessionToken(cookies);
+	if (renewed && renewed !== sent) verified.set(renewed, userId);
+}
