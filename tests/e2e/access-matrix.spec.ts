@@ -1,17 +1,21 @@
 import { expect, test, type APIRequestContext, type APIResponse, type Browser } from '@playwright/test';
 import { readdirSync, readFileSync } from 'node:fs';
-import { DEMO_PASSWORD, DEMO_WS, gotoReady } from './helpers';
+import { DEMO_PASSWORD, DEMO_WS, gotoReady, latestMail, linkIn, uniqueEmail } from './helpers';
 
-// Every route that exists, against every kind of caller. 303 = sent to sign-in.
-type Who = 'anonymous' | 'viewer' | 'editor' | 'owner' | 'outsider' | 'admin';
-const WHO: Who[] = ['anonymous', 'viewer', 'editor', 'owner', 'outsider', 'admin'];
+// Every route that exists, against every kind of caller. 303 = sent to sign-in. The guest is a person
+// the owner shared one site with (the hatchery, as a viewer); they belong to no workspace, so they
+// cannot add tariffs either.
+type Who = 'anonymous' | 'viewer' | 'editor' | 'owner' | 'outsider' | 'admin' | 'guest';
+const WHO: Who[] = ['anonymous', 'viewer', 'editor', 'owner', 'outsider', 'admin', 'guest'];
 const people: Record<Exclude<Who, 'anonymous'>, string> = {
 	viewer: 'viewer@example.org',
 	editor: 'editor@example.org',
 	owner: 'owner@example.org',
 	outsider: 'grower@example.org',
-	admin: 'admin@example.org'
+	admin: 'admin@example.org',
+	guest: uniqueEmail('matrix-guest')
 };
+const GUEST_PASSWORD = 'matrix guest password 1';
 
 const publicTariff = (
 	JSON.parse(readFileSync('data/demo-tariffs.json', 'utf8')) as { tariffs: { id: string }[] }
@@ -38,232 +42,253 @@ type Route = {
 	json?: unknown;
 	expect: number[];
 };
-// Expected statuses in WHO order: anonymous, viewer, editor, owner, outsider, admin.
+// Expected statuses in WHO order: anonymous, viewer, editor, owner, outsider, admin, guest.
 // Payloads are harmless: invalid or a no-op past the guard, so a 400 proves the guard let the caller through.
 const bad = { name: '', email: 'bad', role: 'nope', userId: '', invitationId: 'x', confirmName: 'wrong' };
 const routes: Route[] = [
-	{ method: 'GET', path: () => '/workspaces', expect: [303, 200, 200, 200, 200, 200] },
-	{ method: 'GET', path: () => ws, expect: [303, 200, 200, 200, 404, 404] },
+	{ method: 'GET', path: () => '/workspaces', expect: [303, 200, 200, 200, 200, 200, 200] },
+	{ method: 'GET', path: () => ws, expect: [303, 200, 200, 200, 404, 404, 404] },
 	{
 		method: 'GET',
 		path: () => '/w/00000000-0000-4000-8000-000000000000',
-		expect: [303, 404, 404, 404, 404, 404]
+		expect: [303, 404, 404, 404, 404, 404, 404]
 	},
-	{ method: 'GET', path: () => '/w/not-a-uuid', expect: [303, 404, 404, 404, 404, 404] },
+	{ method: 'GET', path: () => '/w/not-a-uuid', expect: [303, 404, 404, 404, 404, 404, 404] },
 	...['rename', 'invite', 'changeRole', 'remove', 'revoke', 'delete'].map((action) => ({
 		method: 'POST' as const,
 		path: () => `${ws}?/${action}`,
 		form: bad,
-		expect: [401, 403, 403, 400, 404, 404]
+		expect: [401, 403, 403, 400, 404, 404, 404]
 	})),
 	{
 		method: 'POST',
 		path: () => '/workspaces?/create',
 		form: { name: '' },
-		expect: [401, 400, 400, 400, 400, 400]
+		expect: [401, 400, 400, 400, 400, 400, 400]
 	},
 	// The tariff library: public tariffs are open to all; private ones to their workspace; only admins edit public ones.
-	{ method: 'GET', path: () => '/tariffs', expect: [200, 200, 200, 200, 200, 200] },
-	{ method: 'GET', path: () => `/tariffs/${publicTariff}`, expect: [200, 200, 200, 200, 200, 200] },
-	{ method: 'GET', path: () => `/tariffs/${privateTariff}`, expect: [404, 200, 200, 200, 404, 404] },
-	{ method: 'GET', path: () => `/api/v1/tariffs/${privateTariff}`, expect: [404, 200, 200, 200, 404, 404] },
+	{ method: 'GET', path: () => '/tariffs', expect: [200, 200, 200, 200, 200, 200, 200] },
+	{ method: 'GET', path: () => `/tariffs/${publicTariff}`, expect: [200, 200, 200, 200, 200, 200, 200] },
+	{ method: 'GET', path: () => `/tariffs/${privateTariff}`, expect: [404, 200, 200, 200, 404, 404, 404] },
+	{
+		method: 'GET',
+		path: () => `/api/v1/tariffs/${privateTariff}`,
+		expect: [404, 200, 200, 200, 404, 404, 404]
+	},
 	{
 		method: 'GET',
 		path: () => `/api/v1/tariffs/${privateTariff}/versions/1`,
-		expect: [404, 200, 200, 200, 404, 404]
+		expect: [404, 200, 200, 200, 404, 404, 404]
 	},
-	{ method: 'GET', path: () => '/tariffs/new', expect: [303, 403, 200, 200, 200, 200] },
-	{ method: 'GET', path: () => '/tariffs/import', expect: [303, 403, 200, 200, 200, 200] },
-	{ method: 'GET', path: () => `/tariffs/${publicTariff}/edit`, expect: [303, 403, 403, 403, 403, 200] },
-	{ method: 'GET', path: () => `/tariffs/${privateTariff}/edit`, expect: [303, 403, 200, 200, 404, 404] },
+	{ method: 'GET', path: () => '/tariffs/new', expect: [303, 403, 200, 200, 200, 200, 403] },
+	{ method: 'GET', path: () => '/tariffs/import', expect: [303, 403, 200, 200, 200, 200, 403] },
+	{ method: 'GET', path: () => `/tariffs/${publicTariff}/edit`, expect: [303, 403, 403, 403, 403, 200, 403] },
+	{
+		method: 'GET',
+		path: () => `/tariffs/${privateTariff}/edit`,
+		expect: [303, 403, 200, 200, 404, 404, 404]
+	},
 	{
 		method: 'POST',
 		path: () => `/tariffs/${privateTariff}/edit`,
 		form: { payload: '{}' },
-		expect: [401, 403, 400, 400, 404, 404]
+		expect: [401, 403, 400, 400, 404, 404, 404]
 	},
 	{
 		method: 'POST',
 		path: () => `/tariffs/${publicTariff}/edit`,
 		form: { payload: '{}' },
-		expect: [401, 403, 403, 403, 403, 400]
+		expect: [401, 403, 403, 403, 403, 400, 403]
 	},
 	{
 		method: 'PUT',
 		path: () => `/api/v1/tariffs/${privateTariff}`,
 		json: {},
-		expect: [401, 403, 400, 400, 404, 404]
+		expect: [401, 403, 400, 400, 404, 404, 404]
 	},
 	{
 		method: 'PUT',
 		path: () => `/api/v1/tariffs/${publicTariff}`,
 		json: {},
-		expect: [401, 403, 403, 403, 403, 400]
+		expect: [401, 403, 403, 403, 403, 400, 403]
 	},
 	{
 		method: 'POST',
 		path: () => '/api/v1/tariffs',
 		json: { workspaceId: DEMO_WS.id },
-		expect: [401, 403, 400, 400, 404, 404]
+		expect: [401, 403, 400, 400, 404, 404, 404]
 	},
 	{
 		method: 'POST',
 		path: () => '/api/v1/tariffs',
 		json: { workspaceId: null },
-		expect: [401, 403, 403, 403, 403, 400]
+		expect: [401, 403, 403, 403, 403, 400, 403]
 	},
 	// Sites, scenarios and equipment (a demo site of the owner's workspace).
-	{ method: 'GET', path: () => `${ws}/sites`, expect: [303, 200, 200, 200, 404, 404] },
-	{ method: 'GET', path: () => `${ws}/sites/new`, expect: [303, 403, 200, 200, 404, 404] },
+	{ method: 'GET', path: () => `${ws}/sites`, expect: [303, 200, 200, 200, 404, 404, 404] },
+	{ method: 'GET', path: () => `${ws}/sites/new`, expect: [303, 403, 200, 200, 404, 404, 404] },
 	{
 		method: 'POST',
 		path: () => `${ws}/sites/new`,
 		form: { name: '' },
-		expect: [401, 403, 400, 400, 404, 404]
+		expect: [401, 403, 400, 400, 404, 404, 404]
 	},
-	{ method: 'GET', path: () => `/sites/${SITE}`, expect: [303, 200, 200, 200, 404, 404] },
-	{ method: 'GET', path: () => `/sites/${SITE}/edit`, expect: [303, 403, 200, 200, 404, 404] },
+	{ method: 'GET', path: () => `/sites/${SITE}`, expect: [303, 200, 200, 200, 404, 404, 200] },
+	{ method: 'GET', path: () => `/sites/${SITE}/edit`, expect: [303, 403, 200, 200, 404, 404, 403] },
 	{
 		method: 'POST',
 		path: () => `/sites/${SITE}/edit`,
 		form: { name: '' },
-		expect: [401, 403, 400, 400, 404, 404]
+		expect: [401, 403, 400, 400, 404, 404, 403]
 	},
 	{
 		method: 'GET',
 		path: () => `/sites/${SITE}/scenarios/${SCENARIO}`,
-		expect: [303, 200, 200, 200, 404, 404]
+		expect: [303, 200, 200, 200, 404, 404, 200]
 	},
 	{
 		method: 'GET',
 		path: () => `/sites/${OTHER_SITE}/scenarios/${SCENARIO}`,
-		expect: [303, 404, 404, 404, 404, 404]
+		expect: [303, 404, 404, 404, 404, 404, 404]
 	},
 	// The machine API of sites, scenarios and single devices.
-	{ method: 'GET', path: () => `/api/v1/sites/${SITE}`, expect: [401, 200, 200, 200, 404, 404] },
-	{ method: 'PUT', path: () => `/api/v1/sites/${SITE}`, json: {}, expect: [401, 403, 400, 400, 404, 404] },
-	{ method: 'GET', path: () => `/api/v1/scenarios/${SCENARIO}`, expect: [401, 200, 200, 200, 404, 404] },
+	{ method: 'GET', path: () => `/api/v1/sites/${SITE}`, expect: [401, 200, 200, 200, 404, 404, 200] },
+	{
+		method: 'PUT',
+		path: () => `/api/v1/sites/${SITE}`,
+		json: {},
+		expect: [401, 403, 400, 400, 404, 404, 403]
+	},
+	{ method: 'GET', path: () => `/api/v1/scenarios/${SCENARIO}`, expect: [401, 200, 200, 200, 404, 404, 200] },
 	{
 		method: 'PATCH',
 		path: () => `/api/v1/scenarios/${SCENARIO}`,
 		json: {},
-		expect: [401, 403, 400, 400, 404, 404]
+		expect: [401, 403, 400, 400, 404, 404, 403]
 	},
 	{
 		method: 'PATCH',
 		path: () => `/api/v1/scenarios/${SCENARIO}`,
 		json: { restored: true },
-		expect: [401, 403, 409, 409, 404, 404]
+		expect: [401, 403, 409, 409, 404, 404, 403]
 	},
 	{
 		method: 'POST',
 		path: () => `/api/v1/scenarios/${SCENARIO}/equipment`,
 		json: {},
-		expect: [401, 403, 400, 400, 404, 404]
+		expect: [401, 403, 400, 400, 404, 404, 403]
 	},
 	{
 		method: 'GET',
 		path: () => `/api/v1/scenarios/${SCENARIO}/equipment/0`,
-		expect: [401, 200, 200, 200, 404, 404]
+		expect: [401, 200, 200, 200, 404, 404, 200]
 	},
 	{
 		method: 'GET',
 		path: () => `/api/v1/scenarios/${SCENARIO}/equipment/999`,
-		expect: [401, 404, 404, 404, 404, 404]
+		expect: [401, 404, 404, 404, 404, 404, 404]
 	},
 	{
 		method: 'PUT',
 		path: () => `/api/v1/scenarios/${SCENARIO}/equipment/0`,
 		json: {},
-		expect: [401, 403, 400, 400, 404, 404]
+		expect: [401, 403, 400, 400, 404, 404, 403]
 	},
 	{
 		method: 'DELETE',
 		path: () => `/api/v1/scenarios/${SCENARIO}/equipment/0`,
-		expect: [401, 403, 400, 400, 404, 404]
+		expect: [401, 403, 400, 400, 404, 404, 403]
 	},
-	{ method: 'DELETE', path: () => `/api/v1/scenarios/${throwaway}`, expect: [401, 403, 200, 200, 404, 404] },
+	{
+		method: 'DELETE',
+		path: () => `/api/v1/scenarios/${throwaway}`,
+		expect: [401, 403, 200, 200, 404, 404, 404]
+	},
 	{
 		method: 'PATCH',
 		path: () => `/api/v1/scenarios/${throwaway}`,
 		json: { restored: true },
-		expect: [401, 403, 200, 200, 404, 404]
+		expect: [401, 403, 200, 200, 404, 404, 404]
 	},
 	// Bills, their files and metered usage of the demo site.
 	...['bills', 'bills/template.csv', 'usage'].map((page) => ({
 		method: 'GET' as const,
 		path: () => `/sites/${SITE}/${page}`,
-		expect: [303, 200, 200, 200, 404, 404]
+		expect: [303, 200, 200, 200, 404, 404, 200]
 	})),
 	...['bills?/add', 'bills?/import', 'usage?/import'].map((action) => ({
 		method: 'POST' as const,
 		path: () => `/sites/${SITE}/${action}`,
 		form: { none: '' },
-		expect: [401, 403, 400, 400, 404, 404]
+		expect: [401, 403, 400, 400, 404, 404, 403]
 	})),
-	{ method: 'GET', path: () => `/sites/${SITE}/bills/${bill}`, expect: [303, 200, 200, 200, 404, 404] },
-	{ method: 'GET', path: () => `/sites/${OTHER_SITE}/bills/${bill}`, expect: [303, 404, 404, 404, 404, 404] },
+	{ method: 'GET', path: () => `/sites/${SITE}/bills/${bill}`, expect: [303, 200, 200, 200, 404, 404, 200] },
+	{
+		method: 'GET',
+		path: () => `/sites/${OTHER_SITE}/bills/${bill}`,
+		expect: [303, 404, 404, 404, 404, 404, 404]
+	},
 	{
 		method: 'POST',
 		path: () => `/sites/${SITE}/bills/${bill}?/update`,
 		form: { kwh: 'x' },
-		expect: [401, 403, 400, 400, 404, 404]
+		expect: [401, 403, 400, 400, 404, 404, 403]
 	},
 	{
 		method: 'GET',
 		path: () => `/sites/${SITE}/bills/${bill}/attachments/${attachment}`,
-		expect: [303, 200, 200, 200, 404, 404]
+		expect: [303, 200, 200, 200, 404, 404, 200]
 	},
 	{
 		method: 'GET',
 		path: () => `/sites/${OTHER_SITE}/bills/${bill}/attachments/${attachment}`,
-		expect: [303, 404, 404, 404, 404, 404]
+		expect: [303, 404, 404, 404, 404, 404, 404]
 	},
-	{ method: 'GET', path: () => `/api/v1/sites/${SITE}/bills`, expect: [401, 200, 200, 200, 404, 404] },
+	{ method: 'GET', path: () => `/api/v1/sites/${SITE}/bills`, expect: [401, 200, 200, 200, 404, 404, 200] },
 	{
 		method: 'POST',
 		path: () => `/api/v1/sites/${SITE}/bills`,
 		json: {},
-		expect: [401, 403, 400, 400, 404, 404]
+		expect: [401, 403, 400, 400, 404, 404, 403]
 	},
 	...['', '/reconciliation'].map((tail) => ({
 		method: 'GET' as const,
 		path: () => `/api/v1/sites/${SITE}/bills/${bill}${tail}`,
-		expect: [401, 200, 200, 200, 404, 404]
+		expect: [401, 200, 200, 200, 404, 404, 200]
 	})),
 	{
 		method: 'PUT',
 		path: () => `/api/v1/sites/${SITE}/bills/${bill}`,
 		json: {},
-		expect: [401, 403, 400, 400, 404, 404]
+		expect: [401, 403, 400, 400, 404, 404, 403]
 	},
 	{
 		method: 'POST',
 		path: () => `/api/v1/sites/${SITE}/bills/${bill}/attachment`,
 		json: {},
-		expect: [401, 403, 400, 400, 404, 404]
+		expect: [401, 403, 400, 400, 404, 404, 403]
 	},
-	{ method: 'GET', path: () => `/api/v1/sites/${SITE}/usage`, expect: [401, 200, 200, 200, 404, 404] },
+	{ method: 'GET', path: () => `/api/v1/sites/${SITE}/usage`, expect: [401, 200, 200, 200, 404, 404, 200] },
 	{
 		method: 'POST',
 		path: () => `/api/v1/sites/${SITE}/usage`,
 		json: {},
-		expect: [401, 403, 415, 415, 404, 404]
+		expect: [401, 403, 415, 415, 404, 404, 403]
 	},
 	// The workspace's own data, and the account.
-	{ method: 'GET', path: () => `${ws}/export.json`, expect: [303, 403, 403, 200, 404, 404] },
+	{ method: 'GET', path: () => `${ws}/export.json`, expect: [303, 403, 403, 200, 404, 404, 404] },
 	{
 		method: 'POST',
 		path: () => `${ws}?/restore`,
 		form: { none: '' },
-		expect: [401, 403, 403, 200, 404, 404]
+		expect: [401, 403, 403, 200, 404, 404, 404]
 	},
-	{ method: 'GET', path: () => '/account', expect: [303, 200, 200, 200, 200, 200] },
+	{ method: 'GET', path: () => '/account', expect: [303, 200, 200, 200, 200, 200, 200] },
 	{
 		method: 'POST',
 		path: () => '/account?/delete',
 		form: { confirmEmail: 'wrong' },
-		expect: [401, 400, 400, 400, 400, 400]
+		expect: [401, 400, 400, 400, 400, 400, 400]
 	},
 	// Public pages and the anonymous calculation API: open to everyone.
 	...[
@@ -279,114 +304,118 @@ const routes: Route[] = [
 	].map((page) => ({
 		method: 'GET' as const,
 		path: () => page,
-		expect: [200, 200, 200, 200, 200, 200]
+		expect: [200, 200, 200, 200, 200, 200, 200]
 	})),
 	...['/signin', '/signup'].map((page) => ({
 		method: 'GET' as const,
 		path: () => page,
 		// Someone already signed in is sent on to their workspaces.
-		expect: [200, 303, 303, 303, 303, 303]
+		expect: [200, 303, 303, 303, 303, 303, 303]
 	})),
 	...['/reset?token=x', '/signup/confirm?token=x', '/invite/not-a-real-invitation-token-000'].map((page) => ({
 		method: 'GET' as const,
 		path: () => page,
-		expect: [200, 200, 200, 200, 200, 200]
+		expect: [200, 200, 200, 200, 200, 200, 200]
 	})),
 	...['/api/v1/calculate', '/api/v1/pumping'].map((api) => ({
 		method: 'POST' as const,
 		path: () => api,
 		json: {},
-		expect: [400, 400, 400, 400, 400, 400]
+		expect: [400, 400, 400, 400, 400, 400, 400]
 	})),
 	{
 		method: 'POST',
 		path: () => `/sites/${SITE}/bills/${bill}/attachments`,
 		// A plain form post without a file goes back to the bill page, which shows why.
 		form: { none: '' },
-		expect: [401, 403, 303, 303, 404, 404]
+		expect: [401, 403, 303, 303, 404, 404, 403]
 	},
 	// Comparisons of scenarios the caller may read, and their exports.
-	{ method: 'GET', path: () => '/compare', expect: [303, 200, 200, 200, 200, 200] },
+	{ method: 'GET', path: () => '/compare', expect: [303, 200, 200, 200, 200, 200, 200] },
 	...['/compare', '/compare/report'].map((page) => ({
 		method: 'GET' as const,
 		path: () => `${page}?${PAIR}`,
-		expect: [303, 200, 200, 200, 404, 404]
+		expect: [303, 200, 200, 200, 404, 404, 200]
 	})),
 	...['/api/v1/compare', '/api/v1/compare/export.csv', '/api/v1/compare/export.xlsx'].map((api) => ({
 		method: 'GET' as const,
 		path: () => `${api}?${PAIR}`,
-		expect: [401, 200, 200, 200, 404, 404]
+		expect: [401, 200, 200, 200, 404, 404, 200]
 	})),
 	...['equipment.csv', 'equipment.xlsx', 'import/template.csv'].map((file) => ({
 		method: 'GET' as const,
 		path: () => `/sites/${SITE}/scenarios/${SCENARIO}/${file}`,
-		expect: [303, 200, 200, 200, 404, 404]
+		expect: [303, 200, 200, 200, 404, 404, 200]
 	})),
 	{
 		method: 'GET',
 		path: () => `/sites/${SITE}/scenarios/${SCENARIO}/import`,
-		expect: [303, 403, 200, 200, 404, 404]
+		expect: [303, 403, 200, 200, 404, 404, 403]
 	},
 	{
 		method: 'POST',
 		path: () => `/sites/${SITE}/scenarios/${SCENARIO}/import`,
 		form: { intent: 'check' },
-		expect: [401, 403, 400, 400, 404, 404]
+		expect: [401, 403, 400, 400, 404, 404, 403]
 	},
 	...['create', 'baseline', 'archive', 'delete', 'share', 'unshare'].map((action) => ({
 		method: 'POST' as const,
 		path: () => `/sites/${SITE}?/${action}`,
 		form: { name: '', scenarioId: 'x', email: 'bad', userId: '' },
-		expect: [401, 403, 400, 400, 404, 404]
+		expect: [401, 403, 400, 400, 404, 404, 403]
 	})),
 	{
 		method: 'GET',
 		path: () => `/api/v1/sites?workspaceId=${DEMO_WS.id}`,
-		expect: [401, 200, 200, 200, 404, 404]
+		expect: [401, 200, 200, 200, 404, 404, 404]
 	},
 	{
 		method: 'POST',
 		path: () => '/api/v1/sites',
 		json: { workspaceId: DEMO_WS.id },
-		expect: [401, 403, 400, 400, 404, 404]
+		expect: [401, 403, 400, 400, 404, 404, 404]
 	},
-	{ method: 'GET', path: () => `/api/v1/sites/${SITE}/scenarios`, expect: [401, 200, 200, 200, 404, 404] },
+	{
+		method: 'GET',
+		path: () => `/api/v1/sites/${SITE}/scenarios`,
+		expect: [401, 200, 200, 200, 404, 404, 200]
+	},
 	{
 		method: 'POST',
 		path: () => `/api/v1/sites/${SITE}/scenarios`,
 		json: {},
-		expect: [401, 403, 400, 400, 404, 404]
+		expect: [401, 403, 400, 400, 404, 404, 403]
 	},
 	{
 		method: 'GET',
 		path: () => `/api/v1/scenarios/${SCENARIO}/equipment`,
-		expect: [401, 200, 200, 200, 404, 404]
+		expect: [401, 200, 200, 200, 404, 404, 200]
 	},
 	{
 		method: 'PUT',
 		path: () => `/api/v1/scenarios/${SCENARIO}/equipment`,
 		json: {},
-		expect: [401, 403, 400, 400, 404, 404]
+		expect: [401, 403, 400, 400, 404, 404, 403]
 	},
 	{
 		method: 'GET',
 		path: () => `/api/v1/scenarios/${SCENARIO}/results`,
-		expect: [401, 200, 200, 200, 404, 404]
+		expect: [401, 200, 200, 200, 404, 404, 200]
 	},
 	{
 		method: 'POST',
 		path: () => `/api/v1/scenarios/${SCENARIO}/results`,
 		json: {},
-		expect: [401, 400, 400, 400, 404, 404]
+		expect: [401, 400, 400, 400, 404, 404, 400]
 	},
 	{
 		method: 'POST',
 		path: () => `/tariffs/${privateTariff}?/copy`,
 		form: { workspaceId: DEMO_WS.id },
-		expect: [404, 403, 303, 303, 404, 404]
+		expect: [404, 403, 303, 303, 404, 404, 404]
 	},
 	// Last: it ends the caller's session. Auth.js answers with its own redirect.
-	{ method: 'POST', path: () => '/signout', form: { none: '' }, expect: [302, 302, 302, 302, 302, 302] }
+	{ method: 'POST', path: () => '/signout', form: { none: '' }, expect: [302, 302, 302, 302, 302, 302, 302] }
 ];
 
 async function signedIn(browser: Browser, baseURL: string, who: Who): Promise<APIRequestContext> {
@@ -395,7 +424,7 @@ async function signedIn(browser: Browser, baseURL: string, who: Who): Promise<AP
 		const page = await context.newPage();
 		await gotoReady(page, '/signin');
 		await page.locator('#pw-email').fill(people[who]);
-		await page.getByLabel('Password', { exact: true }).fill(DEMO_PASSWORD);
+		await page.getByLabel('Password', { exact: true }).fill(who === 'guest' ? GUEST_PASSWORD : DEMO_PASSWORD);
 		await page.getByRole('button', { name: 'Sign in', exact: true }).click();
 		await expect(page.getByRole('button', { name: 'Sign out' })).toBeVisible();
 	}
@@ -458,7 +487,26 @@ test.beforeAll(async ({ browser, baseURL }) => {
 	});
 	expect(attached.status()).toBe(201);
 	attachment = (await attached.json()).id;
+	await makeGuest(browser, owner, baseURL!);
 });
+
+/** The owner shares the hatchery with a new address as a viewer; the guest accepts and sets a password. */
+async function makeGuest(browser: Browser, owner: APIRequestContext, baseURL: string) {
+	const shared = await owner.post(`/sites/${SITE}?/share`, {
+		form: { email: people.guest, role: 'viewer' },
+		headers: { origin: baseURL, 'x-sveltekit-action': 'true' }
+	});
+	expect(await effectiveStatus(shared)).toBe(200);
+	const mail = await latestMail(people.guest, /is shared with you/);
+	const page = await (await browser.newContext({ baseURL })).newPage();
+	await gotoReady(page, new URL(linkIn(mail.text)).pathname);
+	await page.getByLabel('Your name').fill('Matrix guest (invented)');
+	await page.getByLabel('Password', { exact: true }).fill(GUEST_PASSWORD);
+	await page.getByLabel('Password again').fill(GUEST_PASSWORD);
+	await page.getByRole('button', { name: 'Create account and join' }).click();
+	await expect(page.getByRole('heading', { level: 1 })).toBeVisible();
+	await page.context().close();
+}
 
 for (const [column, who] of WHO.entries()) {
 	test(`access matrix: ${who}`, async ({ browser, baseURL }) => {
@@ -486,6 +534,15 @@ for (const [column, who] of WHO.entries()) {
 				expect(text).not.toContain(DEMO_WS.name);
 				expect(text).not.toContain('Private matrix tariff');
 				expect(text).not.toContain('Alder Creek');
+			}
+			// The guest sees their one site and nothing else of the workspace.
+			if (
+				who === 'guest' &&
+				(path.startsWith(ws) || path.includes(privateTariff) || path.includes(OTHER_SITE))
+			) {
+				const text = await res.text();
+				expect(text).not.toContain('Private matrix tariff');
+				expect(text).not.toContain('Bramble Hill');
 			}
 		}
 	});
