@@ -82,6 +82,8 @@ test.describe('signing up and in', () => {
 		await page.getByLabel('New password', { exact: true }).fill('second password 456');
 		await page.getByLabel('New password again').fill('second password 456');
 		await page.getByRole('button', { name: 'Save the new password' }).click();
+		// Wait for the saved password before signing in: hashing it can take a moment on a busy machine.
+		await expect(page.getByText('Your new password is saved. Sign in with it.')).toBeVisible();
 		await signInWithPassword(page, email, 'second password 456');
 	});
 

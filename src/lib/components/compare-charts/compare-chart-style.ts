@@ -1,4 +1,5 @@
 import type { ComparisonReport } from '$lib/compare/types';
+import { LEGEND_DASH, type LegendEntry } from '../chart-legend';
 import { CATEGORY_COLOURS, CATEGORY_NAMES } from '../scenario-charts/chart-style';
 import type { Category } from '../scenario-charts/daily-profile';
 
@@ -11,7 +12,7 @@ import type { Category } from '../scenario-charts/daily-profile';
 export const SCENARIO_COLOURS = ['#3c4f57', '#2f7a62', '#c58a2c', '#5b8fa8', '#7d6aa8', '#7c4a0f'] as const;
 
 /** The dash of the baseline's line (SVG stroke-dasharray). */
-export const BASELINE_DASH = '6 4';
+export const BASELINE_DASH = LEGEND_DASH;
 
 /** A scenario as the charts label and colour it; `index` is its place in `report.scenarios`. */
 export interface ScenarioKey {
@@ -36,14 +37,6 @@ export function scenarioKeys(report: ComparisonReport): ScenarioKey[] {
 		const name = sites.size > 1 ? `${scenario.name} (${scenario.siteName})` : scenario.name;
 		return { index, name, colour, baseline };
 	});
-}
-
-/** One entry of a chart's legend. */
-export interface LegendEntry {
-	key: string | number;
-	name: string;
-	colour: string;
-	dashed?: boolean;
 }
 
 /** The scenarios as a legend: the baseline says so, and its line is dashed. */
