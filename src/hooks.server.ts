@@ -60,8 +60,9 @@ export const handleError: HandleServerError = ({ error, event, status, message }
 	return { message: status === 404 ? 'Not found' : message };
 };
 
-/** Starts the job queue's workers with the server. */
+/** Starts the job queue's workers with the server; the job modules register their jobs when imported. */
 export const init: ServerInit = async () => {
 	await import('$lib/server/services/tariff-notice.service');
+	await import('$lib/server/services/workspace-deletion.service');
 	await startJobs();
 };

@@ -4,6 +4,7 @@ import { client, db } from '$lib/server/db';
 import { memberships, siteGrants, users } from '$lib/server/db/schema';
 import { createSite } from '$lib/server/services/site.service';
 import { acceptInvitation, createWorkspace, inviteToSite } from '$lib/server/services/workspace.service';
+import { newestMailTo } from './mail-catcher';
 
 // Against the real PostgreSQL of `npm test`; invented people and sites.
 const tag = `share-${Date.now()}`;
@@ -43,10 +44,7 @@ describe('sharing one site', () => {
 			},
 			'http://127.0.0.1'
 		);
-		const mails = (await (await fetch(`${process.env.MAIL_VIEW_URL}/messages?to=${email}`)).json()) as {
-			text: string;
-		}[];
-		const token = mails.at(-1)!.text.match(/\/invite\/([\w-]+)/)![1]!;
+		const token = (await newestMailTo(email)).text.match(/\/invite\/([\w-]+)/)![1]!;
 		const accepted = await acceptInvitation(token, { name: 'Client', password: 'client password 123' });
 		expect(accepted).toMatchObject({ siteId, workspaceId: ws });
 		const [guest] = await db.select().from(users).where(eq(users.email, email));

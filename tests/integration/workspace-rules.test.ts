@@ -13,6 +13,7 @@ import {
 	MembershipRuleError,
 	removeMember
 } from '$lib/server/services/workspace.service';
+import { newestMailTo } from './mail-catcher';
 
 // Against the real PostgreSQL that `npm test` starts; every row here is invented test data.
 const tag = `it-${Date.now()}`;
@@ -73,10 +74,7 @@ describe('invitations', () => {
 		);
 
 		// The token only travels in the e-mail: read it back from the catcher.
-		const mails = (await (await fetch(`${process.env.MAIL_VIEW_URL}/messages?to=${email}`)).json()) as {
-			text: string;
-		}[];
-		const token = mails.at(-1)!.text.match(/\/invite\/([\w-]+)/)![1]!;
+		const token = (await newestMailTo(email)).text.match(/\/invite\/([\w-]+)/)![1]!;
 		const [row] = await db.select().from(invitations).where(eq(invitations.email, email));
 		expect(row!.tokenHash).toBe(createHash('sha256').update(token).digest('hex'));
 		expect(row!.tokenHash).not.toContain(token);

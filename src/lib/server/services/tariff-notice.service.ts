@@ -12,7 +12,7 @@ import {
 	workspaces
 } from '../db/schema';
 import { defineJob } from '../jobs';
-import { sendMail } from '../mail';
+import { deliverMail } from '../mail';
 import { priceScenario } from './results.service';
 import { listDevices, listScenarios } from './site.service';
 
@@ -89,7 +89,7 @@ const perWorkspace = defineJob<ForWorkspace>('tariff-version-notice', async (job
 	].join('\n');
 	const origin = env.ORIGIN ?? 'http://127.0.0.1:3000';
 	for (const owner of owners)
-		await sendMail({
+		await deliverMail({
 			to: owner.email,
 			subject: `Tariff change: ${tariff.name} (${ws?.name ?? 'your workspace'})`,
 			text: `${title}.\n\n${body}\n\nThe tariff: ${origin}/tariffs/${tariff.id}\n`

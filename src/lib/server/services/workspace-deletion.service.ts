@@ -1,11 +1,11 @@
 import { and, eq, isNotNull, lte } from 'drizzle-orm';
 import { db } from '../db';
 import { workspaces } from '../db/schema';
+import { defineSchedule } from '../jobs';
 import { logger } from '../log';
 
 export const GRACE_DAYS = 7;
 const DAY_MS = 24 * 60 * 60 * 1000;
-const PURGE_EVERY_MS = 60 * 60 * 1000;
 
 /**
  * Removes every workspace whose grace period is over; its sites, tariffs, bills, members and audit trail
@@ -20,23 +20,19 @@ export async function purgeDeletedWorkspaces(now = new Date()): Promise<string[]
 	return removed.map((w) => w.id);
 }
 
-let lastPurge = 0;
-
-/** Runs the purge in the background at most once an hour; a failure is logged and tried again later. */
-export function purgeSoon(now = Date.now()) {
-	if (now - lastPurge < PURGE_EVERY_MS) return;
-	lastPurge = now;
-	purgeDeletedWorkspaces().catch((error: unknown) => {
-		lastPurge = 0;
-		logger.error({ err: error }, 'purging deleted workspaces failed');
-	});
-}
+/**
+ * The purge, hourly from the job queue: a workspace goes within the hour after its grace period even when
+ * nobody opens the app. The queue runs each tick once across app processes; should two purges still overlap
+ * (a retry), the second DELETE skips the rows the first removed, so it does no harm.
+ */
+export const purgeJob = defineSchedule('workspace-purge', '0 * * * *', async () => {
+	await purgeDeletedWorkspaces();
+});
 
 /** Marks the workspace for deletion in GRACE_DAYS days; until then it stays whole and can be kept. */
 export async function scheduleWorkspaceDeletion(workspaceId: string, now = new Date()): Promise<Date> {
 	const deleteAfter = new Date(now.getTime() + GRACE_DAYS * DAY_MS);
 	await db.update(workspaces).set({ deleteAfter }).where(eq(workspaces.id, workspaceId));
-	purgeSoon();
 	return deleteAfter;
 }
 

@@ -15,7 +15,6 @@ import {
 } from '$lib/server/services/workspace.service';
 import {
 	deletionDate,
-	purgeSoon,
 	restoreWorkspace,
 	scheduleWorkspaceDeletion
 } from '$lib/server/services/workspace-deletion.service';
@@ -25,7 +24,6 @@ import type { Actions, PageServerLoad } from './$types';
 
 export const load = (async (event) => {
 	const { workspace, role } = await requireRole(event, event.params.workspaceId, 'viewer');
-	purgeSoon();
 	const deleteAfter = await deletionDate(workspace.id);
 	return {
 		deleteAfter: deleteAfter?.toISOString() ?? null,
