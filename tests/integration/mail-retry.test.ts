@@ -14,17 +14,23 @@ import { createTariff, publishVersion } from '$lib/server/services/tariff.servic
 // the first attempt away. Invented people, site and tariff; the queue keeps its production retry settings.
 const tag = `retry-${Date.now()}`;
 const recipient = `owner-${tag}@example.org`;
+/** Someone sent a message straight from a request (an invitation, a sign-in link). */
+const invitee = `invitee-${tag}@example.org`;
 const attempts: { at: number; accepted: boolean }[] = [];
+const inviteeAttempts: { at: number; accepted: boolean }[] = [];
 const delivered: { at: number; to: string[]; subject: string; text: string }[] = [];
 
-/** Says "451, try again later" to the first RCPT for the owner, then takes mail as any server would. */
+/** Says "451, try again later" to the first RCPT for the owner and for the invitee, then takes mail as any
+ * server would. */
 const smtp = new SMTPServer({
 	disabledCommands: ['STARTTLS', 'AUTH'],
 	logger: false,
 	onRcptTo(address, _session, callback) {
-		if (address.address.toLowerCase() !== recipient) return callback();
-		const accepted = attempts.length > 0;
-		attempts.push({ at: Date.now(), accepted });
+		const to = address.address.toLowerCase();
+		const tries = to === recipient ? attempts : to === invitee ? inviteeAttempts : null;
+		if (!tries) return callback();
+		const accepted = tries.length > 0;
+		tries.push({ at: Date.now(), accepted });
 		if (accepted) return callback();
 		callback(Object.assign(new Error('Mailbox busy, try again later (test)'), { responseCode: 451 }));
 	},
@@ -158,5 +164,35 @@ describe('a tariff notice whose first send the mail server turns away', () => {
 		// 8,760 kWh in 2027 at 0.10 and at 0.20 a kWh (a 1 kW pump that never stops; invented rates).
 		expect(mail.text).toContain(`Retry pond ${tag}: $876.00 → $1,752.00 a year (+$876.00)`);
 		expect(await db.select().from(notices).where(eq(notices.workspaceId, workspaceId))).toHaveLength(1);
+	}, 30_000);
+});
+
+describe('a message sent from a request whose first send the mail server turns away', () => {
+	it('is queued at once, retried and delivered once', async () => {
+		const { sendMail } = await import('$lib/server/mail');
+		const started = Date.now();
+		await sendMail({ to: invitee, subject: `Invitation (${tag})`, text: 'An invented invitation.' });
+		// The request's part ends when the message is queued, not when a server takes it.
+		expect(Date.now() - started).toBeLessThan(1_000);
+
+		const mail = await until(
+			'the message to arrive',
+			() => delivered.find((m) => m.to.includes(invitee)),
+			25_000
+		);
+		const [job] = await until(
+			'the mail job to complete',
+			async () => {
+				const rows = await client<{ state: string; retryCount: number }[]>`
+					select state, retry_count as "retryCount" from pgboss.job
+					where name = 'send-mail' and data->>'to' = ${invitee}`;
+				return rows[0]?.state === 'completed' ? rows : undefined;
+			},
+			5_000
+		);
+		expect(inviteeAttempts.map((a) => a.accepted)).toEqual([false, true]);
+		expect(job!.retryCount).toBeGreaterThanOrEqual(1);
+		expect(delivered.filter((m) => m.to.includes(invitee))).toHaveLength(1);
+		expect(mail.subject).toBe(`Invitation (${tag})`);
 	}, 30_000);
 });
