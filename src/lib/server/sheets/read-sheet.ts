@@ -1,5 +1,6 @@
 import ExcelJS from 'exceljs';
 import Papa from 'papaparse';
+import { NOT_A_WORKBOOK, refuseZip } from './zip-guard';
 
 /**
  * Reading an uploaded sheet (CSV, or the first worksheet of an XLSX workbook) into rows of trimmed
@@ -51,12 +52,15 @@ function cellText(value: ExcelJS.CellValue): string {
 }
 
 async function readXlsx(bytes: Uint8Array, maxRows: number, rowWord: string): Promise<Read> {
+	// exceljs unpacks every part into memory: a workbook that unpacks too far never reaches it.
+	const refused = await refuseZip(bytes);
+	if (refused) return { error: refused };
 	const workbook = new ExcelJS.Workbook();
 	try {
 		// exceljs types its argument as an ArrayBuffer; a copy gives exactly the file's bytes.
 		await workbook.xlsx.load(bytes.slice().buffer);
 	} catch {
-		return { error: 'The file is not a readable XLSX workbook' };
+		return { error: NOT_A_WORKBOOK };
 	}
 	const sheet = workbook.worksheets[0];
 	if (!sheet) return { error: 'The workbook has no worksheet' };

@@ -1,4 +1,5 @@
 import { XMLParser, XMLValidator } from 'fast-xml-parser';
+import { DECLARES_ENTITIES } from './declarations';
 import { isNode, readingBlocks, textOf, type ReadingBlock, type ReadingKind } from './green-button-feed';
 import {
 	MAX_INTERVAL_SECONDS,
@@ -90,19 +91,21 @@ export function parseGreenButton(text: string): UsageRead {
 	// Blank lines before the declaration are not strictly XML, but harmless: read past them.
 	const xml = text.replace(/^\uFEFF/, '').trimStart();
 	if (!xml.startsWith('<')) return { error: 'This is not an XML file.' };
-	if (DECLARATION.test(xml))
-		return {
-			error:
-				'The file declares a DOCTYPE or entities, which Green Button files never do; it is refused ' +
-				'unread, as such declarations can make a small file expand without end.'
-		};
+	if (DECLARATION.test(xml)) return { error: DECLARES_ENTITIES };
 	// Counted before parsing, so an oversized file is refused without building its tree.
 	const readings = xml.match(READING_END)?.length ?? 0;
 	if (readings > MAX_INTERVALS) return { error: tooMany(readings) };
 	const valid = XMLValidator.validate(xml);
 	if (valid !== true)
 		return { error: `The XML is malformed or cut short (line ${valid.err.line}: ${valid.err.msg}).` };
-	const feed: unknown = parser.parse(xml).feed;
+	let feed: unknown;
+	try {
+		feed = parser.parse(xml).feed;
+	} catch {
+		// Past the validator, what the parser still throws on is elements nested deeper than its
+		// maxNestedTags (100 by default); a Green Button feed nests about 8 deep.
+		return { error: 'The XML nests its elements far deeper than a Green Button download does.' };
+	}
 	if (!isNode(feed))
 		return { error: 'This XML file is not a Green Button download: it has no Atom feed of readings.' };
 

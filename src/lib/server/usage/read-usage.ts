@@ -1,4 +1,5 @@
 import { Worker } from 'node:worker_threads';
+import { DECLARES_ENTITIES, declaresEntities } from './declarations';
 import type { Interval, UsageRead } from './interval';
 import type { ParseAnswer, ParseJob, UsageFormat } from './parse-job';
 
@@ -88,6 +89,7 @@ export async function readUsageFile(
 	const format = usageFormat(bytes);
 	if (bytes.byteLength === 0) return { format, error: 'The file is empty.' };
 	if (bytes.byteLength > MAX_USAGE_BYTES) return { format, error: 'The file is over 10 MB.' };
+	if (format === 'green-button' && declaresEntities(bytes)) return { format, error: DECLARES_ENTITIES };
 	// Moving the bytes needs a buffer holding exactly them.
 	const own = bytes.byteOffset === 0 && bytes.byteLength === bytes.buffer.byteLength ? bytes : bytes.slice();
 	const answer = await run({ format, bytes: own, timezone });
