@@ -86,3 +86,21 @@ test('hostile uploads: a zip bomb, an XML bomb and a renamed program are refused
 	expect(health.status()).toBe(200);
 	expect(await health.json()).toEqual({ ok: true, database: 'up' });
 });
+
+test('hostile uploads: the tariff sheet import ties a refused workbook to its file field', async ({
+	page
+}) => {
+	await signInWithPassword(page, 'owner@example.org');
+	await gotoReady(page, '/tariffs/import');
+	const sheet = page.getByLabel(/^Sheet/);
+	await sheet.setInputFiles({
+		name: 'tariffs.xlsx',
+		mimeType: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet',
+		buffer: zipBomb(60 * 1024 * 1024)
+	});
+	await page.getByRole('button', { name: 'Check only' }).click();
+	await expect(page.locator('#sheet-error')).toContainText('The sheet was not imported.');
+	await expect(page.locator('#sheet-error')).toContainText('This workbook unpacks to more than 50 MB');
+	await expect(sheet).toHaveAttribute('aria-invalid', 'true');
+	await expect(sheet).toHaveAttribute('aria-describedby', 'sheet-error');
+});
