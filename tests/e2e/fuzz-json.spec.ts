@@ -82,3 +82,48 @@ test('hostile JSON never gets a 500 or a stack trace from any JSON endpoint', as
 		);
 	}
 });
+
+// Values JavaScript holds and PostgreSQL cannot store, found by the form fuzz: each is refused with a
+// field path instead of failing at the database.
+test('U+0000 in text and revisions past a database integer are refused with field paths', async ({
+	page
+}) => {
+	await signInWithPassword(page, 'editor@example.org');
+	const scenario = site.scenarios[0]!.id;
+	const listed = await page.request.get(`/api/v1/scenarios/${scenario}/equipment`);
+	const { revision } = (await listed.json()) as { revision: number };
+	const cases: [string, string, unknown, string][] = [
+		[
+			'PUT',
+			`/api/v1/scenarios/${scenario}/equipment`,
+			{
+				expectedRevision: revision,
+				devices: [{ name: 'Pump\u0000', power: { watts: 100 }, schedule: { type: 'always' } }]
+			},
+			'devices.0.name'
+		],
+		[
+			'PUT',
+			`/api/v1/scenarios/${scenario}/equipment`,
+			{ expectedRevision: 2 ** 31, devices: [] },
+			'expectedRevision'
+		],
+		[
+			'POST',
+			'/api/v1/calculate',
+			{
+				period: { start: '2027-01', months: 1 },
+				timezone: 'America/Chicago',
+				tariff: { currency: 'USD', energyCharges: [{ label: 'Energy\u0000', type: 'flat', perKwh: 0.1 }] },
+				equipment: [{ name: 'Pump', power: { watts: 100 }, schedule: { type: 'always' } }]
+			},
+			'tariff.energyCharges.0.label'
+		]
+	];
+	for (const [method, path, data, field] of cases) {
+		const res = await page.request.fetch(path, { method, data });
+		expect(res.status(), `${method} ${path} ${field}`).toBe(400);
+		const body = (await res.json()) as { issues?: { path: string }[] };
+		expect(body.issues?.map((issue) => issue.path)).toContain(field);
+	}
+});

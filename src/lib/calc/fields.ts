@@ -40,13 +40,16 @@ export function amount(label: string, bounds: Bounds = {}) {
 	return schema;
 }
 
-/** A trimmed, non-empty string of bounded length. */
+/** A trimmed, non-empty string of bounded length, without U+0000 (which no database column can hold). */
 export function text(label: string, maxLength = 80) {
 	return z
 		.string({ error: required(label, 'text') })
 		.trim()
 		.min(1, { error: `${label} must not be empty` })
-		.max(maxLength, { error: `${label} must be at most ${maxLength} characters` });
+		.max(maxLength, { error: `${label} must be at most ${maxLength} characters` })
+		.refine((value) => !value.includes('\u0000'), {
+			error: `${label} holds an invisible control character (U+0000); remove it`
+		});
 }
 
 /** One of a fixed list of words. */

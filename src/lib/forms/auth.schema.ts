@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { NUL_MESSAGE, withoutNul } from './storable';
 
 // Shared by the forms and the server: the same rules give the same messages in both places.
 
@@ -26,7 +27,8 @@ export const nameField = z
 	.string({ error: 'Enter your name.' })
 	.trim()
 	.min(1, 'Enter your name.')
-	.max(100, 'Use at most 100 characters.');
+	.max(100, 'Use at most 100 characters.')
+	.refine(withoutNul, NUL_MESSAGE);
 
 export const signUpSchema = z
 	.object({ name: nameField, email: emailField, password: newPasswordField, confirm: z.string() })
@@ -40,6 +42,7 @@ export const workspaceNameField = z
 	.string({ error: 'Name the workspace.' })
 	.trim()
 	.min(2, 'Use at least 2 characters.')
-	.max(80, 'Use at most 80 characters.');
+	.max(80, 'Use at most 80 characters.')
+	.refine(withoutNul, NUL_MESSAGE);
 
 export const roleField = z.enum(['owner', 'editor', 'viewer'], { error: 'Pick owner, editor or viewer.' });

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { NUL_MESSAGE, withoutNul } from './storable';
 
 /** A bill as its form, its sheet rows and the API take it. Dates are the bill's inclusive period. */
 const ISO_DATE = /^\d{4}-\d{2}-\d{2}$/;
@@ -13,7 +14,9 @@ const isoDate = (label: string) =>
 			(s) =>
 				!Number.isNaN(Date.parse(`${s}T00:00:00Z`)) && new Date(`${s}T00:00:00Z`).toISOString().startsWith(s),
 			`${label} is not a real date`
-		);
+		)
+		// The calendar has no year 0 (PostgreSQL refuses it), though JavaScript's dates accept it.
+		.refine((s) => !s.startsWith('0000'), `${label} is not a real date`);
 
 const number = (label: string, min: number, max: number) =>
 	z.coerce
@@ -31,7 +34,8 @@ export const lineItemSchema = z.object({
 		.string()
 		.trim()
 		.min(1, 'Name the line as the bill prints it')
-		.max(120, 'Use at most 120 characters'),
+		.max(120, 'Use at most 120 characters')
+		.refine(withoutNul, NUL_MESSAGE),
 	amount: number('Line amount', -1_000_000, 1_000_000)
 });
 
@@ -46,7 +50,12 @@ export const billSchema = z
 		notes: z
 			.preprocess(
 				blankToNull,
-				z.string().trim().max(2000, 'Notes must be at most 2000 characters').nullable()
+				z
+					.string()
+					.trim()
+					.max(2000, 'Notes must be at most 2000 characters')
+					.refine(withoutNul, NUL_MESSAGE)
+					.nullable()
 			)
 			.default(null)
 	})

@@ -1,10 +1,12 @@
 import { z } from 'zod';
+import { NUL_MESSAGE, withoutNul } from './storable';
 
 const optionalText = (label: string, max: number) =>
 	z
 		.string()
 		.trim()
 		.max(max, `${label} must be at most ${max} characters`)
+		.refine(withoutNul, NUL_MESSAGE)
 		.optional()
 		.transform((s) => (s ? s : null));
 
@@ -24,7 +26,8 @@ export const siteSchema = z.object({
 		.string({ error: 'Name the site' })
 		.trim()
 		.min(1, 'Name the site')
-		.max(120, 'Use at most 120 characters'),
+		.max(120, 'Use at most 120 characters')
+		.refine(withoutNul, NUL_MESSAGE),
 	address: optionalText('Address or area', 300),
 	timezone: z.string({ error: 'Time zone is required' }).trim().min(1, 'Time zone is required').max(64),
 	country: z
@@ -58,6 +61,7 @@ export const scenarioSchema = z.object({
 		.string({ error: 'Name the scenario' })
 		.trim()
 		.min(1, 'Name the scenario')
-		.max(120, 'Use at most 120 characters'),
+		.max(120, 'Use at most 120 characters')
+		.refine(withoutNul, NUL_MESSAGE),
 	description: optionalText('Description', 2000)
 });

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { NUL_MESSAGE, withoutNul } from './storable';
 
 // What the library knows about a tariff besides its charges (those follow the core's tariffSchema),
 // and the provenance every published version carries. Shared by the editor, the API and the imports.
@@ -32,20 +33,24 @@ const isoDate = (label: string) =>
 			{
 				message: `${label} is not a real calendar date`
 			}
-		);
+		)
+		// The calendar has no year 0 (PostgreSQL refuses it), though JavaScript's dates accept it.
+		.refine((s) => !s.startsWith('0000'), `${label} is not a real calendar date`);
 
 const shortText = (label: string, max = 120) =>
 	z
 		.string({ error: `${label} is required` })
 		.trim()
 		.min(1, `${label} is required`)
-		.max(max, `${label} must be at most ${max} characters`);
+		.max(max, `${label} must be at most ${max} characters`)
+		.refine(withoutNul, NUL_MESSAGE);
 
 const optionalText = (label: string, max = 120) =>
 	z
 		.string()
 		.trim()
 		.max(max, `${label} must be at most ${max} characters`)
+		.refine(withoutNul, NUL_MESSAGE)
 		.transform((s) => (s === '' ? null : s))
 		.nullable()
 		.optional()
@@ -93,7 +98,12 @@ export const versionMetaSchema = z
 			.transform((s) => s ?? null),
 		source: shortText('Source', 500),
 		checkedOn: isoDate('Checked on'),
-		changeNote: z.string().trim().max(2000, 'Change note must be at most 2000 characters').default('')
+		changeNote: z
+			.string()
+			.trim()
+			.max(2000, 'Change note must be at most 2000 characters')
+			.refine(withoutNul, NUL_MESSAGE)
+			.default('')
 	})
 	.refine((v) => !v.effectiveTo || v.effectiveTo >= v.effectiveFrom, {
 		path: ['effectiveTo'],

@@ -3,13 +3,14 @@ import { z } from 'zod';
 import { parseRequest } from '$lib/calc';
 import { billSchema } from '$lib/forms/bill.schema';
 import type { BillRow } from './bill.service';
+import { MAX_REVISION } from '$lib/forms/storable';
 
 /** The JSON body of POST and PUT: a bill, plus the overlap confirmation and (PUT) the revision edited. */
 export const billBodySchema = z.intersection(
 	billSchema,
 	z.object({
 		confirmOverlap: z.boolean({ error: 'confirmOverlap must be true or false' }).default(false),
-		expectedRevision: z.number().int().min(0).optional()
+		expectedRevision: z.number().int().min(0).max(MAX_REVISION).optional()
 	})
 );
 

@@ -1,5 +1,6 @@
 import { billSchema } from '$lib/forms/bill.schema';
 import { fieldErrors, keepValues } from '$lib/forms/errors';
+import { revisionOf } from '$lib/forms/storable';
 
 /** The bill form's fields: line items come as "label | amount" lines in one text box. */
 export function readBillForm(form: FormData) {
@@ -34,6 +35,7 @@ export function readBillForm(form: FormData) {
 		ok: true as const,
 		values,
 		bill: parsed.data,
+		revision: revisionOf(form.get('expectedRevision')),
 		confirmOverlap: form.get('confirmOverlap') === 'yes'
 	};
 }

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { equipmentSchema } from '$lib/calc';
+import { MAX_REVISION, NUL_MESSAGE, withoutNul } from '$lib/forms/storable';
 
 /** A stored device: the core's equipment plus the safety flags; names must be unique within a scenario (the trail and charts name them). */
 export const deviceSpecSchema = z.intersection(
@@ -7,11 +8,15 @@ export const deviceSpecSchema = z.intersection(
 	z.object({
 		inWater: z.boolean().optional(),
 		outdoor: z.boolean().optional(),
-		notes: z.string().max(2000).optional()
+		notes: z.string().max(2000).refine(withoutNul, NUL_MESSAGE).optional()
 	})
 );
 
-const expectedRevision = z.number({ error: 'Send the revision you edited (expectedRevision)' }).int().min(0);
+const expectedRevision = z
+	.number({ error: 'Send the revision you edited (expectedRevision)' })
+	.int()
+	.min(0)
+	.max(MAX_REVISION);
 
 export const equipmentListSchema = z
 	.object({

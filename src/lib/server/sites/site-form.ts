@@ -2,6 +2,7 @@ import { fail, type RequestEvent } from '@sveltejs/kit';
 import { holidaysSchema, timezoneSchema } from '$lib/calc';
 import { siteSchema, type SiteInput } from '$lib/forms/site.schema';
 import { fieldErrors, keepValues } from '$lib/forms/errors';
+import { revisionOf } from '$lib/forms/storable';
 import { searchTariffs } from '../services/tariff.service';
 
 /** The tariffs a site of this workspace may use: the public library and the workspace's own. */
@@ -47,5 +48,5 @@ export async function readSiteForm(
 	}
 	if (!parsed.success || Object.keys(errors).length)
 		return { ok: false, failure: fail(400, { values, errors }) };
-	return { ok: true, input: parsed.data, revision: Number(values.revision ?? 0) };
+	return { ok: true, input: parsed.data, revision: revisionOf(values.revision ?? 0) };
 }

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { holidaysSchema, referenceMonthlyCost, tariffSchema, timezoneSchema } from '$lib/calc';
 import { tariffMetaSchema, versionMetaSchema } from '$lib/forms/tariff-meta.schema';
 import type { VersionRow, TariffRow } from '../services/tariff.service';
+import { MAX_REVISION } from '$lib/forms/storable';
 
 /**
  * What the editor, the JSON upload and the API submit. The browser checks the same shapes; the server
@@ -12,7 +13,7 @@ export const tariffSubmissionSchema = z
 		meta: tariffMetaSchema.extend({ timezone: timezoneSchema, holidays: holidaysSchema }),
 		version: versionMetaSchema,
 		structure: tariffSchema,
-		expectedRevision: z.number().int().min(0).optional()
+		expectedRevision: z.number().int().min(0).max(MAX_REVISION).optional()
 	})
 	.superRefine((s, ctx) => {
 		if (s.structure.currency !== s.meta.currency)

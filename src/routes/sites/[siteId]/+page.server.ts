@@ -16,6 +16,7 @@ import {
 import { priceScenario } from '$lib/server/services/results.service';
 import { scenarioSchema } from '$lib/forms/site.schema';
 import { fieldErrors, keepValues } from '$lib/forms/errors';
+import { withoutNul } from '$lib/forms/storable';
 import { hasMainsInWater } from '$lib/cautions';
 import type { Actions, PageServerLoad } from './$types';
 
@@ -104,7 +105,7 @@ export const actions = {
 	unshare: async (event) => {
 		const { site } = await requireSharer(event);
 		const parsed = z
-			.object({ userId: z.string().min(1).max(100) })
+			.object({ userId: z.string().min(1).max(100).refine(withoutNul) })
 			.safeParse(Object.fromEntries(await event.request.formData()));
 		if (!parsed.success)
 			return fail(400, { action: 'unshare', errors: { form: 'Pick a person to stop sharing with.' } });

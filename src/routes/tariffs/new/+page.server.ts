@@ -2,6 +2,7 @@ import { error, fail } from '@sveltejs/kit';
 import { requireUser } from '$lib/server/guard';
 import { listWorkspacesFor } from '$lib/server/services/workspace.service';
 import { tariffFormAction } from '$lib/server/tariffs/form-action';
+import { jsonField, NUL_MESSAGE, nulPath } from '$lib/forms/storable';
 import type { Actions, PageServerLoad } from './$types';
 
 async function ownerChoices(user: SessionUser) {
@@ -22,9 +23,12 @@ export const load = (async (event) => {
 export const actions = {
 	default: async (event) => {
 		const user = requireUser(event);
-		const owner = String((await event.request.clone().formData()).get('owner') ?? '');
+		const form = await event.request.clone().formData();
+		const owner = String(form.get('owner') ?? '');
 		const owners = await ownerChoices(user);
 		if (!owners.some((o) => o.value === owner)) return fail(400, { owner: 'Pick whose tariff this is.' });
+		const nul = nulPath(jsonField(form.get('payload')));
+		if (nul !== null) return fail(400, { issues: [{ path: nul, message: NUL_MESSAGE }] });
 		return tariffFormAction(event, { workspaceId: owner === 'public' ? null : owner });
 	}
 } satisfies Actions;

@@ -20,6 +20,7 @@ import {
 } from '$lib/server/services/workspace-deletion.service';
 import { emailField, roleField, workspaceNameField } from '$lib/forms/auth.schema';
 import { fieldErrors, keepValues } from '$lib/forms/errors';
+import { NUL_MESSAGE, withoutNul } from '$lib/forms/storable';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load = (async (event) => {
@@ -39,8 +40,9 @@ export const load = (async (event) => {
 }) satisfies PageServerLoad;
 
 const inviteSchema = z.object({ email: emailField, role: roleField });
-const roleSchema = z.object({ userId: z.string().min(1).max(100), role: roleField });
-const userSchema = z.object({ userId: z.string().min(1).max(100) });
+const userIdField = z.string().min(1).max(100).refine(withoutNul, NUL_MESSAGE);
+const roleSchema = z.object({ userId: userIdField, role: roleField });
+const userSchema = z.object({ userId: userIdField });
 const invitationSchema = z.object({ invitationId: z.uuid() });
 
 /** Runs a membership change and turns the owner rule into a message on the form. */

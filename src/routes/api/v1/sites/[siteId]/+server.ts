@@ -7,12 +7,17 @@ import { findSite, StaleWrite, updateSite } from '$lib/server/services/site.serv
 import { siteSchema } from '$lib/forms/site.schema';
 import { conflict, invalid, methodNotAllowed, PRIVATE, tariffChoiceIssue } from '../../site-api.server';
 import type { RequestHandler } from './$types';
+import { MAX_REVISION } from '$lib/forms/storable';
 
 /** The site form's schema with the server's checks (as POST /api/v1/sites), plus the revision edited. */
 const siteUpdateSchema = siteSchema
 	.extend({
 		timezone: timezoneSchema,
-		expectedRevision: z.number({ error: 'Send the revision you edited (expectedRevision)' }).int().min(0)
+		expectedRevision: z
+			.number({ error: 'Send the revision you edited (expectedRevision)' })
+			.int()
+			.min(0)
+			.max(MAX_REVISION)
 	})
 	.superRefine((s, ctx) => {
 		// Zod runs this even when the country failed its own check; one issue per mistake is enough.

@@ -44,8 +44,7 @@ export const actions = {
 			event.params.billId,
 			'editor'
 		);
-		const form = await event.request.formData();
-		const read = readBillForm(form);
+		const read = readBillForm(await event.request.formData());
 		if (!read.ok) return fail(400, { values: read.values, errors: read.errors });
 		const overlaps = await overlappingBills(site.id, read.bill.periodFrom, read.bill.periodTo, bill.id);
 		if (overlaps.length && !read.confirmOverlap) {
@@ -56,7 +55,7 @@ export const actions = {
 			});
 		}
 		try {
-			await updateBill(site, bill, Number(form.get('expectedRevision')), read.bill, user);
+			await updateBill(site, bill, read.revision, read.bill, user);
 		} catch (e) {
 			if (!(e instanceof StaleWrite)) throw e;
 			return fail(409, {

@@ -8,6 +8,7 @@ import {
 	MAX_EQUIPMENT_ROWS,
 	parseEquipmentSheet
 } from '$lib/server/sites/equipment-sheet/parse';
+import { NUL_MESSAGE, nulPath, revisionOf } from '$lib/forms/storable';
 import type { Actions, PageServerLoad, RequestEvent } from './$types';
 
 async function editable(event: RequestEvent) {
@@ -77,6 +78,13 @@ export const actions = {
 			accepted: sheet.devices.length,
 			refused: sheet.errors.map((e) => ({ line: e.line, field: e.field, message: describeRowError(e) }))
 		};
+		// A spreadsheet cell can carry U+0000 (written _x0000_), which a device list cannot store.
+		const unstorable = sheet.devices.find((d) => nulPath(d.spec) !== null);
+		if (unstorable)
+			return fail(400, {
+				...report,
+				errors: { sheet: `Row ${unstorable.line}, ${nulPath(unstorable.spec)}: ${NUL_MESSAGE}` }
+			});
 		if (intent === 'check') return report;
 		if (sheet.devices.length === 0)
 			return fail(400, { ...report, errors: { sheet: 'No row can be imported.' } });
@@ -94,9 +102,8 @@ export const actions = {
 				errors: { sheet: `A scenario holds at most ${MAX_EQUIPMENT_ROWS} devices.` }
 			});
 		}
-		const expected = Number(form.get('expectedRevision'));
 		try {
-			await saveDevices(site, scenario, Number.isInteger(expected) ? expected : -1, list, user);
+			await saveDevices(site, scenario, revisionOf(form.get('expectedRevision')), list, user);
 		} catch (e) {
 			if (!(e instanceof StaleWrite)) throw e;
 			return fail(409, {
