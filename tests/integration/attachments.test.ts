@@ -4,7 +4,7 @@ import { crc32, deflateSync } from 'node:zlib';
 import { ListObjectsV2Command, S3Client } from '@aws-sdk/client-s3';
 import { and, eq } from 'drizzle-orm';
 import { client, db } from '$lib/server/db';
-import { auditEvents, billAttachments, bills, users } from '$lib/server/db/schema';
+import { auditEvents, billAttachments, bills } from '$lib/server/db/schema';
 import {
 	addAttachment,
 	checkUpload,
@@ -13,9 +13,11 @@ import {
 	readAttachment,
 	removeAttachment
 } from '$lib/server/bills/attachments';
-import { createSite } from '$lib/server/services/site.service';
+import type { Actor } from '$lib/server/services/audit.service';
+import type { SiteRow } from '$lib/server/services/site.service';
 import { createWorkspace } from '$lib/server/services/workspace.service';
 import { deleteObject, getObject, putObject } from '$lib/server/storage/object-store';
+import { makeSite, makeUser } from './fixtures';
 
 // Against the PostgreSQL and the local S3 stand-in that `node scripts/test.mjs integration` starts.
 // Every person, site, bill and file here is invented test data.
@@ -172,33 +174,16 @@ async function storedKeys(): Promise<string[]> {
 const bytesOf = async (stream: ReadableStream<Uint8Array>) =>
 	new Uint8Array(await new Response(stream).arrayBuffer());
 
-let actor = { id: '', name: 'Tess Rowan (invented)' as string | null, email: '' };
-let site = { id: '', workspaceId: '' };
-let otherSite = { id: '', workspaceId: '' };
+let actor: Actor;
+let site: SiteRow;
+let otherSite: SiteRow;
 let billId = '';
 
 beforeAll(async () => {
-	const [u] = await db
-		.insert(users)
-		.values({ email: `editor-${tag}@example.org`, name: actor.name })
-		.returning({ id: users.id, name: users.name, email: users.email });
-	actor = u!;
-	const siteInput = (name: string) => ({
-		name,
-		address: null,
-		timezone: 'America/Chicago',
-		country: 'US',
-		region: null,
-		supplyVolts: null,
-		supplyPhases: null,
-		tariffId: null,
-		tariffVersion: null,
-		currency: 'USD',
-		notes: null
-	});
+	actor = await makeUser(`editor-${tag}@example.org`, 'Tess Rowan (invented)');
 	const ws = await createWorkspace(`Attachments ${tag}`, actor.id);
-	site = { id: await createSite(ws, siteInput(`Pond site ${tag}`), actor), workspaceId: ws };
-	otherSite = { id: await createSite(ws, siteInput(`Greenhouse ${tag}`), actor), workspaceId: ws };
+	site = await makeSite(ws, actor, `Pond site ${tag}`);
+	otherSite = await makeSite(ws, actor, `Greenhouse ${tag}`);
 	const [bill] = await db
 		.insert(bills)
 		.values({ siteId: site.id, periodFrom: '2026-01-01', periodTo: '2026-01-31', kwh: 500, amount: 80 })

@@ -22,41 +22,22 @@ import {
 	scheduleWorkspaceDeletion
 } from '$lib/server/services/workspace-deletion.service';
 import { deleteAccount } from '$lib/server/services/account-deletion.service';
+import { makeUser, siteInput } from './fixtures';
 
 // Against the real PostgreSQL that `npm test` starts; every row here is invented test data.
 const tag = `own-${Date.now()}`;
 const DAY = 24 * 60 * 60 * 1000;
 
-async function makeUser(name: string) {
-	const [u] = await db
-		.insert(users)
-		.values({
-			email: `${name}-${tag}@example.org`,
-			name: `${name} (invented)`,
-			passwordHash: 'not-a-real-hash'
-		})
-		.returning({ id: users.id, email: users.email, name: users.name });
-	return u!;
-}
+/** A user with a password hash, which the export must leave out. */
+const person = (name: string) =>
+	makeUser(`${name}-${tag}@example.org`, `${name} (invented)`, { passwordHash: 'not-a-real-hash' });
 
-const siteInput = (name: string) => ({
-	name,
-	address: '1 Test Lane, example.org',
-	timezone: 'America/Chicago',
-	country: 'US',
-	region: null,
-	supplyVolts: null,
-	supplyPhases: null,
-	tariffId: null,
-	tariffVersion: null,
-	currency: 'USD',
-	notes: null
-});
+const siteWithAddress = (name: string) => siteInput(name, { address: '1 Test Lane, example.org' });
 
 /** A workspace with one site, its baseline scenario holding one device, and one bill with an attachment. */
 async function stockedWorkspace(owner: { id: string; name: string | null; email: string }, label: string) {
 	const ws = await createWorkspace(`${label} ${tag}`, owner.id);
-	const siteId = await createSite(ws, siteInput(`${label} pond ${tag}`), owner);
+	const siteId = await createSite(ws, siteWithAddress(`${label} pond ${tag}`), owner);
 	const [scenario] = await db
 		.select({ id: scenarios.id })
 		.from(scenarios)
@@ -81,7 +62,7 @@ async function stockedWorkspace(owner: { id: string; name: string | null; email:
 let owner = { id: '', email: '', name: null as string | null };
 
 beforeAll(async () => {
-	owner = await makeUser('owner');
+	owner = await person('owner');
 });
 
 afterAll(async () => {
@@ -142,8 +123,8 @@ describe('deleting a workspace', () => {
 
 describe('deleting an account', () => {
 	it('is refused for the last owner of a workspace others use, naming it', async () => {
-		const lead = await makeUser('lead');
-		const helper = await makeUser('helper');
+		const lead = await person('lead');
+		const helper = await person('helper');
 		const ws = await createWorkspace(`Shared ${tag}`, lead.id);
 		await db.insert(memberships).values({ workspaceId: ws, userId: helper.id, role: 'editor' });
 		expect(await deleteAccount(lead.id)).toEqual({ deleted: false, blockers: [`Shared ${tag}`] });
@@ -151,12 +132,12 @@ describe('deleting an account', () => {
 	});
 
 	it('removes the user and their sole-member workspace, keeps shared ones, and keeps audit names', async () => {
-		const leaver = await makeUser('leaver');
-		const partner = await makeUser('partner');
+		const leaver = await person('leaver');
+		const partner = await person('partner');
 		const solo = await stockedWorkspace(leaver, 'Elm');
 		const shared = await createWorkspace(`Partnership ${tag}`, partner.id);
 		await db.insert(memberships).values({ workspaceId: shared, userId: leaver.id, role: 'owner' });
-		const sharedSite = await createSite(shared, siteInput(`Shared field ${tag}`), leaver);
+		const sharedSite = await createSite(shared, siteWithAddress(`Shared field ${tag}`), leaver);
 
 		const result = await deleteAccount(leaver.id);
 		expect(result).toEqual({ deleted: true, workspacesRemoved: [solo.ws] });

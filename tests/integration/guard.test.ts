@@ -1,9 +1,10 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { RequestEvent } from '@sveltejs/kit';
 import { client, db } from '$lib/server/db';
-import { memberships, users } from '$lib/server/db/schema';
+import { memberships } from '$lib/server/db/schema';
 import { requireRole, type Role } from '$lib/server/guard';
 import { createWorkspace } from '$lib/server/services/workspace.service';
+import { makeUser } from './fixtures';
 
 const tag = `guard-${Date.now()}`;
 const people: Record<string, SessionUser> = {};
@@ -29,11 +30,7 @@ async function statusOf(promise: Promise<unknown>): Promise<number> {
 
 beforeAll(async () => {
 	for (const name of ['owner', 'editor', 'viewer', 'outsider']) {
-		const [u] = await db
-			.insert(users)
-			.values({ email: `${name}-${tag}@example.org`, name })
-			.returning({ id: users.id, email: users.email, name: users.name, isAdmin: users.isAdmin });
-		people[name] = u!;
+		people[name] = await makeUser(`${name}-${tag}@example.org`, name);
 	}
 	wsA = await createWorkspace(`A ${tag}`, people.owner!.id);
 	wsB = await createWorkspace(`B ${tag}`, people.outsider!.id);

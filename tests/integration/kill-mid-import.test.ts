@@ -12,13 +12,12 @@ import {
 	scenarios,
 	tariffs,
 	tariffVersions,
-	usageIntervals,
-	users
+	usageIntervals
 } from '$lib/server/db/schema';
 import { parseBillSheet } from '$lib/server/bills/bill-sheet';
 import { createBills } from '$lib/server/bills/bill.service';
 import type { Actor } from '$lib/server/services/audit.service';
-import { createSite, findSite, saveDevices, type SiteRow } from '$lib/server/services/site.service';
+import { saveDevices, type SiteRow } from '$lib/server/services/site.service';
 import { importTariffs } from '$lib/server/services/tariff.service';
 import { createWorkspace } from '$lib/server/services/workspace.service';
 import { parseTariffSheet } from '$lib/server/tariffs/sheet-import';
@@ -36,6 +35,7 @@ import {
 	type ChildJob,
 	type Tripwire
 } from './kill-mid-import.data';
+import { makeSite, makeUser } from './fixtures';
 
 // Against the real PostgreSQL of `npm test`: each import runs in a child process that is SIGKILLed part-way,
 // the way a crash or an out-of-memory kill would end the app. Invented people, sites, bills and tariffs.
@@ -110,26 +110,8 @@ const heldAfterInsertInto = (table: Table) => ({
 	query: expect.stringMatching(new RegExp(`^insert into "${getTableName(table)}"`))
 });
 
-async function freshSite(name: string): Promise<SiteRow> {
-	const id = await createSite(
-		workspaceId,
-		{
-			name: `${name} ${tag}`,
-			address: null,
-			timezone: 'America/Chicago',
-			country: 'US',
-			region: null,
-			supplyVolts: null,
-			supplyPhases: null,
-			tariffId: null,
-			tariffVersion: null,
-			currency: 'USD',
-			notes: null
-		},
-		owner
-	);
-	return (await findSite(id))!;
-}
+/** A new site in this file's workspace, its name tagged with this run. */
+const freshSite = (name: string) => makeSite(workspaceId, owner, `${name} ${tag}`);
 
 async function audited(siteId: string, entity: 'site' | 'bill', action: string) {
 	const [row] = await db
@@ -142,11 +124,7 @@ async function audited(siteId: string, entity: 'site' | 'bill', action: string) 
 }
 
 beforeAll(async () => {
-	const [user] = await db
-		.insert(users)
-		.values({ email: `owner-${tag}@example.org`, name: 'Kill test owner (invented)' })
-		.returning({ id: users.id, name: users.name, email: users.email });
-	owner = user!;
+	owner = await makeUser(`owner-${tag}@example.org`, 'Kill test owner (invented)');
 	workspaceId = await createWorkspace(`Kill ${tag}`, owner.id);
 });
 

@@ -5,10 +5,11 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { eq } from 'drizzle-orm';
 import { env } from '$env/dynamic/private';
 import { client, db } from '$lib/server/db';
-import { notices, scenarios, users } from '$lib/server/db/schema';
+import { notices, scenarios } from '$lib/server/db/schema';
 import { startJobs, stopJobs } from '$lib/server/jobs';
-import { createSite, findSite, saveDevices } from '$lib/server/services/site.service';
+import { saveDevices } from '$lib/server/services/site.service';
 import { createTariff, publishVersion } from '$lib/server/services/tariff.service';
+import { flat, makeSite, makeUser, tariffMeta, versionMeta } from './fixtures';
 
 // Against the real PostgreSQL and job queue of `npm test`, with a mail server of the test's own that turns
 // the first attempt away. Invented people, site and tariff; the queue keeps its production retry settings.
@@ -53,30 +54,8 @@ let announceVersion: (job: { tariffId: string; versionNumber: number }) => Promi
 let tariffId = '';
 let workspaceId = '';
 
-const flat = (perKwh: number) => ({
-	currency: 'USD',
-	energyCharges: [{ label: 'Energy', type: 'flat' as const, perKwh }]
-});
-const meta = {
-	utility: `Invented Utility ${tag}`,
-	name: 'Retry test rate',
-	code: null,
-	country: 'US',
-	region: null,
-	area: null,
-	customerClass: 'agricultural' as const,
-	currency: 'USD',
-	timezone: 'America/Chicago',
-	holidays: null,
-	description: null
-};
-const version = (effectiveFrom: string) => ({
-	effectiveFrom,
-	effectiveTo: null,
-	source: 'Invented for a test',
-	checkedOn: '2026-11-01',
-	changeNote: 'Energy rate doubled (invented).'
-});
+const meta = tariffMeta(`Invented Utility ${tag}`, 'Retry test rate');
+const version = (effectiveFrom: string) => versionMeta(effectiveFrom, 'Energy rate doubled (invented).');
 
 async function until<T>(what: string, find: () => Promise<T | undefined> | T | undefined, ms: number) {
 	for (const started = Date.now(); Date.now() - started < ms;) {
@@ -94,36 +73,17 @@ beforeAll(async () => {
 	({ announceVersion } = await import('$lib/server/services/tariff-notice.service'));
 	const { createWorkspace } = await import('$lib/server/services/workspace.service');
 
-	const [owner] = await db
-		.insert(users)
-		.values({ email: recipient, name: 'Retry test owner (invented)' })
-		.returning({ id: users.id, name: users.name, email: users.email });
-	workspaceId = await createWorkspace(`Retry ${tag}`, owner!.id);
+	const owner = await makeUser(recipient, 'Retry test owner (invented)');
+	workspaceId = await createWorkspace(`Retry ${tag}`, owner.id);
 	tariffId = await createTariff(
 		{ meta, version: version('2026-01-01'), structure: flat(0.1), workspaceId: null },
-		owner!
+		owner
 	);
-	await publishVersion(tariffId, 1, { meta, version: version('2027-01-01'), structure: flat(0.2) }, owner!);
-	const siteId = await createSite(
-		workspaceId,
-		{
-			name: `Retry pond ${tag}`,
-			address: null,
-			timezone: 'America/Chicago',
-			country: 'US',
-			region: null,
-			supplyVolts: null,
-			supplyPhases: null,
-			tariffId,
-			tariffVersion: null,
-			currency: 'USD',
-			notes: null
-		},
-		owner!
-	);
-	const [baseline] = await db.select().from(scenarios).where(eq(scenarios.siteId, siteId));
+	await publishVersion(tariffId, 1, { meta, version: version('2027-01-01'), structure: flat(0.2) }, owner);
+	const site = await makeSite(workspaceId, owner, `Retry pond ${tag}`, { tariffId });
+	const [baseline] = await db.select().from(scenarios).where(eq(scenarios.siteId, site.id));
 	const pump = { name: 'Pump', power: { watts: 1000 }, schedule: { type: 'always' as const } };
-	await saveDevices((await findSite(siteId))!, baseline!, baseline!.revision, [pump], owner!);
+	await saveDevices(site, baseline!, baseline!.revision, [pump], owner);
 	await startJobs();
 });
 

@@ -2,8 +2,8 @@ import { afterAll, describe, expect, it } from 'vitest';
 import { and, eq } from 'drizzle-orm';
 import { client, db } from '$lib/server/db';
 import { memberships, siteGrants, users } from '$lib/server/db/schema';
-import { createSite } from '$lib/server/services/site.service';
 import { acceptInvitation, createWorkspace, inviteToSite } from '$lib/server/services/workspace.service';
+import { makeSite, makeUser } from './fixtures';
 import { newestMailTo } from './mail-catcher';
 
 // Against the real PostgreSQL of `npm test`; invented people and sites.
@@ -15,38 +15,22 @@ afterAll(async () => {
 
 describe('sharing one site', () => {
 	it('gives the invitee a grant on that site and no membership of the workspace', async () => {
-		const [owner] = await db
-			.insert(users)
-			.values({ email: `owner-${tag}@example.org`, name: 'Owner' })
-			.returning();
-		const ws = await createWorkspace(`Share ${tag}`, owner!.id);
-		const siteInput = {
-			name: `Site ${tag}`,
-			address: null,
-			timezone: 'America/Chicago',
-			country: 'US',
-			region: null,
-			supplyVolts: null,
-			supplyPhases: null,
-			tariffId: null,
-			tariffVersion: null,
-			currency: 'USD',
-			notes: null
-		};
-		const siteId = await createSite(ws, siteInput, owner!);
+		const owner = await makeUser(`owner-${tag}@example.org`, 'Owner');
+		const ws = await createWorkspace(`Share ${tag}`, owner.id);
+		const site = await makeSite(ws, owner, `Site ${tag}`);
 		const email = `client-${tag}@example.org`;
 		await inviteToSite(
 			{
-				site: { id: siteId, name: siteInput.name, workspaceId: ws },
+				site,
 				email,
 				role: 'viewer',
-				invitedBy: { ...owner!, isAdmin: false }
+				invitedBy: owner
 			},
 			'http://127.0.0.1'
 		);
 		const token = (await newestMailTo(email)).text.match(/\/invite\/([\w-]+)/)![1]!;
 		const accepted = await acceptInvitation(token, { name: 'Client', password: 'client password 123' });
-		expect(accepted).toMatchObject({ siteId, workspaceId: ws });
+		expect(accepted).toMatchObject({ siteId: site.id, workspaceId: ws });
 		const [guest] = await db.select().from(users).where(eq(users.email, email));
 		expect(
 			await db

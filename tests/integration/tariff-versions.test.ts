@@ -1,8 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { eq } from 'drizzle-orm';
-import { calculateAcrossVersions, calculateRequestSchema, tariffSchema, type TariffInput } from '$lib/calc';
+import { calculateAcrossVersions, calculateRequestSchema, tariffSchema } from '$lib/calc';
 import { client, db } from '$lib/server/db';
-import { tariffVersions, users } from '$lib/server/db/schema';
+import { tariffVersions } from '$lib/server/db/schema';
 import {
 	copyTariff,
 	createTariff,
@@ -12,6 +12,7 @@ import {
 	TariffConflict
 } from '$lib/server/services/tariff.service';
 import { createWorkspace } from '$lib/server/services/workspace.service';
+import { flat, makeUser, tariffMeta, versionMeta } from './fixtures';
 
 // Against the real PostgreSQL of `npm test`; every tariff here is invented.
 const tag = `tv-${Date.now()}`;
@@ -19,37 +20,10 @@ let author: { id: string; name: string | null; email: string };
 let wsA = '';
 let wsB = '';
 
-const flat = (perKwh: number): TariffInput => ({
-	currency: 'USD',
-	energyCharges: [{ label: 'Energy', type: 'flat', perKwh }]
-});
-const meta = {
-	utility: `Invented Utility ${tag}`,
-	name: 'Flat test rate',
-	code: null,
-	country: 'US',
-	region: 'TX',
-	area: null,
-	customerClass: 'agricultural' as const,
-	currency: 'USD',
-	timezone: 'America/Chicago',
-	holidays: null,
-	description: null
-};
-const versionMeta = (effectiveFrom: string) => ({
-	effectiveFrom,
-	effectiveTo: null,
-	source: 'Invented for a test',
-	checkedOn: '2026-11-01',
-	changeNote: ''
-});
+const meta = tariffMeta(`Invented Utility ${tag}`, 'Flat test rate', { region: 'TX' });
 
 beforeAll(async () => {
-	const [u] = await db
-		.insert(users)
-		.values({ email: `curator-${tag}@example.org`, name: 'Curator' })
-		.returning({ id: users.id, name: users.name, email: users.email });
-	author = u!;
+	author = await makeUser(`curator-${tag}@example.org`, 'Curator');
 	wsA = await createWorkspace(`A ${tag}`, author.id);
 	wsB = await createWorkspace(`B ${tag}`, author.id);
 });

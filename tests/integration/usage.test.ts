@@ -2,39 +2,21 @@ import { readFileSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { and, eq } from 'drizzle-orm';
 import { client, db } from '$lib/server/db';
-import { auditEvents, usageIntervals, users } from '$lib/server/db/schema';
-import { createSite, findSite, type SiteRow } from '$lib/server/services/site.service';
+import { auditEvents, usageIntervals } from '$lib/server/db/schema';
 import { createWorkspace } from '$lib/server/services/workspace.service';
 import type { Actor } from '$lib/server/services/audit.service';
 import { parseGreenButton } from '$lib/server/usage/green-button';
 import type { Interval } from '$lib/server/usage/interval';
 import { dailyShape, importUsage, meteredKwh, usageSummary } from '$lib/server/usage/usage.service';
+import { makeSite, makeUser } from './fixtures';
 
 // Against the real PostgreSQL of `npm test`; invented people, sites and readings.
 const tag = `usage-${Date.now()}`;
 let owner: Actor;
 let workspaceId = '';
 
-async function freshSite(name: string): Promise<SiteRow> {
-	const id = await createSite(
-		workspaceId,
-		{
-			name: `${name} ${tag}`,
-			address: null,
-			timezone: 'America/Chicago',
-			country: 'US',
-			region: null,
-			supplyVolts: null,
-			supplyPhases: null,
-			tariffId: null,
-			tariffVersion: null,
-			currency: 'USD',
-			notes: null
-		},
-		owner
-	);
-	return (await findSite(id))!;
-}
+/** A new site in this file's workspace, its name tagged with this run. */
+const freshSite = (name: string) => makeSite(workspaceId, owner, `${name} ${tag}`);
 
 /** `hours` hourly readings of `kwh` each from `startIso`. */
 const hourly = (startIso: string, hours: number, kwh = 1): Interval[] =>
@@ -45,11 +27,7 @@ const hourly = (startIso: string, hours: number, kwh = 1): Interval[] =>
 	}));
 
 beforeAll(async () => {
-	const [user] = await db
-		.insert(users)
-		.values({ email: `owner-${tag}@example.org`, name: 'Usage owner' })
-		.returning();
-	owner = user!;
+	owner = await makeUser(`owner-${tag}@example.org`, 'Usage owner');
 	workspaceId = await createWorkspace(`Usage ${tag}`, owner.id);
 });
 

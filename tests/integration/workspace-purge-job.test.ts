@@ -1,10 +1,11 @@
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { eq, inArray } from 'drizzle-orm';
 import { client, db } from '$lib/server/db';
-import { users, workspaces } from '$lib/server/db/schema';
+import { workspaces } from '$lib/server/db/schema';
 import { startJobs, stopJobs } from '$lib/server/jobs';
 import { purgeDeletedWorkspaces, purgeJob } from '$lib/server/services/workspace-deletion.service';
 import { createWorkspace } from '$lib/server/services/workspace.service';
+import { makeUser } from './fixtures';
 
 // Against the real PostgreSQL and job queue of `npm test`; every workspace here is invented.
 const tag = `purge-${Date.now()}`;
@@ -36,11 +37,7 @@ async function completed(jobId: string | null) {
 }
 
 beforeAll(async () => {
-	const [owner] = await db
-		.insert(users)
-		.values({ email: `owner-${tag}@example.org`, name: 'Purge test owner (invented)' })
-		.returning({ id: users.id });
-	ownerId = owner!.id;
+	ownerId = (await makeUser(`owner-${tag}@example.org`, 'Purge test owner (invented)')).id;
 	await startJobs();
 });
 

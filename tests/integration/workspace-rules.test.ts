@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { eq } from 'drizzle-orm';
 import { client, db } from '$lib/server/db';
-import { invitations, memberships, users } from '$lib/server/db/schema';
+import { invitations, memberships } from '$lib/server/db/schema';
 import { createHash } from 'node:crypto';
 import {
 	acceptInvitation,
@@ -13,6 +13,7 @@ import {
 	MembershipRuleError,
 	removeMember
 } from '$lib/server/services/workspace.service';
+import { makeUser } from './fixtures';
 import { newestMailTo } from './mail-catcher';
 
 // Against the real PostgreSQL that `npm test` starts; every row here is invented test data.
@@ -20,17 +21,13 @@ const tag = `it-${Date.now()}`;
 let ownerId = '';
 let otherId = '';
 
-async function makeUser(name: string) {
-	const [u] = await db
-		.insert(users)
-		.values({ email: `${name}-${tag}@example.org`, name, emailVerified: new Date() })
-		.returning({ id: users.id, email: users.email, name: users.name });
-	return u!;
-}
+/** A user whose address is already confirmed. */
+const verified = (name: string) =>
+	makeUser(`${name}-${tag}@example.org`, name, { emailVerified: new Date() });
 
 beforeAll(async () => {
-	ownerId = (await makeUser('owner')).id;
-	otherId = (await makeUser('other')).id;
+	ownerId = (await verified('owner')).id;
+	otherId = (await verified('other')).id;
 });
 
 afterAll(async () => {
