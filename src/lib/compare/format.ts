@@ -16,10 +16,13 @@ export const wholeNumber = (n: number) =>
 export const signedWhole = (n: number) =>
 	Math.abs(n) < 0.5 ? '—' : `${n > 0 ? '+' : '−'}${wholeNumber(Math.abs(n))}`;
 
+/** Simple payback in words: "never", "at once" when the scenario costs no more to buy, else years. */
 export const paybackYears = (years: number | null) =>
 	years === null
 		? 'never'
-		: `${new Intl.NumberFormat('en-US', { maximumFractionDigits: 1 }).format(years)} years`;
+		: years === 0
+			? 'at once (no extra outlay)'
+			: `${new Intl.NumberFormat('en-US', { maximumFractionDigits: 1 }).format(years)} years`;
 
 export const percent = (share: number) =>
 	`${new Intl.NumberFormat('en-US', { maximumFractionDigits: 0 }).format(share * 100)} %`;
