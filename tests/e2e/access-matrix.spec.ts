@@ -1,6 +1,14 @@
 import { expect, test, type APIRequestContext, type APIResponse, type Browser } from '@playwright/test';
 import { readdirSync, readFileSync } from 'node:fs';
-import { DEMO_PASSWORD, DEMO_WS, gotoReady, latestMail, linkIn, uniqueEmail } from './helpers';
+import {
+	DEMO_PASSWORD,
+	DEMO_WS,
+	gotoReady,
+	inventedTariff,
+	latestMail,
+	linkIn,
+	uniqueEmail
+} from './helpers';
 
 // Every route that exists, against every kind of caller. 303 = sent to sign-in. The guest is a person
 // the owner shared one site with (the hatchery, as a viewer); they belong to no workspace, so they
@@ -444,17 +452,7 @@ test.beforeAll(async ({ browser, baseURL }) => {
 	const res = await owner.post('/api/v1/tariffs', {
 		data: {
 			workspaceId: DEMO_WS.id,
-			meta: {
-				utility: 'Matrix test utility (invented)',
-				name: 'Private matrix tariff',
-				country: 'US',
-				customerClass: 'agricultural',
-				currency: 'USD',
-				timezone: 'America/Chicago',
-				holidays: null
-			},
-			version: { effectiveFrom: '2026-01-01', source: 'Invented for a test', checkedOn: '2026-12-01' },
-			structure: { currency: 'USD', energyCharges: [{ label: 'Energy', type: 'flat', perKwh: 0.12 }] }
+			...inventedTariff('Matrix test utility (invented)', 'Private matrix tariff')
 		}
 	});
 	expect(res.status()).toBe(201);

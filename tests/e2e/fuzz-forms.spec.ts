@@ -5,7 +5,7 @@ import ExcelJS from 'exceljs';
 import Papa from 'papaparse';
 import { expect, test, type APIRequestContext, type APIResponse } from '@playwright/test';
 import { readdirSync, readFileSync } from 'node:fs';
-import { signInWithPassword } from './helpers';
+import { inventedTariff, signInWithPassword } from './helpers';
 
 // Hostile form posts against every form action, as use:enhance sends them: each post starts from values
 // the action accepts and swaps some for random and boundary ones (huge numbers, negative zero, NaN-like
@@ -564,19 +564,7 @@ function shown(body: { entries: Entry[]; multipart: boolean } | undefined): stri
 }
 
 /** The tariff editor's payload (the API's body without workspaceId), invented. */
-function submission() {
-	return {
-		meta: {
-			utility: 'Fuzz test utility (invented)',
-			name: 'Fuzz private tariff',
-			country: 'US',
-			customerClass: 'agricultural',
-			currency: 'USD',
-			timezone: 'America/Chicago',
-			holidays: null
-		},
-		version: { effectiveFrom: '2026-01-01', source: 'Invented for a test', checkedOn: '2026-12-01' },
-		structure: { currency: 'USD', energyCharges: [{ label: 'Energy', type: 'flat', perKwh: 0.12 }] },
-		expectedRevision: 0
-	};
-}
+const submission = () => ({
+	...inventedTariff('Fuzz test utility (invented)', 'Fuzz private tariff'),
+	expectedRevision: 0
+});

@@ -58,3 +58,18 @@ export function linkIn(text: string): string {
 
 export const uniqueEmail = (tag: string) =>
 	`${tag}-${Date.now()}-${Math.floor(Math.random() * 1e6)}@example.org`;
+
+/** A private tariff's editor payload (the tariffs API's body without workspaceId): one flat charge, invented. */
+export const inventedTariff = (utility: string, name: string) => ({
+	meta: {
+		utility,
+		name,
+		country: 'US',
+		customerClass: 'agricultural',
+		currency: 'USD',
+		timezone: 'America/Chicago',
+		holidays: null
+	},
+	version: { effectiveFrom: '2026-01-01', source: 'Invented for a test', checkedOn: '2026-12-01' },
+	structure: { currency: 'USD', energyCharges: [{ label: 'Energy', type: 'flat', perKwh: 0.12 }] }
+});
