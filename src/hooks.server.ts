@@ -3,11 +3,13 @@ import { startJobs } from '$lib/server/jobs';
 import { sequence } from '@sveltejs/kit/hooks';
 import { eq } from 'drizzle-orm';
 import { authHandle } from '$lib/server/auth';
+import { onlyPublicAuthDoors } from '$lib/server/auth/public-doors';
 import { rememberSession, sessionToken, verifiedUserId } from '$lib/server/auth/session-cache';
 import { db } from '$lib/server/db';
 import { isDatabaseUnavailable } from '$lib/server/db/errors';
 import { users } from '$lib/server/db/schema';
 import { logger } from '$lib/server/log';
+import { withSecurityHeaders } from '$lib/server/security-headers';
 import { unavailableResponse } from '$lib/server/unavailable';
 
 /** Resolves the signed-in user once; every load, action and endpoint reads `locals.user`. The user row
@@ -41,15 +43,10 @@ const databaseOutage: Handle = async ({ event, resolve }) => {
 	return event.locals.databaseDown ? unavailableResponse(event) : response;
 };
 
-const securityHeaders: Handle = async ({ event, resolve }) => {
-	const response = await resolve(event);
-	response.headers.set('X-Content-Type-Options', 'nosniff');
-	response.headers.set('Referrer-Policy', 'strict-origin-when-cross-origin');
-	response.headers.set('X-Frame-Options', 'DENY');
-	return response;
-};
+/** On every response, Auth.js's immutable redirects included. */
+const securityHeaders: Handle = async ({ event, resolve }) => withSecurityHeaders(await resolve(event));
 
-export const handle = sequence(securityHeaders, databaseOutage, authHandle, resolveUser);
+export const handle = sequence(securityHeaders, databaseOutage, onlyPublicAuthDoors(authHandle), resolveUser);
 
 export const handleError: HandleServerError = ({ error, event, status, message }) => {
 	if (isDatabaseUnavailable(error)) {

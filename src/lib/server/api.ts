@@ -3,6 +3,7 @@ import type { z } from 'zod';
 import { NoVersionInForce, parseRequest, type DatedTariff } from '$lib/calc';
 import { resolveTariffId } from './tariffs/by-id';
 import { RateLimiter } from 'sveltekit-rate-limiter/server';
+import { PerClient } from './rate-limit-client';
 import { env } from '$env/dynamic/private';
 import { logger } from './log';
 
@@ -70,7 +71,7 @@ export async function readJsonBody(
 
 // Anonymous callers (the public quick estimate, outside tools) share a per-client budget; signed-in
 // users get a larger one.
-const anonymousLimiter = new RateLimiter({ IP: [120, 'm'], IPUA: [60, 'm'] });
+const anonymousLimiter = new RateLimiter({ IP: [120, 'm'], plugins: [new PerClient([60, 'm'])] });
 // MEMBER_REQUESTS_PER_MINUTE lifts the members' budget for a load test on loopback (npm run load).
 const memberLimiter = new RateLimiter({ IP: [Number(env.MEMBER_REQUESTS_PER_MINUTE ?? 600), 'm'] });
 

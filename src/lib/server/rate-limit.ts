@@ -1,5 +1,6 @@
 import type { RequestEvent } from '@sveltejs/kit';
 import { RateLimiter, type RateLimiterPlugin } from 'sveltekit-rate-limiter/server';
+import { clientId, PerClient } from './rate-limit-client';
 
 /** Limits attempts per address as well as per client, so guessing one account's password from many IPs is slow too. */
 class PerAddress implements RateLimiterPlugin<string> {
@@ -19,13 +20,11 @@ class PerAddress implements RateLimiterPlugin<string> {
  */
 const signInFailures = new RateLimiter<string>({
 	IP: [120, '15m'],
-	IPUA: [60, '15m'],
-	plugins: [new PerAddress([9, '15m'])]
+	plugins: [new PerAddress([9, '15m']), new PerClient<string>([60, '15m'])]
 });
 const LOCK_MS = 15 * 60 * 1000;
 const lockedUntil = new Map<string, number>();
-const clientKey = (event: RequestEvent) =>
-	`client:${event.getClientAddress()}|${event.request.headers.get('user-agent') ?? ''}`;
+const clientKey = clientId;
 
 export function signInLocked(event: RequestEvent, email: string): boolean {
 	const now = Date.now();
@@ -43,7 +42,7 @@ export async function recordSignInFailure(event: RequestEvent, email: string): P
 	lockedUntil.set(clientKey(event), until);
 }
 
-export const signUpLimiter = new RateLimiter({ IP: [20, 'h'], IPUA: [10, 'h'] });
+export const signUpLimiter = new RateLimiter({ IP: [20, 'h'], plugins: [new PerClient([10, 'h'])] });
 
 export const mailLinkLimiter = new RateLimiter<string>({
 	IP: [30, 'h'],

@@ -8,6 +8,7 @@ import { accounts, sessions, users, verificationTokens } from '../db/schema';
 import { mailServer, sendMail } from '../mail';
 import { verifyPassword } from './password';
 import { signInSchema } from '$lib/forms/auth.schema';
+import { safeNext } from '$lib/safe-next';
 
 export const {
 	handle: authHandle,
@@ -53,6 +54,8 @@ export const {
 		})
 	],
 	callbacks: {
+		// Every redirect Auth.js makes (callbackUrl from a form, a link or its cookie) stays on this site.
+		redirect: ({ url, baseUrl }) => baseUrl + safeNext(url, '/', baseUrl),
 		session({ session, token }) {
 			if (token.sub) session.user.id = token.sub;
 			return session;

@@ -1,0 +1,20 @@
+import type { RequestEvent } from '@sveltejs/kit';
+import type { Rate, RateLimiterPlugin } from 'sveltekit-rate-limiter/server';
+
+/** The client a request comes from: its address and its User-Agent, a missing one counting as empty. */
+export function clientId(event: RequestEvent): string {
+	return `client:${event.getClientAddress()}|${event.request.headers.get('user-agent') ?? ''}`;
+}
+
+/**
+ * Counts requests per client (IP + User-Agent). Use it instead of the library's built-in `IPUA` rate,
+ * which answers "limited" for every request without a User-Agent: one such wrong password locked an
+ * address for 15 minutes, and every anonymous API call or sign-up without one got 429. Here a missing
+ * User-Agent is just another client, counted like the rest.
+ */
+export class PerClient<Extra = never> implements RateLimiterPlugin<Extra> {
+	constructor(readonly rate: Rate | Rate[]) {}
+	hash(event: RequestEvent) {
+		return clientId(event);
+	}
+}
