@@ -13,7 +13,7 @@ import type { ComparedScenario, ComparisonQuery, ComparisonReport } from '$lib/c
 import type { DeviceSpec } from '$lib/server/db/schema';
 import { requireScenarioAccess } from '$lib/server/guard';
 import { equipmentOf, tariffFor } from '$lib/server/services/results.service';
-import { findTariff } from '$lib/server/services/tariff.service';
+import { TARIFF_UNAVAILABLE, usableTariff } from '$lib/server/tariffs/usable';
 import { listDevices, type ScenarioRow, type SiteRow } from '$lib/server/services/site.service';
 import { assumptionsOf } from './assumptions';
 
@@ -42,13 +42,18 @@ async function load(event: RequestEvent, id: string, firstDay: string): Promise<
 	// Unreadable, deleted or unknown scenarios are all "not found" (404), as everywhere else.
 	const { site, scenario } = await requireScenarioAccess(event, id, 'viewer');
 	const resolved = await tariffFor(site, scenario);
-	if (!resolved) return `“${scenario.name}” (${site.name}) has no tariff: pick one for the site first`;
+	if (!resolved.ok)
+		return resolved.reason === 'unavailable'
+			? `“${scenario.name}” (${site.name}): ${TARIFF_UNAVAILABLE}; pick another tariff for it first`
+			: `“${scenario.name}” (${site.name}) has no tariff: pick one for the site first`;
 	const version = versionInForce(resolved.versions, firstDay);
 	if (!version) {
 		return `No version of ${resolved.tariff.name} is in force on ${firstDay}, the first day compared: choose another first month`;
 	}
 	const specs = (await listDevices(scenario.id)).map((d) => d.spec);
-	const stored = (await findTariff(resolved.tariff.id))?.versions.find((v) => v.id === version.id);
+	const stored = (await usableTariff(site.workspaceId, resolved.tariff.id))?.versions.find(
+		(v) => v.id === version.id
+	);
 	return {
 		source: stored?.source ?? '',
 		checkedOn: stored?.checkedOn ?? '',

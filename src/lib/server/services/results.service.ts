@@ -9,19 +9,38 @@ import {
 } from '$lib/calc';
 import type { DeviceSpec } from '../db/schema';
 import type { ScenarioRow, SiteRow } from './site.service';
-import { findTariff } from './tariff.service';
+import { usableTariff, TARIFF_UNAVAILABLE } from '../tariffs/usable';
+import type { TariffRow } from './tariff.service';
 
 export type Priced =
 	| { ok: true; result: VersionedResponse; tariff: { id: string; name: string; utility: string } }
-	| { ok: false; reason: 'no-tariff' | 'invalid'; message: string; invalid?: InvalidRequest };
+	| {
+			ok: false;
+			reason: 'no-tariff' | 'unavailable' | 'invalid';
+			message: string;
+			invalid?: InvalidRequest;
+	  };
 
-/** The tariff a scenario is priced on: its own override, else the site's; a pinned version applies to every period. */
-export async function tariffFor(site: SiteRow, scenario: ScenarioRow | null, pinVersion?: number) {
+export type PricingTariff =
+	| { ok: true; tariff: TariffRow; versions: DatedTariff[] }
+	| { ok: false; reason: 'no-tariff' | 'unavailable' };
+
+/**
+ * The tariff a scenario is priced on: its own override, else the site's; a pinned version applies to every
+ * period. A tariff the site's workspace may not use (another workspace's private one, however its id was
+ * stored) is `unavailable`: nothing of it — name, source, rates — reaches a result, comparison or export.
+ */
+export async function tariffFor(
+	site: SiteRow,
+	scenario: ScenarioRow | null,
+	pinVersion?: number
+): Promise<PricingTariff> {
 	const id = scenario?.tariffId ?? site.tariffId;
 	const pinned = pinVersion ?? (scenario?.tariffId ? scenario.tariffVersion : site.tariffVersion);
-	if (!id) return null;
-	const found = await findTariff(id);
-	if (!found || found.versions.length === 0) return null;
+	if (!id) return { ok: false, reason: 'no-tariff' };
+	const found = await usableTariff(site.workspaceId, id);
+	if (!found) return { ok: false, reason: 'unavailable' };
+	if (found.versions.length === 0) return { ok: false, reason: 'no-tariff' };
 	const chosen = pinned ? found.versions.filter((v) => v.number === pinned) : found.versions;
 	const versions: DatedTariff[] = (chosen.length ? chosen : found.versions).map((v) => ({
 		id: v.id,
@@ -30,7 +49,7 @@ export async function tariffFor(site: SiteRow, scenario: ScenarioRow | null, pin
 		effectiveTo: pinned ? null : v.effectiveTo,
 		tariff: tariffSchema.parse(v.structure)
 	}));
-	return { tariff: found.tariff, versions };
+	return { ok: true, tariff: found.tariff, versions };
 }
 
 /** The core's equipment shape from a stored device (the safety flags and notes stay behind). */
@@ -45,8 +64,15 @@ export async function priceScenario(
 	pinVersion?: number
 ): Promise<Priced> {
 	const resolved = await tariffFor(site, scenario, pinVersion);
-	if (!resolved)
-		return { ok: false, reason: 'no-tariff', message: 'Pick a tariff for this site to see costs.' };
+	if (!resolved.ok)
+		return {
+			ok: false,
+			reason: resolved.reason,
+			message:
+				resolved.reason === 'unavailable'
+					? `${TARIFF_UNAVAILABLE}: pick another tariff to see costs.`
+					: 'Pick a tariff for this site to see costs.'
+		};
 	const holidays = resolved.tariff.holidays ?? {
 		country: site.country,
 		...(site.region ? { region: site.region } : {})

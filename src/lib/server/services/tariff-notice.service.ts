@@ -13,20 +13,29 @@ import {
 } from '../db/schema';
 import { defineJob } from '../jobs';
 import { deliverMail } from '../mail';
+import { tariffUsableBy } from '../tariffs/usable';
 import { priceScenario } from './results.service';
 import { listDevices, listScenarios } from './site.service';
 
 type Published = { tariffId: string; versionNumber: number };
 type ForWorkspace = Published & { workspaceId: string };
 
-/** The workspaces with a site (or a scenario's override) on this tariff. */
+/**
+ * The workspaces with a site (or a scenario's override) on this tariff that may use it: a private tariff's
+ * news never goes to another workspace, whatever ids its sites hold.
+ */
 async function affectedWorkspaces(tariffId: string): Promise<string[]> {
+	const [tariff] = await db
+		.select({ workspaceId: tariffs.workspaceId })
+		.from(tariffs)
+		.where(eq(tariffs.id, tariffId));
+	if (!tariff) return [];
 	const rows = await db
 		.selectDistinct({ workspaceId: sites.workspaceId })
 		.from(sites)
 		.leftJoin(scenarios, eq(scenarios.siteId, sites.id))
 		.where(and(isNull(sites.archivedAt), or(eq(sites.tariffId, tariffId), eq(scenarios.tariffId, tariffId))));
-	return rows.map((r) => r.workspaceId);
+	return rows.map((r) => r.workspaceId).filter((id) => tariffUsableBy(id, tariff));
 }
 
 /** Per affected site, the baseline's annual cost on the previous version and on the new one, over the new version's first year. */
@@ -35,7 +44,7 @@ export async function costChanges(job: ForWorkspace) {
 	const versions = await db.select().from(tariffVersions).where(eq(tariffVersions.tariffId, job.tariffId));
 	const now = versions.find((v) => v.number === job.versionNumber);
 	const before = versions.filter((v) => v.number < job.versionNumber).sort((a, b) => b.number - a.number)[0];
-	if (!tariff || !now || !before) return null;
+	if (!tariff || !now || !before || !tariffUsableBy(job.workspaceId, tariff)) return null;
 	const year = Number(now.effectiveFrom.slice(0, 4));
 	const affected = await db
 		.select()

@@ -2,7 +2,7 @@
 import { json } from '@sveltejs/kit';
 import type { RequestIssue } from '$lib/calc';
 import { apiError } from '$lib/server/api';
-import { findTariff } from '$lib/server/services/tariff.service';
+import { tariffChoiceProblem, type TariffChooser } from '$lib/server/tariffs/usable';
 
 /** Readings of one person's workspace data: never kept by a shared cache. */
 export const PRIVATE = { 'Cache-Control': 'private, no-store' } as const;
@@ -32,25 +32,15 @@ export function methodNotAllowed(...methods: string[]) {
 }
 
 /**
- * A site or scenario may use a tariff of the public library or of its own workspace, and may pin only a
- * version that exists — the same rule as the site form. Anyone else's private tariff reads as unknown.
+ * A tariff chosen for a site or scenario, checked by the one rule (`tariffChoiceProblem`): the public
+ * library or the site's own workspace, a guest only public ones and those already chosen, and a pinned
+ * version that exists. Unknown and foreign ids get the same answer.
  */
 export async function tariffChoiceIssue(
-	workspaceId: string,
+	chooser: TariffChooser,
 	choice: { tariffId: string | null; tariffVersion: number | null },
 	prefix = ''
 ): Promise<RequestIssue | null> {
-	if (!choice.tariffId)
-		return choice.tariffVersion === null
-			? null
-			: { path: `${prefix}tariffVersion`, message: 'Pin a version only together with a tariff' };
-	const found = await findTariff(choice.tariffId);
-	if (!found || (found.tariff.workspaceId && found.tariff.workspaceId !== workspaceId))
-		return { path: `${prefix}tariffId`, message: 'Pick a tariff from the library' };
-	if (choice.tariffVersion !== null && !found.versions.some((v) => v.number === choice.tariffVersion))
-		return {
-			path: `${prefix}tariffVersion`,
-			message: `That tariff has no version ${choice.tariffVersion}`
-		};
-	return null;
+	const problem = await tariffChoiceProblem(chooser, choice);
+	return problem && { path: `${prefix}${problem.field}`, message: problem.message };
 }

@@ -5,7 +5,7 @@ import { emailField } from '$lib/forms/auth.schema';
 import { z } from 'zod';
 import { requireSiteAccess } from '$lib/server/guard';
 import { siteTrail } from '$lib/server/services/audit.service';
-import { findTariff } from '$lib/server/services/tariff.service';
+import { usableTariff } from '$lib/server/tariffs/usable';
 import {
 	changeScenario,
 	createScenario,
@@ -52,13 +52,15 @@ export const load = (async (event) => {
 				};
 			})
 	);
-	const tariff = site.tariffId ? await findTariff(site.tariffId) : null;
+	// A tariff the site's workspace may not use is not shown at all, only said to be unavailable.
+	const tariff = site.tariffId ? await usableTariff(site.workspaceId, site.tariffId) : null;
 	return {
 		scenarios: rows,
 		year,
 		tariff: tariff
 			? { id: tariff.tariff.id, name: tariff.tariff.name, utility: tariff.tariff.utility }
 			: null,
+		tariffUnavailable: !!site.tariffId && !tariff,
 		canShare: !viaGrant && role !== 'viewer',
 		guests: !viaGrant && role !== 'viewer' ? await siteGuests(site.id) : [],
 		trail: (await siteTrail(site.id, 50)).map((e) => ({ ...e, createdAt: e.createdAt.toISOString() }))

@@ -5,6 +5,7 @@ import { apiError, readJsonBody } from '$lib/server/api';
 import { requireRole } from '$lib/server/guard';
 import { createSite, listSites } from '$lib/server/services/site.service';
 import { siteSchema } from '$lib/forms/site.schema';
+import { invalid, tariffChoiceIssue } from '../site-api.server';
 import type { RequestHandler } from './$types';
 
 const issuesOf = (error: z.ZodError) =>
@@ -42,6 +43,9 @@ export const POST: RequestHandler = async (event) => {
 		.safeParse(body);
 	if (!parsed.success)
 		return apiError(400, 'invalid_request', 'Some fields need attention.', issuesOf(parsed.error));
+	// The creator is a member (editor or owner) of the workspace the site goes into.
+	const tariffIssue = await tariffChoiceIssue({ workspaceId: workspace.id }, parsed.data);
+	if (tariffIssue) return invalid([tariffIssue]);
 	const id = await createSite(workspace.id, parsed.data, user);
 	return json({ id }, { status: 201, headers: { Location: `/api/v1/sites/${id}` } });
 };

@@ -2,17 +2,20 @@ import { fail, redirect } from '@sveltejs/kit';
 import { requireSiteAccess } from '$lib/server/guard';
 import { StaleWrite, updateSite } from '$lib/server/services/site.service';
 import { readSiteForm, tariffChoices } from '$lib/server/sites/site-form';
+import { chooserFor } from '$lib/server/tariffs/usable';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load = (async (event) => {
-	const { site } = await requireSiteAccess(event, event.params.siteId, 'editor');
-	return { tariffs: await tariffChoices(site.workspaceId) };
+	// A guest of this site is offered public tariffs and the site's own, never the workspace's others.
+	const access = await requireSiteAccess(event, event.params.siteId, 'editor');
+	return { tariffs: await tariffChoices(chooserFor(access)) };
 }) satisfies PageServerLoad;
 
 export const actions = {
 	default: async (event) => {
-		const { site, user } = await requireSiteAccess(event, event.params.siteId, 'editor');
-		const read = await readSiteForm(event, site.workspaceId);
+		const access = await requireSiteAccess(event, event.params.siteId, 'editor');
+		const { site, user } = access;
+		const read = await readSiteForm(event, chooserFor(access));
 		if (!read.ok) return read.failure;
 		try {
 			await updateSite(site, read.revision, read.input, user);

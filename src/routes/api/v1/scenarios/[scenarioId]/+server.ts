@@ -5,6 +5,7 @@ import { apiError, readJsonBody } from '$lib/server/api';
 import { requireScenarioAccess, requireSiteAccess, requireUser } from '$lib/server/guard';
 import { changeScenario, findScenario, UNDO_MS, type ScenarioRow } from '$lib/server/services/site.service';
 import { scenarioSchema } from '$lib/forms/site.schema';
+import { chooserFor } from '$lib/server/tariffs/usable';
 import { invalid, methodNotAllowed, PRIVATE, tariffChoiceIssue } from '../../site-api.server';
 import type { RequestHandler } from './$types';
 
@@ -73,10 +74,11 @@ export const PATCH: RequestHandler = async (event) => {
 	const read = await readJsonBody(event);
 	if (!read.ok) return read.response;
 	const raw = read.body as Record<string, unknown> | null;
-	const { site, scenario, user } =
+	const access =
 		raw && typeof raw === 'object' && raw.restored === true
 			? await accessForUndo(event, event.params.scenarioId)
 			: await requireScenarioAccess(event, event.params.scenarioId, 'editor');
+	const { site, scenario, user } = access;
 	const parsed = parseRequest(changeSchema, raw);
 	if (!parsed.success) return invalid(parsed.error.issues);
 	const change = parsed.data;
@@ -101,7 +103,7 @@ export const PATCH: RequestHandler = async (event) => {
 			tariffId: change.tariff?.tariffId ?? null,
 			tariffVersion: change.tariff?.tariffVersion ?? null
 		};
-		const issue = await tariffChoiceIssue(site.workspaceId, choice, 'tariff.');
+		const issue = await tariffChoiceIssue(chooserFor(access, scenario), choice, 'tariff.');
 		if (issue) return invalid([issue]);
 		await changeScenario(site, scenario, { kind: 'tariff', ...choice }, user);
 	} else {

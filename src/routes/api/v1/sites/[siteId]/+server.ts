@@ -5,6 +5,7 @@ import { readJsonBody } from '$lib/server/api';
 import { requireSiteAccess } from '$lib/server/guard';
 import { findSite, StaleWrite, updateSite } from '$lib/server/services/site.service';
 import { siteSchema } from '$lib/forms/site.schema';
+import { chooserFor } from '$lib/server/tariffs/usable';
 import { conflict, invalid, methodNotAllowed, PRIVATE, tariffChoiceIssue } from '../../site-api.server';
 import type { RequestHandler } from './$types';
 import { MAX_REVISION } from '$lib/forms/storable';
@@ -47,13 +48,14 @@ export const GET: RequestHandler = async (event) => {
  * cleared, as in the form). A stale `expectedRevision` gets 409 and nothing is written.
  */
 export const PUT: RequestHandler = async (event) => {
-	const { site, user } = await requireSiteAccess(event, event.params.siteId, 'editor');
+	const access = await requireSiteAccess(event, event.params.siteId, 'editor');
+	const { site, user } = access;
 	const read = await readJsonBody(event);
 	if (!read.ok) return read.response;
 	const parsed = parseRequest(siteUpdateSchema, withoutNulls(read.body));
 	if (!parsed.success) return invalid(parsed.error.issues);
 	const { expectedRevision, ...input } = parsed.data;
-	const tariffIssue = await tariffChoiceIssue(site.workspaceId, input);
+	const tariffIssue = await tariffChoiceIssue(chooserFor(access), input);
 	if (tariffIssue) return invalid([tariffIssue]);
 	// Checked here as well as in the write, so the new revision is always the one after the caller's.
 	if (expectedRevision !== site.revision) return conflict(site.revision);

@@ -6,13 +6,13 @@ import type { Actions, PageServerLoad } from './$types';
 
 export const load = (async (event) => {
 	const { workspace } = await requireRole(event, event.params.workspaceId, 'editor');
-	return { tariffs: await tariffChoices(workspace.id) };
+	return { tariffs: await tariffChoices({ workspaceId: workspace.id }) };
 }) satisfies PageServerLoad;
 
 export const actions = {
 	default: async (event) => {
 		const { workspace, user } = await requireRole(event, event.params.workspaceId, 'editor');
-		const read = await readSiteForm(event, workspace.id);
+		const read = await readSiteForm(event, { workspaceId: workspace.id });
 		if (!read.ok) return read.failure;
 		const id = await createSite(workspace.id, read.input, user);
 		redirect(303, `/sites/${id}`);

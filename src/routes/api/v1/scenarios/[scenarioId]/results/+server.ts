@@ -16,7 +16,8 @@ function answer(priced: Awaited<ReturnType<typeof priceScenario>>) {
 			{ headers: { 'Cache-Control': 'private, no-store' } }
 		);
 	if (priced.invalid) return json({ ...priced.invalid, message: priced.message }, { status: 400 });
-	return apiError(409, priced.reason === 'no-tariff' ? 'no_tariff' : 'not_priceable', priced.message);
+	const code = { 'no-tariff': 'no_tariff', unavailable: 'tariff_unavailable', invalid: 'not_priceable' };
+	return apiError(409, code[priced.reason], priced.message);
 }
 
 /** GET — the calculation response for the stored scenario over the 12 months of this year. */
