@@ -95,3 +95,62 @@ export function zipBomb(unpackedBytes: number, declaredBytes?: number): Buffer {
 		{ ...sheet, declaredBytes }
 	]);
 }
+
+/**
+ * A real workbook of one sheet far past any import's row limit while unpacking to less than the zip
+ * guard's cap: a header row ("name", "watts") and `rows` rows of two number cells, written as tersely
+ * as the format allows (250,000 rows unpack to about 15 MB and pack to about 1 MB). The sheet of the
+ * "tall spreadsheet" attack, which only the row limit can stop.
+ */
+export function tallSheet(rows: number): Buffer {
+	const xml = (body: string) =>
+		Buffer.from(`<?xml version="1.0" encoding="UTF-8" standalone="yes"?>\n${body}`);
+	const main = 'http://schemas.openxmlformats.org/spreadsheetml/2006/main';
+	const rel = 'http://schemas.openxmlformats.org/officeDocument/2006/relationships';
+	const pkg = 'http://schemas.openxmlformats.org/package/2006/relationships';
+	const lines = [
+		'<row r="1"><c r="A1" t="inlineStr"><is><t>name</t></is></c><c r="B1" t="inlineStr"><is><t>watts</t></is></c></row>'
+	];
+	for (let r = 2; r <= rows + 1; r++)
+		lines.push(`<row r="${r}"><c r="A${r}"><v>${r}</v></c><c r="B${r}"><v>5</v></c></row>`);
+	return zipOf([
+		{
+			name: '[Content_Types].xml',
+			deflate: true,
+			data: xml(
+				'<Types xmlns="http://schemas.openxmlformats.org/package/2006/content-types">' +
+					'<Default Extension="rels" ContentType="application/vnd.openxmlformats-package.relationships+xml"/>' +
+					'<Default Extension="xml" ContentType="application/xml"/>' +
+					'<Override PartName="/xl/workbook.xml" ContentType="application/vnd.openxmlformats-officedocument.spreadsheetml.sheet.main+xml"/>' +
+					'<Override PartName="/xl/worksheets/sheet1.xml" ContentType="application/vnd.openxmlformats-officedocument.spreadsheetml.worksheet+xml"/>' +
+					'</Types>'
+			)
+		},
+		{
+			name: '_rels/.rels',
+			deflate: true,
+			data: xml(
+				`<Relationships xmlns="${pkg}"><Relationship Id="rId1" Type="${rel}/officeDocument" Target="xl/workbook.xml"/></Relationships>`
+			)
+		},
+		{
+			name: 'xl/workbook.xml',
+			deflate: true,
+			data: xml(
+				`<workbook xmlns="${main}" xmlns:r="${rel}"><sheets><sheet name="Devices" sheetId="1" r:id="rId1"/></sheets></workbook>`
+			)
+		},
+		{
+			name: 'xl/_rels/workbook.xml.rels',
+			deflate: true,
+			data: xml(
+				`<Relationships xmlns="${pkg}"><Relationship Id="rId1" Type="${rel}/worksheet" Target="worksheets/sheet1.xml"/></Relationships>`
+			)
+		},
+		{
+			name: 'xl/worksheets/sheet1.xml',
+			deflate: true,
+			data: xml(`<worksheet xmlns="${main}"><sheetData>${lines.join('')}</sheetData></worksheet>`)
+		}
+	]);
+}
