@@ -97,22 +97,18 @@ export function zipBomb(unpackedBytes: number, declaredBytes?: number): Buffer {
 }
 
 /**
- * A real workbook of one sheet far past any import's row limit while unpacking to less than the zip
- * guard's cap: a header row ("name", "watts") and `rows` rows of two number cells, written as tersely
- * as the format allows (250,000 rows unpack to about 15 MB and pack to about 1 MB). The sheet of the
- * "tall spreadsheet" attack, which only the row limit can stop.
+ * A workbook of the given worksheets (each the XML inside its sheetData: rows of cells), written as
+ * tersely as the format allows: no styles, no shared strings. `tabs` lists the sheets' numbers in the
+ * order the workbook shows its tabs (by default 1, 2, …), so the first tab need not be sheet1.xml.
  */
-export function tallSheet(rows: number): Buffer {
+export function workbookOf(sheetData: string[], tabs = sheetData.map((_, i) => i + 1)): Buffer {
 	const xml = (body: string) =>
 		Buffer.from(`<?xml version="1.0" encoding="UTF-8" standalone="yes"?>\n${body}`);
 	const main = 'http://schemas.openxmlformats.org/spreadsheetml/2006/main';
 	const rel = 'http://schemas.openxmlformats.org/officeDocument/2006/relationships';
 	const pkg = 'http://schemas.openxmlformats.org/package/2006/relationships';
-	const lines = [
-		'<row r="1"><c r="A1" t="inlineStr"><is><t>name</t></is></c><c r="B1" t="inlineStr"><is><t>watts</t></is></c></row>'
-	];
-	for (let r = 2; r <= rows + 1; r++)
-		lines.push(`<row r="${r}"><c r="A${r}"><v>${r}</v></c><c r="B${r}"><v>5</v></c></row>`);
+	const type = 'application/vnd.openxmlformats-officedocument.spreadsheetml';
+	const numbers = sheetData.map((_, i) => i + 1);
 	return zipOf([
 		{
 			name: '[Content_Types].xml',
@@ -121,8 +117,12 @@ export function tallSheet(rows: number): Buffer {
 				'<Types xmlns="http://schemas.openxmlformats.org/package/2006/content-types">' +
 					'<Default Extension="rels" ContentType="application/vnd.openxmlformats-package.relationships+xml"/>' +
 					'<Default Extension="xml" ContentType="application/xml"/>' +
-					'<Override PartName="/xl/workbook.xml" ContentType="application/vnd.openxmlformats-officedocument.spreadsheetml.sheet.main+xml"/>' +
-					'<Override PartName="/xl/worksheets/sheet1.xml" ContentType="application/vnd.openxmlformats-officedocument.spreadsheetml.worksheet+xml"/>' +
+					`<Override PartName="/xl/workbook.xml" ContentType="${type}.sheet.main+xml"/>` +
+					numbers
+						.map(
+							(n) => `<Override PartName="/xl/worksheets/sheet${n}.xml" ContentType="${type}.worksheet+xml"/>`
+						)
+						.join('') +
 					'</Types>'
 			)
 		},
@@ -137,20 +137,51 @@ export function tallSheet(rows: number): Buffer {
 			name: 'xl/workbook.xml',
 			deflate: true,
 			data: xml(
-				`<workbook xmlns="${main}" xmlns:r="${rel}"><sheets><sheet name="Devices" sheetId="1" r:id="rId1"/></sheets></workbook>`
+				`<workbook xmlns="${main}" xmlns:r="${rel}"><sheets>` +
+					tabs.map((n) => `<sheet name="Sheet ${n}" sheetId="${n}" r:id="rId${n}"/>`).join('') +
+					'</sheets></workbook>'
 			)
 		},
 		{
 			name: 'xl/_rels/workbook.xml.rels',
 			deflate: true,
 			data: xml(
-				`<Relationships xmlns="${pkg}"><Relationship Id="rId1" Type="${rel}/worksheet" Target="worksheets/sheet1.xml"/></Relationships>`
+				`<Relationships xmlns="${pkg}">` +
+					numbers
+						.map(
+							(n) => `<Relationship Id="rId${n}" Type="${rel}/worksheet" Target="worksheets/sheet${n}.xml"/>`
+						)
+						.join('') +
+					'</Relationships>'
 			)
 		},
-		{
-			name: 'xl/worksheets/sheet1.xml',
+		...sheetData.map((rows, i) => ({
+			name: `xl/worksheets/sheet${i + 1}.xml`,
 			deflate: true,
-			data: xml(`<worksheet xmlns="${main}"><sheetData>${lines.join('')}</sheetData></worksheet>`)
-		}
+			data: xml(`<worksheet xmlns="${main}"><sheetData>${rows}</sheetData></worksheet>`)
+		}))
 	]);
+}
+
+/** A row of the terse sheets above: text cells inline, numbers as numbers. */
+export function rowXml(line: number, cells: (string | number)[]): string {
+	const cell = (value: string | number, i: number) => {
+		const ref = `${String.fromCharCode(65 + i)}${line}`;
+		return typeof value === 'number'
+			? `<c r="${ref}"><v>${value}</v></c>`
+			: `<c r="${ref}" t="inlineStr"><is><t>${value}</t></is></c>`;
+	};
+	return `<row r="${line}">${cells.map(cell).join('')}</row>`;
+}
+
+/**
+ * One sheet far past any import's row limit while unpacking to less than the zip guard's cap: a
+ * header row ("name", "watts") and `rows` rows of two number cells. 250,000 rows pack to 2.5 MB and
+ * unpack to 15 MB: the "tall spreadsheet" that held the server for seconds, which only the row limit
+ * stops.
+ */
+export function tallSheet(rows: number): Buffer {
+	const lines = [rowXml(1, ['name', 'watts'])];
+	for (let line = 2; line <= rows + 1; line++) lines.push(rowXml(line, [line, 5]));
+	return workbookOf([lines.join('')]);
 }
