@@ -5,6 +5,7 @@ import { eq } from 'drizzle-orm';
 import { authHandle } from '$lib/server/auth';
 import { rememberSession, sessionToken, verifiedUserId } from '$lib/server/auth/session-cache';
 import { db } from '$lib/server/db';
+import { finishReadingBody } from '$lib/server/http/unread-body';
 import { isDatabaseUnavailable } from '$lib/server/db/errors';
 import { users } from '$lib/server/db/schema';
 import { logger } from '$lib/server/log';
@@ -49,7 +50,8 @@ const securityHeaders: Handle = async ({ event, resolve }) => {
 	return response;
 };
 
-export const handle = sequence(securityHeaders, databaseOutage, authHandle, resolveUser);
+// finishReadingBody first: it sees the finished response last, and holds it until the body is read.
+export const handle = sequence(finishReadingBody, securityHeaders, databaseOutage, authHandle, resolveUser);
 
 export const handleError: HandleServerError = ({ error, event, status, message }) => {
 	if (isDatabaseUnavailable(error)) {
