@@ -6,6 +6,7 @@ import { authHandle } from '$lib/server/auth';
 import { onlyPublicAuthDoors } from '$lib/server/auth/public-doors';
 import { rememberSession, sessionToken, verifiedUserId } from '$lib/server/auth/session-cache';
 import { db } from '$lib/server/db';
+import { finishReadingBody } from '$lib/server/http/unread-body';
 import { isDatabaseUnavailable } from '$lib/server/db/errors';
 import { users } from '$lib/server/db/schema';
 import { logger } from '$lib/server/log';
@@ -46,7 +47,14 @@ const databaseOutage: Handle = async ({ event, resolve }) => {
 /** On every response, Auth.js's immutable redirects included. */
 const securityHeaders: Handle = async ({ event, resolve }) => withSecurityHeaders(await resolve(event));
 
-export const handle = sequence(securityHeaders, databaseOutage, onlyPublicAuthDoors(authHandle), resolveUser);
+// finishReadingBody first: it sees the finished response last, and holds it until the body is read.
+export const handle = sequence(
+	finishReadingBody,
+	securityHeaders,
+	databaseOutage,
+	onlyPublicAuthDoors(authHandle),
+	resolveUser
+);
 
 export const handleError: HandleServerError = ({ error, event, status, message }) => {
 	if (isDatabaseUnavailable(error)) {

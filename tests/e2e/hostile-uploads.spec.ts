@@ -35,7 +35,7 @@ test('hostile uploads: a zip bomb, an XML bomb and a renamed program are refused
 	const sheet = page.getByLabel(/^Sheet/);
 	await sheet.setInputFiles(bomb);
 	await page.getByRole('button', { name: 'Check the sheet' }).click();
-	await expect(page.locator('#sheet-error')).toContainText('This workbook unpacks to more than 50 MB');
+	await expect(page.locator('#sheet-error')).toContainText('This workbook unpacks to more than 20 MB');
 	await expect(sheet).toHaveAttribute('aria-invalid', 'true');
 	await expect(sheet).toHaveAttribute('aria-describedby', 'sheet-error');
 	// The same post without script: the form's failure, 400, a readable page and no stack trace.
@@ -47,7 +47,7 @@ test('hostile uploads: a zip bomb, an XML bomb and a renamed program are refused
 	);
 	expect(posted.answer.status()).toBe(400);
 	const html = await posted.answer.text();
-	expect(html).toContain('This workbook unpacks to more than 50 MB');
+	expect(html).toContain('This workbook unpacks to more than 20 MB');
 	expect(html).not.toMatch(STACK);
 
 	// The billion laughs as a Green Button file, through the usage API.
@@ -100,7 +100,7 @@ test('hostile uploads: the tariff sheet import ties a refused workbook to its fi
 	});
 	await page.getByRole('button', { name: 'Check only' }).click();
 	await expect(page.locator('#sheet-error')).toContainText('The sheet was not imported.');
-	await expect(page.locator('#sheet-error')).toContainText('This workbook unpacks to more than 50 MB');
+	await expect(page.locator('#sheet-error')).toContainText('This workbook unpacks to more than 20 MB');
 	await expect(sheet).toHaveAttribute('aria-invalid', 'true');
 	await expect(sheet).toHaveAttribute('aria-describedby', 'sheet-error');
 });

@@ -56,7 +56,9 @@ export async function readJsonBody(
 		if (done) break;
 		size += value.byteLength;
 		if (size > MAX_BODY_BYTES) {
-			await reader.cancel();
+			// Not cancelled: cancelling SvelteKit's body stream destroys the request, and the client, still
+			// sending, gets a reset connection instead of this answer. The hooks read and drop the rest.
+			reader.releaseLock();
 			return { ok: false, response: apiError(413, 'payload_too_large', 'The body is over 1 MB.') };
 		}
 		chunks.push(value);

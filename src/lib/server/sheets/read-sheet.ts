@@ -1,6 +1,5 @@
-import ExcelJS from 'exceljs';
 import Papa from 'papaparse';
-import { NOT_A_WORKBOOK, refuseZip } from './zip-guard';
+import { readFirstSheet } from './first-sheet';
 
 /**
  * Reading an uploaded sheet (CSV, or the first worksheet of an XLSX workbook) into rows of trimmed
@@ -8,7 +7,6 @@ import { NOT_A_WORKBOOK, refuseZip } from './zip-guard';
  */
 export type SheetKind = 'csv' | 'xlsx';
 export type Grid = { line: number; cells: string[] }[];
-export type Read = { grid: Grid } | { error: string };
 
 export const MAX_SHEET_BYTES = 5 * 1024 * 1024;
 
@@ -23,60 +21,55 @@ export function sheetKind(fileName: string): SheetKind | null {
 /** A cell written by our exports as text that looks like a formula ("'=x") reads back as it was typed. */
 const unquote = (cell: string) => (/^'[=+\-@]/.test(cell) ? cell.slice(1) : cell);
 
-function readCsv(bytes: Uint8Array): Read {
+/**
+ * The non-blank rows of a sheet as it is read: the header and at most `maxRows` rows below it. One row
+ * more and the sheet is over the limit; `add` then answers false and the reader stops there, so a sheet
+ * of 250,000 rows is never read past its 2,002nd.
+ */
+class Rows {
+	readonly grid: Grid = [];
+	over = false;
+	constructor(private readonly keep: number) {}
+	add(line: number, cells: string[]): boolean {
+		const trimmed = cells.map((cell) => unquote(cell.trim()));
+		if (blank(trimmed)) return true;
+		if (this.grid.length === this.keep) {
+			this.over = true;
+			return false;
+		}
+		this.grid.push({ line, cells: trimmed });
+		return true;
+	}
+}
+
+/** Null when the text was read into `rows` (up to where they passed the limit), else the message. */
+function readCsv(bytes: Uint8Array, rows: Rows): string | null {
 	let text: string;
 	try {
 		text = new TextDecoder('utf-8', { fatal: true }).decode(bytes);
 	} catch {
-		return { error: 'The file is not a CSV text file (it is not UTF-8 text)' };
+		return 'The file is not a CSV text file (it is not UTF-8 text)';
 	}
-	if (text.includes('\0')) return { error: 'The file is not a CSV text file' };
-	const parsed = Papa.parse<string[]>(text, { skipEmptyLines: false });
-	const quote = parsed.errors.find((error) => error.type === 'Quotes');
-	if (quote) return { error: `Row ${(quote.row ?? 0) + 1}: a quoted cell is never closed` };
-	return {
-		grid: parsed.data.map((cells, i) => ({ line: i + 1, cells: cells.map((cell) => unquote(cell.trim())) }))
-	};
-}
-
-function cellText(value: ExcelJS.CellValue): string {
-	if (value === null || value === undefined) return '';
-	// Date cells come back as UTC midnight of the date the sheet shows.
-	if (value instanceof Date) return Number.isNaN(value.getTime()) ? '' : value.toISOString().slice(0, 10);
-	if (typeof value !== 'object') return String(value);
-	if ('richText' in value) return value.richText.map((run) => run.text).join('');
-	if ('error' in value) return value.error;
-	if ('formula' in value || 'sharedFormula' in value) return cellText(value.result as ExcelJS.CellValue);
-	if ('text' in value) return cellText(value.text as ExcelJS.CellValue);
-	return '';
-}
-
-async function readXlsx(bytes: Uint8Array, maxRows: number, rowWord: string): Promise<Read> {
-	// exceljs unpacks every part into memory: a workbook that unpacks too far never reaches it.
-	const refused = await refuseZip(bytes);
-	if (refused) return { error: refused };
-	const workbook = new ExcelJS.Workbook();
-	try {
-		// exceljs types its argument as an ArrayBuffer; a copy gives exactly the file's bytes.
-		await workbook.xlsx.load(bytes.slice().buffer);
-	} catch {
-		return { error: NOT_A_WORKBOOK };
-	}
-	const sheet = workbook.worksheets[0];
-	if (!sheet) return { error: 'The workbook has no worksheet' };
-	if (sheet.actualRowCount > maxRows + 1)
-		return { error: tooManyRows(sheet.actualRowCount - 1, maxRows, rowWord) };
-	const grid: Grid = [];
-	sheet.eachRow((row, line) => {
-		const cells: string[] = [];
-		row.eachCell((cell, col) => (cells[col - 1] = unquote(cellText(cell.value).trim())));
-		grid.push({ line, cells: Array.from(cells, (cell) => cell ?? '') });
+	if (text.includes('\0')) return 'The file is not a CSV text file';
+	let line = 0;
+	let unclosed: number | null = null;
+	// Row by row (papaparse's step mode), aborted once the rows pass the limit.
+	Papa.parse<string[]>(text, {
+		skipEmptyLines: false,
+		step: (result, parser) => {
+			line += 1;
+			if (result.errors.some((error) => error.type === 'Quotes')) {
+				unclosed = line;
+				parser.abort();
+			} else if (!rows.add(line, result.data)) parser.abort();
+		}
 	});
-	return { grid };
+	return unclosed === null ? null : `Row ${unclosed}: a quoted cell is never closed`;
 }
 
-export const tooManyRows = (count: number, maxRows: number, rowWord: string) =>
-	`The sheet has ${count} ${rowWord} rows; one import can hold at most ${maxRows}`;
+/** The sheet is read no further than the row past the limit, so the message cannot say how many it has. */
+export const tooManyRows = (maxRows: number, rowWord: string) =>
+	`The sheet has more than ${maxRows} ${rowWord} rows; one import can hold at most ${maxRows}`;
 export const blank = (cells: string[]) => cells.every((cell) => cell === '');
 
 export interface SheetTable {
@@ -97,12 +90,16 @@ export async function readSheet(
 	if (bytes.byteLength > MAX_SHEET_BYTES) {
 		return { error: 'The file is larger than 5 MB, the most an import sheet can be' };
 	}
-	const read = kind === 'csv' ? readCsv(bytes) : await readXlsx(bytes, maxRows, rowWord);
-	if ('error' in read) return read;
-	const [header, ...body] = read.grid.filter((row) => !blank(row.cells));
+	const rows = new Rows(maxRows + 1);
+	const refused =
+		kind === 'csv'
+			? readCsv(bytes, rows)
+			: await readFirstSheet(bytes, (row) => rows.add(row.line, row.cells));
+	if (refused) return { error: refused };
+	if (rows.over) return { error: tooManyRows(maxRows, rowWord) };
+	const [header, ...body] = rows.grid;
 	if (!header) return { error: `The sheet is empty: it needs a header row and at least one ${rowWord} row` };
 	if (body.length === 0) return { error: `The sheet has a header row but no ${rowWord} rows` };
-	if (body.length > maxRows) return { error: tooManyRows(body.length, maxRows, rowWord) };
 	return { header, body };
 }
 

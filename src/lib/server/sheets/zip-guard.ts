@@ -9,14 +9,20 @@ import { createInflateRaw } from 'node:zlib';
  * before the archive, split archives) are refused: no workbook Runrate takes needs them.
  */
 
-/** Far above any sheet of 2,000 rows (a few MB unpacked); the cap on all parts together. */
-export const MAX_UNPACKED_BYTES = 50 * 1024 * 1024;
+/**
+ * The cap on all parts together, unpacked. A sheet an import takes (2,000 rows of a few dozen columns)
+ * unpacks to a few MB, so 20 MB still leaves room for styles, themes and a second sheet. It is this
+ * tight because everything the sheet reader parses is unpacked text: the shared strings are held in
+ * memory whole before the first row is read, and a sheet's XML costs parsing time by the byte. At 50 MB
+ * a 2.5 MB file of 250,000 short rows (15 MB unpacked) got through to exceljs and held the server for
+ * seconds; the row limit now stops that one, and this cap bounds what any one upload can cost.
+ */
+export const MAX_UNPACKED_BYTES = 20 * 1024 * 1024;
 /** A workbook of one sheet has about a dozen parts; thousands only serve to make work. */
 export const MAX_ZIP_ENTRIES = 1000;
 
 export const NOT_A_WORKBOOK = 'The file is not a readable XLSX workbook';
-export const TOO_BIG_UNPACKED =
-	'This workbook unpacks to more than 50 MB, far more than any import sheet needs, so it was refused unread. Save just the sheet to import as a new workbook or as CSV, and import that.';
+export const TOO_BIG_UNPACKED = `This workbook unpacks to more than ${MAX_UNPACKED_BYTES / 1024 / 1024} MB, far more than any import sheet needs, so it was refused unread. Save just the sheet to import as a new workbook or as CSV, and import that.`;
 export const TOO_MANY_PARTS = `This workbook holds more than ${MAX_ZIP_ENTRIES.toLocaleString('en-US')} parts, far more than any import sheet needs, so it was refused unread. Save just the sheet to import as a new workbook or as CSV, and import that.`;
 
 // Record signatures and the fixed sizes of their headers (PKWARE APPNOTE 6.3, §4.3).
@@ -32,7 +38,23 @@ const STORED = 0;
 const DEFLATED = 8;
 const ENCRYPTED_FLAG = 1;
 
-type Part = { method: number; flags: number; compressedBytes: number; localOffset: number };
+type Part = {
+	name: string;
+	method: number;
+	flags: number;
+	crc: number;
+	compressedBytes: number;
+	localOffset: number;
+};
+
+/** A part the guard has inflated and counted: its name, how it is packed, and its packed bytes. */
+export type ZipEntry = {
+	name: string;
+	method: typeof STORED | typeof DEFLATED;
+	crc: number;
+	unpackedBytes: number;
+	data: Buffer;
+};
 
 /** The parts the central directory lists, or why the archive is refused. */
 function centralDirectory(zip: Buffer): Part[] | string {
@@ -53,9 +75,12 @@ function centralDirectory(zip: Buffer): Part[] | string {
 		const localOffset = zip.readUInt32LE(at + 42);
 		if ([compressedBytes, zip.readUInt32LE(at + 24), localOffset].some((f) => ZIP64_MARKS.includes(f)))
 			return NOT_A_WORKBOOK;
+		const nameBytes = zip.readUInt16LE(at + 28);
 		parts.push({
+			name: zip.toString('utf8', at + CENTRAL_BYTES, at + CENTRAL_BYTES + nameBytes),
 			flags: zip.readUInt16LE(at + 8),
 			method: zip.readUInt16LE(at + 10),
+			crc: zip.readUInt32LE(at + 16),
 			compressedBytes,
 			localOffset
 		});
@@ -97,27 +122,44 @@ function inflatedBytes(data: Buffer, limit: number): Promise<number | 'over' | '
 }
 
 /**
- * Null when the archive is one exceljs can safely open: every part stored or deflated, none
- * encrypted, at most MAX_ZIP_ENTRIES parts unpacking to at most MAX_UNPACKED_BYTES in all. Otherwise
- * the message for the person who uploaded it.
+ * The archive's parts as JSZip would list them, each inflated once and counted, when it is one
+ * exceljs can safely open: every part stored or deflated, none encrypted, at most MAX_ZIP_ENTRIES
+ * parts unpacking to at most MAX_UNPACKED_BYTES in all. Otherwise the message for the person who
+ * uploaded it.
  */
-export async function refuseZip(bytes: Uint8Array): Promise<string | null> {
+export async function readZip(bytes: Uint8Array): Promise<ZipEntry[] | string> {
 	const zip = Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength);
 	const parts = centralDirectory(zip);
 	if (typeof parts === 'string') return parts;
+	const entries: ZipEntry[] = [];
 	let unpacked = 0;
 	for (const part of parts) {
 		const data = dataOf(zip, part);
 		if (!data || part.flags & ENCRYPTED_FLAG) return NOT_A_WORKBOOK;
-		if (part.method === STORED) unpacked += data.byteLength;
+		let unpackedBytes: number;
+		if (part.method === STORED) unpackedBytes = data.byteLength;
 		else if (part.method === DEFLATED) {
 			// Parts may overlap in the file (one deflate stream listed many times), so each one counts.
 			const bytes = await inflatedBytes(data, MAX_UNPACKED_BYTES - unpacked);
 			if (bytes === 'broken') return NOT_A_WORKBOOK;
 			if (bytes === 'over') return TOO_BIG_UNPACKED;
-			unpacked += bytes;
+			unpackedBytes = bytes;
 		} else return NOT_A_WORKBOOK;
+		unpacked += unpackedBytes;
 		if (unpacked > MAX_UNPACKED_BYTES) return TOO_BIG_UNPACKED;
+		entries.push({
+			name: part.name,
+			method: part.method === STORED ? STORED : DEFLATED,
+			crc: part.crc,
+			unpackedBytes,
+			data
+		});
 	}
-	return null;
+	return entries;
+}
+
+/** Null when readZip accepts the archive, otherwise its message. */
+export async function refuseZip(bytes: Uint8Array): Promise<string | null> {
+	const entries = await readZip(bytes);
+	return typeof entries === 'string' ? entries : null;
 }

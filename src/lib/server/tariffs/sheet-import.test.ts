@@ -317,7 +317,7 @@ describe('sheets that cannot be read', () => {
 		const rows = Array.from({ length: MAX_SHEET_ROWS + 1 }, () => FLAT);
 		const many = await parseCsv(rows);
 		expect(many.sheetErrors).toEqual([
-			`The sheet has ${MAX_SHEET_ROWS + 1} tariff rows; one import can hold at most 2000`
+			`The sheet has more than ${MAX_SHEET_ROWS} tariff rows; one import can hold at most 2000`
 		]);
 		const big = await parseTariffSheet(new Uint8Array(5 * 2 ** 20 + 1), 'csv');
 		expect(big.sheetErrors).toEqual(['The file is larger than 5 MB, the most an import sheet can be']);

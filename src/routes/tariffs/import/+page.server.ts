@@ -4,7 +4,10 @@ import { importTariffs } from '$lib/server/services/tariff.service';
 import { listWorkspacesFor } from '$lib/server/services/workspace.service';
 import { describeRowError, MAX_SHEET_BYTES, parseTariffSheet } from '$lib/server/tariffs/sheet-import';
 import { NUL_MESSAGE, nulPath } from '$lib/forms/storable';
+import { uploadForm } from '$lib/server/http/upload-form';
 import type { Actions, PageServerLoad } from './$types';
+
+const TOO_LARGE = `The file is over ${MAX_SHEET_BYTES / 1024 / 1024} MB.`;
 
 async function ownerChoices(user: SessionUser) {
 	const workspaces = (await listWorkspacesFor(user.id)).filter((w) => w.role !== 'viewer');
@@ -23,7 +26,8 @@ export const load = (async (event) => {
 export const actions = {
 	default: async (event) => {
 		const user = requireUser(event);
-		const form = await event.request.formData();
+		const form = await uploadForm(event.request);
+		if (form === 'too-large') return fail(413, { owner: '', errors: { sheet: TOO_LARGE } });
 		const owner = String(form.get('owner') ?? '');
 		const dryRun = form.get('intent') === 'check';
 		if (owner === 'public') requireAdmin(event);
@@ -34,8 +38,7 @@ export const actions = {
 		const file = form.get('sheet');
 		if (!(file instanceof File) || file.size === 0)
 			return fail(400, { owner, errors: { sheet: 'Choose a CSV or XLSX file.' } });
-		if (file.size > MAX_SHEET_BYTES)
-			return fail(400, { owner, errors: { sheet: `The file is over ${MAX_SHEET_BYTES / 1024 / 1024} MB.` } });
+		if (file.size > MAX_SHEET_BYTES) return fail(413, { owner, errors: { sheet: TOO_LARGE } });
 		const kind = /\.xlsx$/i.test(file.name) ? 'xlsx' : /\.csv$/i.test(file.name) ? 'csv' : null;
 		if (!kind) return fail(400, { owner, errors: { sheet: 'The file must end in .csv or .xlsx.' } });
 

@@ -5,6 +5,7 @@ import { BILL_COLUMNS, parseBillSheet } from '$lib/server/bills/bill-sheet';
 import { billEstimates } from '$lib/server/bills/estimates';
 import { requireSiteAccess } from '$lib/server/guard';
 import { MAX_SHEET_BYTES, sheetKind } from '$lib/server/sheets/read-sheet';
+import { uploadForm } from '$lib/server/http/upload-form';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load = (async (event) => {
@@ -45,10 +46,14 @@ export const actions = {
 
 	import: async (event) => {
 		const { site, user } = await requireSiteAccess(event, event.params.siteId, 'editor');
-		const file = (await event.request.formData()).get('sheet');
-		const refuse = (message: string) => fail(400, { form: 'import', sheetError: message, refused: [] });
+		const form = await uploadForm(event.request);
+		const refuse = (message: string, status = 400) =>
+			fail(status, { form: 'import', sheetError: message, refused: [] });
+		const tooLarge = `The file is over ${MAX_SHEET_BYTES / 1024 / 1024} MB.`;
+		if (form === 'too-large') return refuse(tooLarge, 413);
+		const file = form.get('sheet');
 		if (!(file instanceof File) || file.size === 0) return refuse('Choose a CSV or XLSX file.');
-		if (file.size > MAX_SHEET_BYTES) return refuse(`The file is over ${MAX_SHEET_BYTES / 1024 / 1024} MB.`);
+		if (file.size > MAX_SHEET_BYTES) return refuse(tooLarge, 413);
 		const kind = sheetKind(file.name);
 		if (!kind) return refuse('The file must end in .csv or .xlsx.');
 		const stored = await listBills(site.id);

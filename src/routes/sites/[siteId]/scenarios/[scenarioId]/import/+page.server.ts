@@ -9,7 +9,10 @@ import {
 	parseEquipmentSheet
 } from '$lib/server/sites/equipment-sheet/parse';
 import { NUL_MESSAGE, nulPath, revisionOf } from '$lib/forms/storable';
+import { uploadForm } from '$lib/server/http/upload-form';
 import type { Actions, PageServerLoad, RequestEvent } from './$types';
+
+const TOO_LARGE = `The file is over ${MAX_SHEET_BYTES / 1024 / 1024} MB.`;
 
 async function editable(event: RequestEvent) {
 	const access = await requireScenarioAccess(event, event.params.scenarioId, 'editor');
@@ -47,7 +50,9 @@ function mappingOf(form: FormData): ColumnMapping | undefined {
 export const actions = {
 	default: async (event) => {
 		const { site, scenario, user } = await editable(event);
-		const form = await event.request.formData();
+		const form = await uploadForm(event.request);
+		if (form === 'too-large')
+			return fail(413, { mode: 'append', skipRefused: false, errors: { sheet: TOO_LARGE } });
 		const intent = form.get('intent') === 'import' ? 'import' : 'check';
 		const mode = form.get('mode') === 'replace' ? 'replace' : 'append';
 		const skipRefused = form.get('skipRefused') === 'on';
@@ -55,11 +60,7 @@ export const actions = {
 		const values = { mode, skipRefused };
 		if (!(file instanceof File) || file.size === 0)
 			return fail(400, { ...values, errors: { sheet: 'Choose a CSV or XLSX file.' } });
-		if (file.size > MAX_SHEET_BYTES)
-			return fail(400, {
-				...values,
-				errors: { sheet: `The file is over ${MAX_SHEET_BYTES / 1024 / 1024} MB.` }
-			});
+		if (file.size > MAX_SHEET_BYTES) return fail(413, { ...values, errors: { sheet: TOO_LARGE } });
 		const kind = sheetKind(file.name);
 		if (!kind) return fail(400, { ...values, errors: { sheet: 'The file must end in .csv or .xlsx.' } });
 
