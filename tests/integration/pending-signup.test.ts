@@ -53,8 +53,7 @@ async function linkToken(to: string, path: string): Promise<string> {
 	return (await nextMail(to, path)).text.match(new RegExp(`${path}\\?token=([\\w-]+)`))![1]!;
 }
 
-const account = async (email: string) =>
-	(await db.select().from(users).where(eq(users.email, email)))[0]!;
+const account = async (email: string) => (await db.select().from(users).where(eq(users.email, email)))[0]!;
 
 const attackerPasswordWorks = async (email: string) => {
 	const row = await account(email);

@@ -85,9 +85,7 @@ export async function revokeAllSessions(userId: string, tx: Tx | typeof db = db)
 export async function purgeEndedSessions(now = new Date()): Promise<number> {
 	const removed = await db
 		.delete(userSessions)
-		.where(
-or(lte(userSessions.expiresAt, now), isNotNull(userSessions.revokedAt))
-		)
+		.where(or(lte(userSessions.expiresAt, now), isNotNull(userSessions.revokedAt)))
 		.returning({ id: userSessions.id });
 	return removed.length;
 }
