@@ -1,4 +1,4 @@
-import { isRedirect, type RequestEvent } from '@sveltejs/kit';
+import { isRedirect } from '@sveltejs/kit';
 import { afterAll, describe, expect, it } from 'vitest';
 import { client } from '$lib/server/db';
 import { stopJobs } from '$lib/server/jobs';
@@ -17,8 +17,10 @@ afterAll(async () => {
 	await client.end({ timeout: 5 });
 });
 
+type SignUpEvent = Parameters<typeof actions.default>[0];
+
 /** Posts the sign-up form as a browser would; each call from its own client so the limiter stays out of it. */
-function signUpEvent(email: string): RequestEvent {
+function signUpEvent(email: string): SignUpEvent {
 	calls += 1;
 	const body = new FormData();
 	body.set('name', 'Timing Test (invented)');
@@ -33,7 +35,7 @@ function signUpEvent(email: string): RequestEvent {
 		locals: { user: null, sessionId: null },
 		params: {},
 		route: { id: '/signup' }
-	} as unknown as RequestEvent;
+	} as unknown as SignUpEvent;
 }
 
 /** The action's answer (status and where it sends the browser, with the address taken out) and its time. */
