@@ -6,6 +6,7 @@ import Nodemailer from '@auth/sveltekit/providers/nodemailer';
 import { eq } from 'drizzle-orm';
 import { db } from '../db';
 import { accounts, sessions, users, verificationTokens } from '../db/schema';
+import { logger } from '../log';
 import { mailServer, sendMail } from '../mail';
 import { addressProvenBySignInLink } from '../services/account.service';
 import { verifyPassword } from './password';
@@ -72,10 +73,17 @@ export const {
 		})
 	],
 	callbacks: {
-		/** At sign-in (`user` is set) the token gets a new session id; later reads keep its row's expiry in step. */
+		/**
+		 * At sign-in (`user` is set) the token gets a new session id; later reads keep its row's expiry in
+		 * step. A failed extension is only logged: Auth.js would clear the cookie on any error here, and a
+		 * database outage must answer 503 (hooks.server.ts), not sign people out.
+		 */
 		async jwt({ token, user }) {
 			if (user?.id) token.sid = await startSession(user.id);
-			else if (typeof token.sid === 'string') await extendSession(token.sid);
+			else if (typeof token.sid === 'string')
+				await extendSession(token.sid).catch((error: unknown) =>
+					logger.warn({ err: error }, 'could not extend a session; the next read tries again')
+				);
 			return token;
 		},
 		session({ session, token }) {
