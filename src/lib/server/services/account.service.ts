@@ -165,12 +165,14 @@ export async function confirmSignUp(token: string, password: string): Promise<Co
 	return confirmed ? { email: confirmed.email } : 'closed';
 }
 
+export type PendingSignUp = NonNullable<Awaited<ReturnType<typeof pendingSignUp>>>;
+
 /**
- * A password sign-in to an address whose sign-up is not confirmed yet: when the password is the one that
- * sign-up chose, a fresh confirmation link goes out (the older ones stop working) and this returns true.
- * Always costs one hash comparison, so a miss takes as long whether or not a sign-up is pending.
+ * A password sign-in to an address whose sign-up is not confirmed yet: the pending sign-up when the
+ * password is the one it chose, else null. Always costs one hash comparison, so a miss takes as long
+ * whether or not a sign-up is pending.
  */
-export async function resendConfirmation(email: string, password: string, origin: string): Promise<boolean> {
+export async function pendingSignUpWith(email: string, password: string): Promise<PendingSignUp | null> {
 	const pending = await pendingSignUp(
 		and(
 			eq(users.email, email),
@@ -179,7 +181,11 @@ export async function resendConfirmation(email: string, password: string, origin
 			gt(userTokens.expiresAt, new Date())
 		)
 	);
-	if (!(await verifyPassword(password, pending?.passwordHash)) || !pending) return false;
+	return (await verifyPassword(password, pending?.passwordHash)) && pending ? pending : null;
+}
+
+/** Mails a fresh confirmation link for the pending sign-up; its older links stop working. */
+export async function resendConfirmation(pending: PendingSignUp, origin: string): Promise<void> {
 	const token = await db.transaction(async (tx) => {
 		await voidTokens(tx, pending.userId, 'verify-email');
 		return issueToken(tx, pending.userId, 'verify-email', {
@@ -187,8 +193,7 @@ export async function resendConfirmation(email: string, password: string, origin
 			passwordHash: pending.passwordHash!
 		});
 	});
-	await mailConfirmation(email, token, origin);
-	return true;
+	await mailConfirmation(pending.email, token, origin);
 }
 
 /**
