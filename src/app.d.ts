@@ -5,6 +5,8 @@ declare global {
 		interface Locals {
 			/** The signed-in user, resolved once per request in hooks.server.ts; null when anonymous. */
 			user: SessionUser | null;
+			/** The live session's id (`auth/sessions.ts`) when signed in, so sign-out can end exactly it. */
+			sessionId: string | null;
 			/** Set by handleError when the database could not be reached, so the response becomes a 503. */
 			databaseDown?: boolean;
 		}
@@ -28,6 +30,8 @@ declare global {
 declare module '@auth/sveltekit' {
 	interface Session {
 		user: { id: string } & DefaultSession['user'];
+		/** The session's row in `user_session`; absent on tokens minted before sessions were recorded. */
+		sid?: string;
 	}
 }
 

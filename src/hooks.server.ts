@@ -1,39 +1,47 @@
 import type { Handle, HandleServerError, ServerInit } from '@sveltejs/kit';
 import { startJobs } from '$lib/server/jobs';
 import { sequence } from '@sveltejs/kit/hooks';
-import { eq } from 'drizzle-orm';
 import { authHandle } from '$lib/server/auth';
 import { onlyPublicAuthDoors } from '$lib/server/auth/public-doors';
-import { rememberSession, sessionToken, verifiedUserId } from '$lib/server/auth/session-cache';
-import { db } from '$lib/server/db';
+import {
+	dropSessionCookie,
+	rememberSession,
+	sessionToken,
+	verifiedSession
+} from '$lib/server/auth/session-cache';
+import { liveSessionUser } from '$lib/server/auth/sessions';
 import { finishReadingBody } from '$lib/server/http/unread-body';
 import { isDatabaseUnavailable } from '$lib/server/db/errors';
-import { users } from '$lib/server/db/schema';
 import { logger } from '$lib/server/log';
 import { withSecurityHeaders } from '$lib/server/security-headers';
 import { unavailableResponse } from '$lib/server/unavailable';
 
 /** Resolves the signed-in user once; every load, action and endpoint reads `locals.user`. The user row
- * is read on every request, so a deleted account or a changed admin flag takes effect at once. */
+ * and the session's own row (`auth/sessions.ts`) are read together on every request, so a deleted
+ * account, a changed admin flag or an ended session (sign-out, "sign out everywhere", a password reset)
+ * takes effect at once. */
 const resolveUser: Handle = async ({ event, resolve }) => {
 	event.locals.user = null;
+	event.locals.sessionId = null;
 	const token = sessionToken(event.cookies);
-	let id = verifiedUserId(token);
-	if (!id) {
-		id = (await event.locals.auth())?.user?.id;
-		if (id) rememberSession(event.cookies, token, id);
+	let session = verifiedSession(token);
+	if (!session) {
+		const auth = await event.locals.auth();
+		// A token from before sessions were recorded has no sid: it is treated as ended.
+		if (auth?.user?.id && auth.sid) {
+			session = { userId: auth.user.id, sid: auth.sid };
+			rememberSession(event.cookies, token, session);
+		} else if (auth?.user) dropSessionCookie(event.cookies);
 	}
-	if (id) {
+	if (session) {
 		try {
-			const [row] = await db
-				.select({ id: users.id, email: users.email, name: users.name, isAdmin: users.isAdmin })
-				.from(users)
-				.where(eq(users.id, id));
-			event.locals.user = row ?? null;
+			event.locals.user = await liveSessionUser(session.userId, session.sid);
 		} catch (error) {
 			if (isDatabaseUnavailable(error)) return unavailableResponse(event);
 			throw error;
 		}
+		if (event.locals.user) event.locals.sessionId = session.sid;
+		else dropSessionCookie(event.cookies);
 	}
 	return resolve(event);
 };

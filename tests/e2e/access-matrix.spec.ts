@@ -422,7 +422,20 @@ const routes: Route[] = [
 		form: { workspaceId: DEMO_WS.id },
 		expect: [404, 403, 303, 303, 404, 404, 404]
 	},
-	// Last: it ends the caller's session. Auth.js answers with its own redirect.
+	// A confirmation link with no such token: refused beside the form for everyone.
+	{
+		method: 'POST',
+		path: () => '/signup/confirm',
+		form: { token: 'matrix-no-such-confirmation-token', password: 'not the password' },
+		expect: [400, 400, 400, 400, 400, 400, 400]
+	},
+	// Last: they end the caller's sessions. Auth.js answers with its own redirect.
+	{
+		method: 'POST',
+		path: () => '/account?/signOutEverywhere',
+		form: { none: '' },
+		expect: [401, 302, 302, 302, 302, 302, 302]
+	},
 	{ method: 'POST', path: () => '/signout', form: { none: '' }, expect: [302, 302, 302, 302, 302, 302, 302] }
 ];
 

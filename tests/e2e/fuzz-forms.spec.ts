@@ -212,6 +212,10 @@ const TARGETS: Record<string, Target> = {
 		path: () => '/reset',
 		fields: () => ({ token: 'fuzz-no-such-reset-token-0000', password: PASSWORD, confirm: PASSWORD })
 	},
+	'/signup/confirm': {
+		path: () => '/signup/confirm',
+		fields: () => ({ token: 'fuzz-no-such-confirmation-token-0000', password: PASSWORD })
+	},
 	'/invite/[token]?/accept': { path: () => `/invite/${NO_INVITATION}?/accept`, fields: () => ({}) },
 	// Its passwords never match: a valid join spends the per-client sign-up budget other specs need.
 	'/invite/[token]?/join': {
@@ -221,7 +225,8 @@ const TARGETS: Record<string, Target> = {
 	}
 };
 const SKIPPED: Record<string, string> = {
-	'/signout': 'it ends the owner’s session, which every later post needs'
+	'/signout': 'it ends the owner’s session, which every later post needs',
+	'/account?/signOutEverywhere': 'it ends every session of the owner, which every later post needs'
 };
 
 /** Every form action under src/routes: `route?/name`, or `route` for a default action. */

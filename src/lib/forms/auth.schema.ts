@@ -38,6 +38,15 @@ export const resetSchema = z
 	.object({ token: z.string().min(10).max(200), password: newPasswordField, confirm: z.string() })
 	.refine((v) => v.password === v.confirm, { path: ['confirm'], message: 'The two passwords differ.' });
 
+/** Confirming a sign-up: its link's token and the password chosen in that sign-up (account.service.ts). */
+export const confirmSignUpSchema = z.object({
+	token: z.string().min(10).max(200),
+	password: z
+		.string({ error: 'Type the password you chose when you signed up.' })
+		.min(1, 'Type the password you chose when you signed up.')
+		.max(200, 'That is not the password chosen for this sign-up.')
+});
+
 export const workspaceNameField = z
 	.string({ error: 'Name the workspace.' })
 	.trim()

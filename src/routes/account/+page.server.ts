@@ -1,22 +1,52 @@
-import { fail } from '@sveltejs/kit';
+import { fail, type RequestEvent } from '@sveltejs/kit';
 import { requireUser } from '$lib/server/guard';
 import { signOut } from '$lib/server/auth';
 import { forwardedHeaders } from '$lib/server/auth/hand-over';
+import { revokeAllSessions } from '$lib/server/auth/sessions';
 import { deleteAccount } from '$lib/server/services/account-deletion.service';
 import { keepValues } from '$lib/forms/errors';
 import type { Actions, PageServerLoad } from './$types';
 
 const DELETED = '/account?deleted=1';
+const SIGNED_OUT_EVERYWHERE = '/account?signedout=everywhere';
+
+/** Clears this browser's Auth.js session cookie (Auth.js also ends the session's row), then redirects. */
+async function signOutHere(event: RequestEvent, redirectTo: string) {
+	const body = new FormData();
+	body.set('redirectTo', redirectTo);
+	await signOut({
+		...event,
+		request: new Request(event.request.url, {
+			method: 'POST',
+			headers: forwardedHeaders(event.request),
+			body
+		})
+	});
+}
 
 export const load = (async (event) => {
-	// After a deletion the visitor is signed out and lands here once, to read what happened.
+	// After a deletion, or after signing out everywhere, the visitor is signed out and lands here once,
+	// to read what happened.
 	if (!event.locals.user && event.url.searchParams.get('deleted') === '1')
-		return { deleted: true as const, account: null };
+		return { deleted: true as const, signedOutEverywhere: false, account: null };
+	if (!event.locals.user && event.url.searchParams.get('signedout') === 'everywhere')
+		return { deleted: false as const, signedOutEverywhere: true, account: null };
 	const user = requireUser(event);
-	return { deleted: false as const, account: { name: user.name, email: user.email } };
+	return {
+		deleted: false as const,
+		signedOutEverywhere: false,
+		account: { name: user.name, email: user.email }
+	};
 }) satisfies PageServerLoad;
 
 export const actions = {
+	/** Ends every session of the account, on every device and browser, this one included. */
+	signOutEverywhere: async (event) => {
+		const user = requireUser(event);
+		await revokeAllSessions(user.id);
+		await signOutHere(event, SIGNED_OUT_EVERYWHERE);
+	},
+
 	delete: async (event) => {
 		const user = requireUser(event);
 		const form = await event.request.formData();
@@ -37,16 +67,6 @@ export const actions = {
 					form: `You are the last owner of ${result.blockers.join(', ')}, which other people use. Make one of them owner, or delete the workspace, first.`
 				}
 			});
-		// Clears the Auth.js session cookie, then redirects.
-		const body = new FormData();
-		body.set('redirectTo', DELETED);
-		await signOut({
-			...event,
-			request: new Request(event.request.url, {
-				method: 'POST',
-				headers: forwardedHeaders(event.request),
-				body
-			})
-		});
+		await signOutHere(event, DELETED);
 	}
 } satisfies Actions;

@@ -5,7 +5,7 @@ import { verifyPassword } from '$lib/server/auth/password';
 import { db } from '$lib/server/db';
 import { users } from '$lib/server/db/schema';
 import { mailLinkLimiter, recordSignInFailure, signInLocked, TOO_MANY } from '$lib/server/rate-limit';
-import { sendVerification } from '$lib/server/services/account.service';
+import { pendingSignUpWith, resendConfirmation } from '$lib/server/services/account.service';
 import { magicLinkSchema, signInSchema } from '$lib/forms/auth.schema';
 import { fieldErrors, keepValues } from '$lib/forms/errors';
 import { safeNext } from '$lib/safe-next';
@@ -35,16 +35,20 @@ export const actions = {
 		const [user] = await db.select().from(users).where(eq(users.email, email));
 		// One message whether the address is unknown or the password wrong: the form must not tell who has an account.
 		if (!(await verifyPassword(password, user?.passwordHash)) || !user) {
+			// A sign-up not confirmed yet keeps its password on its link, not on the account (account.service.ts).
+			// A fresh link goes out within the mail-link limit, so repeated sign-ins cannot flood the mailbox.
+			const pending = await pendingSignUpWith(email, password);
+			if (pending) {
+				if (!(await mailLinkLimiter.isLimited(event, email)))
+					await resendConfirmation(pending, event.url.origin);
+				return fail(400, {
+					action: 'password',
+					values,
+					errors: { form: 'Confirm your address first: we have sent you a new confirmation link.' }
+				});
+			}
 			await recordSignInFailure(event, email);
 			return fail(400, { action: 'password', values, errors: { password: NO_MATCH } });
-		}
-		if (!user.emailVerified) {
-			await sendVerification(user.id, user.email, event.url.origin);
-			return fail(400, {
-				action: 'password',
-				values,
-				errors: { form: 'Confirm your address first: we have just sent you a new confirmation link.' }
-			});
 		}
 		const next = String(form.get('next') ?? '');
 		if (!(await handOver(event, 'password', { email, password, next })))

@@ -6,11 +6,13 @@ import { LRUCache } from 'lru-cache';
  *
  * Reading an Auth.js session decrypts the token, derives its key and encrypts a renewed token: about
  * a millisecond of CPU on every request. A token seen and verified a moment ago is the same token, so
- * the user id it carried is taken from here instead; after a minute the token is verified (and the
- * session renewed) again. The cost is that a token stays usable for at most a minute past its own
- * expiry, which for 30-day sessions is noise. The cache is per process and holds ids only.
+ * the ids it carried (user and session) are taken from here instead; after a minute the token is
+ * verified (and the session renewed) again. This saves the decryption only: whether the session is
+ * still live (not signed out) is read from the database on every request (`auth/sessions.ts`), so an
+ * ended session stops working at once. The cache is per process and holds ids only.
  */
-const verified = new LRUCache<string, string>({ max: 10_000, ttl: 60_000 });
+export type VerifiedSession = { userId: string; sid: string };
+const verified = new LRUCache<string, VerifiedSession>({ max: 10_000, ttl: 60_000 });
 
 // Auth.js names the cookie with a __Secure- prefix on https; a token over 4 kB is split into .0, .1…
 const NAMES = ['__Secure-authjs.session-token', 'authjs.session-token'];
@@ -24,11 +26,17 @@ export function sessionToken(cookies: Cookies): string | undefined {
 	return undefined;
 }
 
-export const verifiedUserId = (token: string | undefined) => (token ? verified.get(token) : undefined);
+export const verifiedSession = (token: string | undefined) => (token ? verified.get(token) : undefined);
 
 /** Remembers the token the request came with and the renewed one Auth.js set on the response. */
-export function rememberSession(cookies: Cookies, sent: string | undefined, userId: string) {
-	if (sent) verified.set(sent, userId);
+export function rememberSession(cookies: Cookies, sent: string | undefined, session: VerifiedSession) {
+	if (sent) verified.set(sent, session);
 	const renewed = sessionToken(cookies);
-	if (renewed && renewed !== sent) verified.set(renewed, userId);
+	if (renewed && renewed !== sent) verified.set(renewed, session);
+}
+
+/** Clears the session cookie of a session that has ended, so the browser stops sending it. */
+export function dropSessionCookie(cookies: Cookies) {
+	for (const name of NAMES)
+		if (cookies.get(name)) cookies.delete(name, { path: '/', secure: name.startsWith('__Secure-') });
 }

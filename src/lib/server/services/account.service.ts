@@ -1,92 +1,223 @@
-import { and, eq, gt, isNull } from 'drizzle-orm';
+import { and, desc, eq, gt, isNull, sql } from 'drizzle-orm';
 import { db } from '../db';
 import { userTokens, users } from '../db/schema';
-import { hashPassword } from '../auth/password';
+import { hashPassword, verifyPassword } from '../auth/password';
+import { revokeAllSessions } from '../auth/sessions';
 import { HOUR_MS, hashToken, newToken } from '../auth/tokens';
 import { sendMail } from '../mail';
 
+/*
+ * Pending sign-ups: proving an address never adopts a password someone else chose.
+ *
+ * Anyone can fill in the sign-up form with any address, so a sign-up's password (and name) are only a
+ * proposal until the address's owner confirms them. They wait on the confirmation link's own row
+ * (`user_token.password_hash`, `.name`); the unconfirmed user row holds the address and nothing else.
+ *
+ * - The confirmation link confirms that proposal only when whoever opens it also types the password chosen
+ *   in that same sign-up: the link proves the address, the password proves it is the same person. The
+ *   owner of an address who opens a link from a sign-up they did not make cannot complete it.
+ * - A second sign-up for a still-unconfirmed address replaces the proposal and voids the earlier links.
+ * - A sign-up for a confirmed address changes nothing; the owner gets a "someone tried" note.
+ * - Proving the address any other way (an e-mailed sign-in link, a password reset, an invitation) voids
+ *   every pending proposal: the account then has no password, or the one chosen with that proof.
+ * - Both sign-up paths hash the password before branching and answer with the same page, so neither the
+ *   answer nor its timing tells who has an account.
+ */
+
 type Purpose = 'verify-email' | 'reset-password';
+type Tx = Parameters<Parameters<typeof db.transaction>[0]>[0];
 const LIFETIME_MS: Record<Purpose, number> = { 'verify-email': 48 * HOUR_MS, 'reset-password': 1 * HOUR_MS };
 
-async function issueToken(userId: string, purpose: Purpose): Promise<string> {
+async function issueToken(
+	tx: Tx | typeof db,
+	userId: string,
+	purpose: Purpose,
+	pending: { name: string | null; passwordHash: string } | null = null
+): Promise<string> {
 	const { token, tokenHash } = newToken();
-	await db
-		.insert(userTokens)
-		.values({ userId, purpose, tokenHash, expiresAt: new Date(Date.now() + LIFETIME_MS[purpose]) });
+	await tx.insert(userTokens).values({
+		userId,
+		purpose,
+		tokenHash,
+		expiresAt: new Date(Date.now() + LIFETIME_MS[purpose]),
+		name: pending?.name ?? null,
+		passwordHash: pending?.passwordHash ?? null
+	});
 	return token;
 }
 
-/** Marks the token used and returns its user, or null when it is unknown, used or expired. Single use. */
-async function consumeToken(token: string, purpose: Purpose): Promise<string | null> {
-	const [row] = await db
+/** Marks every open link of that purpose for the user as used: none of them works any more. */
+async function voidTokens(tx: Tx | typeof db, userId: string, purpose: Purpose): Promise<void> {
+	await tx
 		.update(userTokens)
 		.set({ usedAt: new Date() })
-		.where(
-			and(
-				eq(userTokens.tokenHash, hashToken(token)),
-				eq(userTokens.purpose, purpose),
-				isNull(userTokens.usedAt),
-				gt(userTokens.expiresAt, new Date())
-			)
-		)
+		.where(and(eq(userTokens.userId, userId), eq(userTokens.purpose, purpose), isNull(userTokens.usedAt)));
+}
+
+const openToken = (token: string, purpose: Purpose) =>
+	and(
+		eq(userTokens.tokenHash, hashToken(token)),
+		eq(userTokens.purpose, purpose),
+		isNull(userTokens.usedAt),
+		gt(userTokens.expiresAt, new Date())
+	);
+
+/** Marks the token used and returns its user, or null when it is unknown, used or expired. Single use. */
+async function consumeToken(tx: Tx, token: string, purpose: Purpose): Promise<string | null> {
+	const [row] = await tx
+		.update(userTokens)
+		.set({ usedAt: new Date() })
+		.where(openToken(token, purpose))
 		.returning({ userId: userTokens.userId });
 	return row?.userId ?? null;
 }
 
-export type SignUpResult = 'created' | 'exists';
-
 /**
- * Creates an unconfirmed account and mails the confirmation link. For an address that already has an
- * account the caller shows the same "check your e-mail" page, so the form does not reveal who has one;
- * that owner gets a note instead of a link.
+ * Starts a sign-up, or tells the address's owner someone tried. Returns nothing: the caller shows the same
+ * "check your e-mail" page either way, and both ways cost one password hash.
  */
 export async function signUp(
 	input: { name: string; email: string; password: string },
 	origin: string
-): Promise<SignUpResult> {
-	const [existing] = await db.select({ id: users.id }).from(users).where(eq(users.email, input.email));
-	if (existing) {
+): Promise<void> {
+	// Before branching: an existing address must not answer faster than a new one.
+	const passwordHash = await hashPassword(input.password);
+	const [existing] = await db
+		.select({ id: users.id, emailVerified: users.emailVerified })
+		.from(users)
+		.where(eq(users.email, input.email));
+	if (existing?.emailVerified) {
 		await sendMail({
 			to: input.email,
 			subject: 'Someone tried to create a Runrate account with your address',
-			text: `An account already uses this address. To get in, sign in or reset your password:\n\n${origin}/forgot\n\nIf this was not you, nothing changed.`
+			text: `Someone tried to create a Runrate account with this address, which already has one. Nothing changed. To get in, sign in or reset your password:\n\n${origin}/forgot\n\nIf this was not you, you need not do anything.`
 		});
-		return 'exists';
+		return;
 	}
-	const passwordHash = await hashPassword(input.password);
-	const [user] = await db
-		.insert(users)
-		.values({ name: input.name, email: input.email, passwordHash })
-		.returning({ id: users.id });
-	await sendVerification(user!.id, input.email, origin);
-	return 'created';
+	const token = await db.transaction(async (tx) => {
+		let userId = existing?.id;
+		if (!userId) {
+			const [created] = await tx
+				.insert(users)
+				.values({ email: input.email })
+				.onConflictDoUpdate({ target: users.email, set: { email: input.email } })
+				.returning({ id: users.id });
+			userId = created!.id;
+		}
+		// The newest sign-up's proposal replaces the earlier ones; their links stop working.
+		await voidTokens(tx, userId, 'verify-email');
+		return issueToken(tx, userId, 'verify-email', { name: input.name, passwordHash });
+	});
+	await mailConfirmation(input.email, token, origin);
 }
 
-export async function sendVerification(userId: string, email: string, origin: string): Promise<void> {
-	const token = await issueToken(userId, 'verify-email');
+async function mailConfirmation(email: string, token: string, origin: string): Promise<void> {
 	await sendMail({
 		to: email,
 		subject: 'Confirm your address for Runrate',
-		text: `Welcome to Runrate. Confirm your address to finish creating your account (the link works for 48 hours):\n\n${origin}/signup/confirm?token=${token}\n`
+		text: `Welcome to Runrate. To finish creating your account, open this link and type the password you chose (the link works for 48 hours):\n\n${origin}/signup/confirm?token=${token}\n\nIf you did not sign up, ignore this message: nobody can use the account without the link and that password.`
 	});
 }
 
-export async function confirmEmail(token: string): Promise<string | null> {
-	const userId = await consumeToken(token, 'verify-email');
-	if (!userId) return null;
-	const [user] = await db
+/** The pending sign-up behind an open confirmation link, with the password hash it proposes. */
+async function pendingSignUp(where: ReturnType<typeof and>) {
+	const [row] = await db
+		.select({
+			userId: userTokens.userId,
+			name: userTokens.name,
+			passwordHash: userTokens.passwordHash,
+			email: users.email
+		})
+		.from(userTokens)
+		.innerJoin(users, eq(users.id, userTokens.userId))
+		.where(and(where, isNull(users.emailVerified)))
+		.orderBy(desc(userTokens.createdAt))
+		.limit(1);
+	return row;
+}
+
+/** The address an open confirmation link is for, or null when it is unknown, used or expired. */
+export async function confirmationFor(token: string): Promise<string | null> {
+	return (await pendingSignUp(openToken(token, 'verify-email')))?.email ?? null;
+}
+
+export type Confirmation = { email: string } | 'wrong-password' | 'closed';
+
+/**
+ * Confirms a sign-up: the link must be open and the password the one chosen in that same sign-up. Only
+ * then does the account get that password (and name) and count as confirmed; the link is used up.
+ */
+export async function confirmSignUp(token: string, password: string): Promise<Confirmation> {
+	const pending = await pendingSignUp(openToken(token, 'verify-email'));
+	// One hash comparison whether or not the link is open.
+	if (!(await verifyPassword(password, pending?.passwordHash))) return pending ? 'wrong-password' : 'closed';
+	const confirmed = await db.transaction(async (tx) => {
+		if (!(await consumeToken(tx, token, 'verify-email'))) return null;
+		const [user] = await tx
+			.update(users)
+			.set({ passwordHash: pending!.passwordHash, name: pending!.name, emailVerified: new Date() })
+			.where(and(eq(users.id, pending!.userId), isNull(users.emailVerified)))
+			.returning({ email: users.email });
+		if (!user) return null;
+		await voidTokens(tx, pending!.userId, 'verify-email');
+		return user;
+	});
+	return confirmed ? { email: confirmed.email } : 'closed';
+}
+
+export type PendingSignUp = NonNullable<Awaited<ReturnType<typeof pendingSignUp>>>;
+
+/**
+ * A password sign-in to an address whose sign-up is not confirmed yet: the pending sign-up when the
+ * password is the one it chose, else null. Always costs one hash comparison, so a miss takes as long
+ * whether or not a sign-up is pending.
+ */
+export async function pendingSignUpWith(email: string, password: string): Promise<PendingSignUp | null> {
+	const pending = await pendingSignUp(
+		and(
+			eq(users.email, email),
+			eq(userTokens.purpose, 'verify-email'),
+			isNull(userTokens.usedAt),
+			gt(userTokens.expiresAt, new Date())
+		)
+	);
+	return (await verifyPassword(password, pending?.passwordHash)) && pending ? pending : null;
+}
+
+/** Mails a fresh confirmation link for the pending sign-up; its older links stop working. */
+export async function resendConfirmation(pending: PendingSignUp, origin: string): Promise<void> {
+	const token = await db.transaction(async (tx) => {
+		await voidTokens(tx, pending.userId, 'verify-email');
+		return issueToken(tx, pending.userId, 'verify-email', {
+			name: pending.name,
+			passwordHash: pending.passwordHash!
+		});
+	});
+	await mailConfirmation(pending.email, token, origin);
+}
+
+/**
+ * The address was just proven by an e-mailed sign-in link (Auth.js's adapter calls this before it sets
+ * `emailVerified`). If the account was unconfirmed, whatever an unconfirmed sign-up put on it (a password,
+ * a name, from before pending sign-ups) is dropped, and pending sign-up links stop working: the person
+ * who proved the address chooses a password on their own, through a reset.
+ */
+export async function addressProvenBySignInLink(userId: string, tx: Tx | typeof db = db): Promise<void> {
+	await tx
 		.update(users)
-		.set({ emailVerified: new Date() })
-		.where(eq(users.id, userId))
-		.returning({ email: users.email });
-	return user?.email ?? null;
+		.set({
+			passwordHash: sql`case when ${users.emailVerified} is null then null else ${users.passwordHash} end`,
+			name: sql`case when ${users.emailVerified} is null then null else ${users.name} end`
+		})
+		.where(eq(users.id, userId));
+	await voidTokens(tx, userId, 'verify-email');
 }
 
 /** Always behaves the same to the caller; only an existing account gets a reset link. */
 export async function requestPasswordReset(email: string, origin: string): Promise<void> {
 	const [user] = await db.select({ id: users.id }).from(users).where(eq(users.email, email));
 	if (!user) return;
-	const token = await issueToken(user.id, 'reset-password');
+	const token = await issueToken(db, user.id, 'reset-password');
 	await sendMail({
 		to: email,
 		subject: 'Reset your Runrate password',
@@ -94,14 +225,24 @@ export async function requestPasswordReset(email: string, origin: string): Promi
 	});
 }
 
-/** Sets the new password; the link proves the address, so it also counts as confirmed. */
+/**
+ * Sets the new password. The link proves the address, so it also counts as confirmed (any pending sign-up
+ * is void). Using one reset link voids the user's other reset links, and every session of the account
+ * ends: whoever knew the old password is signed out everywhere, and the person signs in again.
+ */
 export async function resetPassword(token: string, password: string): Promise<string | null> {
-	const userId = await consumeToken(token, 'reset-password');
-	if (!userId) return null;
-	const [user] = await db
-		.update(users)
-		.set({ passwordHash: await hashPassword(password), emailVerified: new Date() })
-		.where(eq(users.id, userId))
-		.returning({ email: users.email });
-	return user?.email ?? null;
+	const passwordHash = await hashPassword(password);
+	return db.transaction(async (tx) => {
+		const userId = await consumeToken(tx, token, 'reset-password');
+		if (!userId) return null;
+		await voidTokens(tx, userId, 'reset-password');
+		await voidTokens(tx, userId, 'verify-email');
+		const [user] = await tx
+			.update(users)
+			.set({ passwordHash, emailVerified: sql`coalesce(${users.emailVerified}, now())` })
+			.where(eq(users.id, userId))
+			.returning({ email: users.email });
+		await revokeAllSessions(userId, tx);
+		return user?.email ?? null;
+	});
 }

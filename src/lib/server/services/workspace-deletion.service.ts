@@ -1,6 +1,7 @@
 import { and, eq, isNotNull, lte } from 'drizzle-orm';
 import { db } from '../db';
 import { workspaces } from '../db/schema';
+import { purgeEndedSessions } from '../auth/sessions';
 import { defineSchedule } from '../jobs';
 import { logger } from '../log';
 
@@ -23,10 +24,13 @@ export async function purgeDeletedWorkspaces(now = new Date()): Promise<string[]
 /**
  * The purge, hourly from the job queue: a workspace goes within the hour after its grace period even when
  * nobody opens the app. The queue runs each tick once across app processes; should two purges still overlap
- * (a retry), the second DELETE skips the rows the first removed, so it does no harm.
+ * (a retry), the second DELETE skips the rows the first removed, so it does no harm. The same tick clears
+ * session rows that no token can use any more (expired or ended), which is just as idempotent.
  */
 export const purgeJob = defineSchedule('workspace-purge', '0 * * * *', async () => {
 	await purgeDeletedWorkspaces();
+	const sessions = await purgeEndedSessions();
+	if (sessions) logger.info({ count: sessions }, 'purged ended sessions');
 });
 
 /** Marks the workspace for deletion in GRACE_DAYS days; until then it stays whole and can be kept. */

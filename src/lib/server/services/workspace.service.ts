@@ -1,6 +1,6 @@
 import { and, asc, count, eq, gt, isNull } from 'drizzle-orm';
 import { db } from '../db';
-import { invitations, memberships, siteGrants, sites, users, workspaces } from '../db/schema';
+import { invitations, memberships, siteGrants, sites, userTokens, users, workspaces } from '../db/schema';
 import type { Role } from '../guard';
 import { hashPassword } from '../auth/password';
 import { HOUR_MS, hashToken, newToken } from '../auth/tokens';
@@ -214,12 +214,22 @@ export async function acceptInvitation(
 		let userId: string;
 		if ('userId' in who) userId = who.userId;
 		else {
+			// The invitation was mailed to the address, so accepting it proves the address: an unconfirmed
+			// sign-up for it (possibly someone else's) is no owner, and its pending password is void.
 			const [created] = await tx
 				.insert(users)
 				.values({ email: inv.email, name: who.name, passwordHash, emailVerified: new Date() })
-				.onConflictDoNothing()
+				.onConflictDoUpdate({
+					target: users.email,
+					set: { name: who.name, passwordHash, emailVerified: new Date() },
+					setWhere: isNull(users.emailVerified)
+				})
 				.returning({ id: users.id });
 			if (!created) throw new MembershipRuleError('An account already uses this address: sign in to accept.');
+			await tx
+				.update(userTokens)
+				.set({ usedAt: new Date() })
+				.where(and(eq(userTokens.userId, created.id), isNull(userTokens.usedAt)));
 			userId = created.id;
 		}
 		// A site-level share gives that site only; a workspace invitation makes a member.

@@ -1,5 +1,5 @@
 import { error, fail, redirect } from '@sveltejs/kit';
-import { eq } from 'drizzle-orm';
+import { and, eq, isNotNull } from 'drizzle-orm';
 import { z } from 'zod';
 import { handOver } from '$lib/server/auth/hand-over';
 import { db } from '$lib/server/db';
@@ -25,7 +25,11 @@ async function openInvitation(token: string) {
 export const load = (async ({ params, locals }) => {
 	const invitation = await openInvitation(params.token);
 	if (!invitation) return { invitation: null, hasAccount: false };
-	const [existing] = await db.select({ id: users.id }).from(users).where(eq(users.email, invitation.email));
+	// Only a confirmed account owns the address; an unconfirmed sign-up may be anyone's (account.service.ts).
+	const [existing] = await db
+		.select({ id: users.id })
+		.from(users)
+		.where(and(eq(users.email, invitation.email), isNotNull(users.emailVerified)));
 	return {
 		invitation: {
 			email: invitation.email,

@@ -1,4 +1,4 @@
-import { boolean, integer, pgTable, primaryKey, text, timestamp } from 'drizzle-orm/pg-core';
+import { boolean, index, integer, pgTable, primaryKey, text, timestamp } from 'drizzle-orm/pg-core';
 
 // The tables @auth/drizzle-adapter expects, with Runrate's own columns on `user`.
 // Sessions are JWTs (the credentials provider requires it); the session table exists for the adapter.
@@ -54,7 +54,13 @@ export const verificationTokens = pgTable(
 	(vt) => [primaryKey({ columns: [vt.identifier, vt.token] })]
 );
 
-/** One-time links Runrate sends itself: address verification after sign-up, and password reset. */
+/**
+ * One-time links Runrate sends itself: address verification after sign-up, and password reset.
+ *
+ * A sign-up's name and password wait on its `verify-email` row (`name`, `password_hash`) rather than on the
+ * user: until someone proves the address *and* knows that password, nobody may sign in with it. An
+ * unconfirmed user row therefore never has a password (see account.service.ts, "pending sign-ups").
+ */
 export const userTokens = pgTable('user_token', {
 	id: text('id')
 		.primaryKey()
@@ -66,5 +72,29 @@ export const userTokens = pgTable('user_token', {
 	tokenHash: text('token_hash').notNull().unique(),
 	expiresAt: timestamp('expires_at', { mode: 'date' }).notNull(),
 	usedAt: timestamp('used_at', { mode: 'date' }),
-	createdAt: timestamp('created_at', { mode: 'date' }).notNull().defaultNow()
+	createdAt: timestamp('created_at', { mode: 'date' }).notNull().defaultNow(),
+	/** The name a sign-up chose; applied when its link is confirmed with its password. */
+	name: text('name'),
+	/** The bcrypt hash of the password a sign-up chose; pending until confirmed. */
+	passwordHash: text('password_hash')
 });
+
+/**
+ * Every signed-in session: the session JWT carries this row's id (`sid`), and a request is signed in only
+ * while its row is live (not revoked, not expired). Sign-out revokes one row; "sign out everywhere" and a
+ * password reset revoke all of a user's rows, at once in every app process. Expired rows are purged hourly.
+ */
+export const userSessions = pgTable(
+	'user_session',
+	{
+		id: text('id').primaryKey(),
+		userId: text('user_id')
+			.notNull()
+			.references(() => users.id, { onDelete: 'cascade' }),
+		createdAt: timestamp('created_at', { mode: 'date' }).notNull().defaultNow(),
+		/** Moves forward as the session is used (Auth.js renews the JWT), at most once a day. */
+		expiresAt: timestamp('expires_at', { mode: 'date' }).notNull(),
+		revokedAt: timestamp('revoked_at', { mode: 'date' })
+	},
+	(s) => [index('user_session_user_idx').on(s.userId), index('user_session_expires_idx').on(s.expiresAt)]
+);
