@@ -20,6 +20,7 @@ test.describe('field messages show once, at their fields', () => {
 		await refused;
 		const preview = page.getByRole('complementary', { name: /^Preview/ });
 		await expect(preview).toContainText('No preview until “Time zone” is corrected.');
+		await expect(preview).toContainText('—');
 
 		await page.getByRole('button', { name: 'Publish the tariff' }).click();
 		await expect(page.locator('#meta-timezone')).toHaveAttribute('aria-invalid', 'true');
