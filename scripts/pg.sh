@@ -47,8 +47,9 @@ server_can_reach() {
 
 # Sets PGDATA, PGSOCK and RELOCATED (the folder kept in ~postgres, or empty) from the environment.
 resolve_cluster() {
-	local wanted=${PGDATA:-$root/.data/pg} key home
+	local wanted=${PGDATA:-$root/.data/pg} named=$root key home
 	case $wanted in /*) ;; *) wanted=$PWD/$wanted ;; esac
+	[ -n "${PGDATA:-}" ] && named=$wanted
 	RELOCATED=
 	WANTED=$wanted
 	if server_can_reach "$wanted"; then
@@ -56,7 +57,7 @@ resolve_cluster() {
 	else
 		home=$(getent passwd postgres | cut -d: -f6)
 		# One folder per checkout: the hash of the checkout path, or of PGDATA when it was chosen.
-		key=$(printf '%s' "${PGDATA:+$wanted}${PGDATA:-$root}" | sha256sum | cut -c1-12)
+		key=$(printf '%s' "$named" | sha256sum | cut -c1-12)
 		RELOCATED=$home/runrate/$(basename "$root")-$key
 		PGDATA=$RELOCATED/pg
 	fi
