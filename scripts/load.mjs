@@ -12,7 +12,8 @@ import { freePort, log, run, runOrThrow, startService, stopGroup, tsNode } from 
 const SECONDS = Number(process.env.LOAD_SECONDS ?? 30);
 const CONNECTIONS = Number(process.env.LOAD_CONNECTIONS ?? 50);
 const work = mkdtempSync(join(tmpdir(), 'runrate-load-'));
-// PostgreSQL's tools run as Debian's postgres user when this runs as root: they must reach the folder.
+// PostgreSQL's tools run as Debian's postgres user when this runs as root: they must reach the folder
+// (when they cannot, pg.sh keeps the cluster in ~postgres instead; `pg.sh drop` removes it either way).
 chmodSync(work, 0o755);
 const children = [];
 let pgEnv;
@@ -201,7 +202,7 @@ try {
 	console.error(error);
 } finally {
 	for (const child of children) stopGroup(child);
-	if (pgEnv) await run('bash', ['scripts/pg.sh', 'stop'], { env: pgEnv, quiet: true });
+	if (pgEnv) await run('bash', ['scripts/pg.sh', 'drop'], { env: pgEnv, quiet: true });
 	rmSync(work, { recursive: true, force: true });
 	rmSync(join('.test-build', basename(work)), { recursive: true, force: true });
 }

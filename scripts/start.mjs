@@ -53,6 +53,8 @@ try {
 		S3_DIR: `${root}/.data/s3`
 	};
 	await runOrThrow('bash', ['scripts/pg.sh', 'start'], { env: { PGPORT: String(pgPort) } });
+	// In the project's .data/pg, or in ~postgres/runrate/… when the clone sits in a private folder.
+	const pgData = (await runOrThrow('bash', ['scripts/pg.sh', 'where'], { quiet: true })).output.trim();
 	await runOrThrow(...tsNode('scripts/migrate.ts'), { env });
 	await runOrThrow(...tsNode('scripts/seed.ts'), { env });
 	children.push(
@@ -84,7 +86,7 @@ try {
 ${people.users.map((u) => `    ${u.email.padEnd(22)} ${u.name}`).join('\n')}
 
   Captured e-mail (sign-in links, invitations): ${env.MAIL_VIEW_URL}
-  PostgreSQL: 127.0.0.1:${pgPort}   S3 stand-in: ${env.S3_ENDPOINT}
+  PostgreSQL: 127.0.0.1:${pgPort} (data in ${pgData})   S3 stand-in: ${env.S3_ENDPOINT}
   Ctrl-C stops everything.
 `);
 } catch (error) {

@@ -22,7 +22,8 @@ const needsServices = suites.some((s) => s === 'integration' || s === 'e2e');
 const tally = { passed: 0, failed: 0 };
 const summary = [];
 const work = mkdtempSync(join(tmpdir(), 'runrate-test-'));
-// The cluster runs as Debian's postgres user, which must be able to enter this folder.
+// The cluster runs as Debian's postgres user, which must be able to enter this folder (when TMPDIR sits in
+// a private folder, pg.sh keeps the cluster in ~postgres instead; `pg.sh drop` removes it either way).
 chmodSync(work, 0o755);
 const children = [];
 let pgEnv = null;
@@ -139,7 +140,7 @@ async function startServices() {
 
 async function cleanup() {
 	for (const child of children) stopGroup(child);
-	if (pgEnv) await run('bash', ['scripts/pg.sh', 'stop'], { env: pgEnv, quiet: true });
+	if (pgEnv) await run('bash', ['scripts/pg.sh', 'drop'], { env: pgEnv, quiet: true });
 	rmSync(work, { recursive: true, force: true });
 	rmSync(join('.test-build', basename(work)), { recursive: true, force: true });
 }

@@ -21,6 +21,9 @@ export async function signInWithPassword(page: Page, email: string, password = D
 	await page.getByLabel('Password', { exact: true }).fill(password);
 	await page.getByRole('button', { name: 'Sign in', exact: true }).click();
 	await expect(page.getByRole('button', { name: 'Sign out' })).toBeVisible();
+	// The server renders the signed-in page before its scripts run: wait for hydration, so the next
+	// click reaches an enhanced form on a busy machine too.
+	await expect(page.locator('body[data-hydrated="true"]')).toBeAttached();
 }
 
 type Captured = { id: number; to: string[]; subject: string; text: string };

@@ -17,7 +17,9 @@ test('with the database stopped, pages and the API answer a readable 503 quickly
 		const started = Date.now();
 		const res = await page.goto(`/w/${DEMO_WS.id}`);
 		expect(res?.status()).toBe(503);
-		expect(Date.now() - started).toBeLessThan(2000);
+		// A stopped server refuses connections at once. The bound catches a request that waits out a
+		// timeout instead (a hang), with room for a page load on a busy 2-core machine.
+		expect(Date.now() - started).toBeLessThan(10_000);
 		await expect(
 			page.getByRole('heading', { name: 'Runrate cannot reach its database right now' })
 		).toBeVisible();

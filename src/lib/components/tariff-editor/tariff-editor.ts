@@ -129,6 +129,73 @@ export function describePath(path: string): string {
 	return words.join(' · ') || 'Tariff';
 }
 
+/** The words for a field key, as its box is labelled; list keys name the whole list. */
+const FIELD_NAMES: Record<string, string> = {
+	currency: 'Currency',
+	holidaysAsWeekends: 'Holidays priced like weekends',
+	minimumMonthly: 'Minimum per month',
+	fixedCharges: 'Fixed charges',
+	energyCharges: 'Energy charges',
+	demandCharges: 'Demand charges',
+	riders: 'Riders',
+	taxes: 'Taxes',
+	seasons: 'Seasons',
+	periods: 'Periods',
+	tiers: 'Tiers',
+	windows: 'Hours',
+	label: 'Name',
+	type: 'Kind of charge',
+	perMonth: 'Per month',
+	perDay: 'Per day',
+	perKwh: 'Per kWh',
+	perKw: 'Per kW',
+	otherPerKwh: 'Per kWh at all other hours',
+	uptoKwh: 'Up to kWh',
+	percent: 'Percent',
+	months: 'Months',
+	days: 'Days',
+	intervalMinutes: 'Interval',
+	start: 'Start',
+	end: 'End'
+};
+
+/**
+ * The field a path points at, in words for a summary that names fields without repeating their
+ * messages: "energyCharges.0.tiers.1.uptoKwh" → "Energy charge 1 · tier 2 · Up to kWh",
+ * "currency" → "Currency". Never the raw path.
+ */
+export function describeField(path: string): string {
+	const parts = path.split('.');
+	const place = describePath(path);
+	const leaf = [...parts].reverse().find((part) => !/^\d+$/.test(part));
+	const next = leaf === undefined ? undefined : parts[parts.lastIndexOf(leaf) + 1];
+	const isItem = leaf !== undefined && ITEM_NAMES[leaf] !== undefined && next !== undefined;
+	const name = leaf === undefined || isItem ? undefined : FIELD_NAMES[leaf];
+	if (!name) return place;
+	return place === 'Tariff' ? name : `${place} · ${name}`;
+}
+
+/** Paths no control of the editor shows messages for (the whole tariff, the holidays checkbox). */
+const NOT_AT_A_FIELD = new Set(['', 'holidaysAsWeekends']);
+
+/**
+ * The editor's summary: each field that needs attention once, in words. Messages show at their fields;
+ * the summary repeats a message only where no field shows it.
+ */
+export function summaryEntries(issues: readonly EditorIssue[]) {
+	const entries = new Map<string, { path: string; words: string; messages: string[] }>();
+	for (const issue of issues) {
+		const entry = entries.get(issue.path) ?? {
+			path: issue.path,
+			words: describeField(issue.path),
+			messages: []
+		};
+		if (NOT_AT_A_FIELD.has(issue.path)) entry.messages.push(issue.message);
+		entries.set(issue.path, entry);
+	}
+	return [...entries.values()];
+}
+
 /** Months a list's issues point at by position ("….months.2" is the third month listed). */
 export function flaggedMonths(
 	issues: readonly EditorIssue[],

@@ -91,6 +91,67 @@ export function issuesUnder(issues: Issue[], prefix: string): Issue[] {
 		.map((i) => ({ ...i, path: i.path.slice(prefix.length) }));
 }
 
+const META_WORDS: Record<string, string> = {
+	utility: 'Utility',
+	name: 'Tariff name',
+	code: 'Tariff code',
+	country: 'Country',
+	region: 'State or province',
+	area: 'Area served',
+	customerClass: 'Customer class',
+	currency: 'Currency',
+	timezone: 'Time zone',
+	holidays: 'Public holidays',
+	description: 'Description'
+};
+const VERSION_WORDS: Record<string, string> = {
+	effectiveFrom: 'In force from',
+	effectiveTo: 'In force until',
+	source: 'Source',
+	checkedOn: 'Checked against the source on',
+	changeNote: 'What changed'
+};
+
+/**
+ * The field of the tariff form a path points at, in words ("meta.holidays.country" → "Public holidays",
+ * "version.source" → "Source", "structure.…" → "Charges"), or null when no field of the form shows it
+ * (the whole form, or a path the form does not know): then the summary shows the message itself.
+ */
+export function formFieldWords(path: string): string | null {
+	const [part, key] = path.split('.');
+	if (part === 'meta') return (key && META_WORDS[key]) || null;
+	if (part === 'version') return (key && VERSION_WORDS[key]) || null;
+	if (part === 'structure') return 'Charges';
+	return null;
+}
+
+/**
+ * What the form's summary says: the fields that need attention, each named once in words (their
+ * messages show at the fields), and the messages no field shows.
+ */
+export function formSummary(issues: Issue[]): { fields: string[]; messages: string[] } {
+	const fields = new Set<string>();
+	const messages = new Set<string>();
+	for (const issue of issues) {
+		const words = formFieldWords(issue.path);
+		if (words) fields.add(words);
+		else messages.add(issue.message);
+	}
+	return { fields: [...fields], messages: [...messages] };
+}
+
+/**
+ * The field a refusal of the live preview's calculation points at, in words: the preview names it
+ * instead of repeating the message, which the field itself shows once the form is saved.
+ */
+export function previewFieldWords(path: string): string | null {
+	const [part] = path.split('.');
+	if (part === 'timezone') return 'Time zone';
+	if (part === 'holidays') return 'Public holidays';
+	if (part === 'tariff') return 'Charges';
+	return null;
+}
+
 /** Reads an uploaded export (our documented JSON shape) into drafts; returns a message when it is not one. */
 export function readExport(
 	text: string

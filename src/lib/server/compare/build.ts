@@ -16,6 +16,7 @@ import { equipmentOf, tariffFor } from '$lib/server/services/results.service';
 import { TARIFF_UNAVAILABLE, usableTariff } from '$lib/server/tariffs/usable';
 import { listDevices, type ScenarioRow, type SiteRow } from '$lib/server/services/site.service';
 import { assumptionsOf } from './assumptions';
+import { comparisonPlace } from './issue-place';
 
 /** Everything a comparison of stored scenarios is made of: the report, and the exact request given to compare(). */
 export interface Comparison {
@@ -134,7 +135,12 @@ export async function buildComparison(event: RequestEvent, query: ComparisonQuer
 		return {
 			ok: false,
 			path: 'scenarios',
-			message: issue ? `${issue.path}: ${issue.message}` : 'These scenarios cannot be compared'
+			message: issue
+				? `${comparisonPlace(
+						issue.path,
+						loaded.map((l, i) => ({ name: label(l, i), devices: l.specs }))
+					)}: ${issue.message}`
+				: 'These scenarios cannot be compared'
 		};
 	}
 	const result = compare(parsed.data);
