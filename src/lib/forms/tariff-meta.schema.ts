@@ -80,7 +80,7 @@ export const tariffMetaSchema = z.object({
 	holidays: z
 		.union([
 			z.object({ country: z.string(), region: z.string().optional() }),
-			z.object({ dates: z.array(z.string()) })
+			z.object({ dates: z.array(z.string()).max(1000, 'At most 1000 holiday dates') })
 		])
 		.nullable()
 		.default(null),

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { equipmentSchema } from '$lib/calc';
+import { list } from '$lib/calc/fields';
 import { MAX_REVISION, NUL_MESSAGE, withoutNul } from '$lib/forms/storable';
 
 /** A stored device: the core's equipment plus the safety flags; names must be unique within a scenario (the trail and charts name them). */
@@ -12,6 +13,12 @@ export const deviceSpecSchema = z.intersection(
 	})
 );
 
+/** Up to 2000 devices, checked entry by entry until enough problems are found to report. */
+const devicesSchema = list('Devices', deviceSpecSchema, {
+	max: 2000,
+	tooMany: 'A scenario holds at most 2000 devices'
+});
+
 const expectedRevision = z
 	.number({ error: 'Send the revision you edited (expectedRevision)' })
 	.int()
@@ -21,7 +28,7 @@ const expectedRevision = z
 export const equipmentListSchema = z
 	.object({
 		expectedRevision,
-		devices: z.array(deviceSpecSchema).max(2000, 'A scenario holds at most 2000 devices')
+		devices: devicesSchema
 	})
 	.superRefine((body, ctx) => {
 		const seen = new Map<string, number>();
@@ -38,7 +45,7 @@ export const equipmentListSchema = z
 	});
 
 export const previewSchema = z.object({
-	devices: z.array(deviceSpecSchema).max(2000, 'A scenario holds at most 2000 devices')
+	devices: devicesSchema
 });
 
 /** One row of the list through the API: `{ expectedRevision, device }`; a new row may say where it goes (0 = first). */
