@@ -2,6 +2,7 @@ import type { Handle, HandleServerError, ServerInit } from '@sveltejs/kit';
 import { startJobs } from '$lib/server/jobs';
 import { sequence } from '@sveltejs/kit/hooks';
 import { eq } from 'drizzle-orm';
+import { apiJsonErrors } from '$lib/server/api-errors';
 import { authHandle } from '$lib/server/auth';
 import { rememberSession, sessionToken, verifiedUserId } from '$lib/server/auth/session-cache';
 import { db } from '$lib/server/db';
@@ -49,7 +50,7 @@ const securityHeaders: Handle = async ({ event, resolve }) => {
 	return response;
 };
 
-export const handle = sequence(securityHeaders, databaseOutage, authHandle, resolveUser);
+export const handle = sequence(securityHeaders, apiJsonErrors, databaseOutage, authHandle, resolveUser);
 
 export const handleError: HandleServerError = ({ error, event, status, message }) => {
 	if (isDatabaseUnavailable(error)) {

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { storableText, UNSTORABLE } from './storable-text';
 
 /**
  * Zod building blocks whose messages read as plain sentences ("Amps must be zero or more"), named by
@@ -40,16 +41,14 @@ export function amount(label: string, bounds: Bounds = {}) {
 	return schema;
 }
 
-/** A trimmed, non-empty string of bounded length, without U+0000 (which no database column can hold). */
+/** A trimmed, non-empty string of bounded length that a database can store (no U+0000, no lone surrogate). */
 export function text(label: string, maxLength = 80) {
 	return z
 		.string({ error: required(label, 'text') })
 		.trim()
 		.min(1, { error: `${label} must not be empty` })
 		.max(maxLength, { error: `${label} must be at most ${maxLength} characters` })
-		.refine((value) => !value.includes('\u0000'), {
-			error: `${label} holds an invisible control character (U+0000); remove it`
-		});
+		.refine(storableText, UNSTORABLE);
 }
 
 /** One of a fixed list of words. */

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { equipmentSchema } from '$lib/calc';
 import { list } from '$lib/calc/fields';
-import { MAX_REVISION, NUL_MESSAGE, withoutNul } from '$lib/forms/storable';
+import { MAX_REVISION, storableText, UNSTORABLE } from '$lib/forms/storable';
 
 /** A stored device: the core's equipment plus the safety flags; names must be unique within a scenario (the trail and charts name them). */
 export const deviceSpecSchema = z.intersection(
@@ -9,7 +9,7 @@ export const deviceSpecSchema = z.intersection(
 	z.object({
 		inWater: z.boolean().optional(),
 		outdoor: z.boolean().optional(),
-		notes: z.string().max(2000).refine(withoutNul, NUL_MESSAGE).optional()
+		notes: z.string().max(2000).refine(storableText, UNSTORABLE).optional()
 	})
 );
 
