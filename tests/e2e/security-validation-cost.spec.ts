@@ -16,16 +16,24 @@ for (const [name, body] of BODIES) {
 	test(`${name} gets a 400 with a capped list while /health answers promptly`, async ({ request }) => {
 		const data = JSON.stringify(body);
 		const started = Date.now();
-		const hostile = request.post('/api/v1/calculate', {
-			headers: { 'content-type': 'application/json' },
-			data
-		});
-		// Sent while the hostile body is on its way or being checked.
-		const health = request.get('/health').then((res) => ({ res, ms: Date.now() - started }));
-		const [answer, { res: healthRes, ms: healthMs }] = await Promise.all([hostile, health]);
+		let answered = false;
+		const hostile = request
+			.post('/api/v1/calculate', { headers: { 'content-type': 'application/json' }, data })
+			.finally(() => (answered = true));
+		// /health, one request after another until the hostile body is answered: one of them arrives
+		// while the server checks the body (before the fix one waited as long as the check, 7.5 s).
+		const healthMs: number[] = [];
+		while (!answered) {
+			const asked = Date.now();
+			const health = await request.get('/health');
+			expect(health.status()).toBe(200);
+			healthMs.push(Date.now() - asked);
+		}
+		const answer = await hostile;
 		const answerMs = Date.now() - started;
 		const text = await answer.text();
-		const figures = `${(data.length / 1024).toFixed(0)} kB body: ${answer.status()} after ${answerMs} ms, answer ${text.length} bytes; /health after ${healthMs} ms`;
+		const slowest = Math.max(...healthMs);
+		const figures = `${(data.length / 1024).toFixed(0)} kB body: ${answer.status()} after ${answerMs} ms, answer ${text.length} bytes; ${healthMs.length} × /health, slowest ${slowest} ms`;
 		test.info().annotations.push({ type: 'figures', description: figures });
 		console.log(figures);
 		expect(answer.status()).toBe(400);
@@ -33,8 +41,7 @@ for (const [name, body] of BODIES) {
 		expect(issues).toHaveLength(51);
 		expect(issues.at(-1)?.message).toMatch(/^\d+ more problems were left out/);
 		expect(text.length).toBeLessThan(20_000);
-		expect(healthRes.status()).toBe(200);
-		// Generous for a busy 2-core machine; before the fix /health waited 7.5 s.
-		expect(healthMs).toBeLessThan(1000);
+		// Generous for a busy 2-core machine.
+		expect(slowest).toBeLessThan(1000);
 	});
 }
