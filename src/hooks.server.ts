@@ -1,6 +1,7 @@
 import type { Handle, HandleServerError, ServerInit } from '@sveltejs/kit';
 import { startJobs } from '$lib/server/jobs';
 import { sequence } from '@sveltejs/kit/hooks';
+import { apiJsonErrors } from '$lib/server/api-errors';
 import { authHandle } from '$lib/server/auth';
 import { onlyPublicAuthDoors } from '$lib/server/auth/public-doors';
 import {
@@ -59,6 +60,7 @@ const securityHeaders: Handle = async ({ event, resolve }) => withSecurityHeader
 export const handle = sequence(
 	finishReadingBody,
 	securityHeaders,
+	apiJsonErrors,
 	databaseOutage,
 	onlyPublicAuthDoors(authHandle),
 	resolveUser

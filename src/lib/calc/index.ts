@@ -13,7 +13,7 @@ export {
 	pumping
 } from './pumping';
 export type { AirPressure, PumpPower, PumpingResponse } from './pumping';
-export { parseRequest } from './parse';
+export { distinctBy, MAX_REPORTED_ISSUES, parseRequest, reportable } from './parse';
 export type { InvalidRequest, ParseResult, RequestIssue } from './parse';
 export { roundMoney } from './rounding';
 export { unitWatts } from './power';

@@ -32,6 +32,17 @@ function missingKeys(branch: readonly z.core.$ZodIssue[], input: unknown, base: 
 }
 
 /**
+ * Names the first few unknown keys only: zod's own message lists every one, so a body of 100,000 keys
+ * would be answered with a message as long as the body.
+ */
+function unknownKeys(keys: readonly string[]): string {
+	const shown = keys.slice(0, 5).map((key) => (key.length > 40 ? `${key.slice(0, 40)}…` : key));
+	const more = keys.length - shown.length;
+	const names = more > 0 ? `${shown.join(', ')} and ${more.toLocaleString('en-US')} more` : shown.join(', ');
+	return `${keys.length === 1 ? 'This field is' : 'These fields are'} not part of the request: ${names}`;
+}
+
+/**
  * Flattens zod issues into path + message pairs. A union that failed in every branch reports the
  * branch the input evidently meant (the one alone in missing the fewest keys); when that is unclear,
  * or the input is empty, it reports the union's own message ("Give power either as watts, or as amps and volts").
@@ -51,8 +62,39 @@ function flatten(issues: readonly z.core.$ZodIssue[], input: unknown, base: Path
 				continue;
 			}
 		}
-		out.push({ path: path.map(String).join('.'), message: issue.message });
+		const message = issue.code === 'unrecognized_keys' ? unknownKeys(issue.keys) : issue.message;
+		out.push({ path: path.map(String).join('.'), message });
 	}
+}
+
+/** Each item once, the first of those with the same key, in order; linear (a Set of keys). */
+export function distinctBy<T>(items: readonly T[], key: (item: T) => string): T[] {
+	const seen = new Set<string>();
+	return items.filter((item) => {
+		const k = key(item);
+		if (seen.has(k)) return false;
+		seen.add(k);
+		return true;
+	});
+}
+
+/** How many problems one answer lists; past that, a last issue says how many were left out. */
+export const MAX_REPORTED_ISSUES = 50;
+
+/**
+ * Each problem once, in order, at most MAX_REPORTED_ISSUES of them plus a last one saying how many more
+ * there are. Linear: a Set of path and message, so a long list costs no more than reading it.
+ */
+export function reportable(issues: readonly RequestIssue[], max = MAX_REPORTED_ISSUES): RequestIssue[] {
+	const distinct = distinctBy(issues, (issue) => `${issue.path}\u0000${issue.message}`);
+	const out = distinct.slice(0, max);
+	const left = distinct.length - out.length;
+	if (left > 0)
+		out.push({
+			path: '',
+			message: `${left} more ${left === 1 ? 'problem was' : 'problems were'} left out; fix these and send again to see the rest`
+		});
+	return out;
 }
 
 /**
@@ -73,9 +115,5 @@ export function parseRequest<S extends z.ZodType>(schema: S, json: unknown): Par
 	if (result.success) return { success: true, data: result.data };
 	const issues: RequestIssue[] = [];
 	flatten(result.error.issues, json, [], issues);
-	const unique = issues.filter(
-		(issue, i) =>
-			issues.findIndex((other) => other.path === issue.path && other.message === issue.message) === i
-	);
-	return { success: false, error: { error: 'invalid_request', issues: unique } };
+	return { success: false, error: { error: 'invalid_request', issues: reportable(issues) } };
 }

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { NUL_MESSAGE, withoutNul } from './storable';
+import { storableText, UNSTORABLE } from './storable';
 
 // Shared by the forms and the server: the same rules give the same messages in both places.
 
@@ -28,7 +28,7 @@ export const nameField = z
 	.trim()
 	.min(1, 'Enter your name.')
 	.max(100, 'Use at most 100 characters.')
-	.refine(withoutNul, NUL_MESSAGE);
+	.refine(storableText, UNSTORABLE);
 
 export const signUpSchema = z
 	.object({ name: nameField, email: emailField, password: newPasswordField, confirm: z.string() })
@@ -52,6 +52,6 @@ export const workspaceNameField = z
 	.trim()
 	.min(2, 'Use at least 2 characters.')
 	.max(80, 'Use at most 80 characters.')
-	.refine(withoutNul, NUL_MESSAGE);
+	.refine(storableText, UNSTORABLE);
 
 export const roleField = z.enum(['owner', 'editor', 'viewer'], { error: 'Pick owner, editor or viewer.' });

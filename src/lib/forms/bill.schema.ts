@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { NUL_MESSAGE, withoutNul } from './storable';
+import { storableText, UNSTORABLE } from './storable';
 
 /** A bill as its form, its sheet rows and the API take it. Dates are the bill's inclusive period. */
 const ISO_DATE = /^\d{4}-\d{2}-\d{2}$/;
@@ -35,7 +35,7 @@ export const lineItemSchema = z.object({
 		.trim()
 		.min(1, 'Name the line as the bill prints it')
 		.max(120, 'Use at most 120 characters')
-		.refine(withoutNul, NUL_MESSAGE),
+		.refine(storableText, UNSTORABLE),
 	amount: number('Line amount', -1_000_000, 1_000_000)
 });
 
@@ -54,7 +54,7 @@ export const billSchema = z
 					.string()
 					.trim()
 					.max(2000, 'Notes must be at most 2000 characters')
-					.refine(withoutNul, NUL_MESSAGE)
+					.refine(storableText, UNSTORABLE)
 					.nullable()
 			)
 			.default(null)

@@ -1,12 +1,12 @@
 import { z } from 'zod';
-import { NUL_MESSAGE, withoutNul } from './storable';
+import { storableText, UNSTORABLE } from './storable';
 
 const optionalText = (label: string, max: number) =>
 	z
 		.string()
 		.trim()
 		.max(max, `${label} must be at most ${max} characters`)
-		.refine(withoutNul, NUL_MESSAGE)
+		.refine(storableText, UNSTORABLE)
 		.optional()
 		.transform((s) => (s ? s : null));
 
@@ -27,7 +27,7 @@ export const siteSchema = z.object({
 		.trim()
 		.min(1, 'Name the site')
 		.max(120, 'Use at most 120 characters')
-		.refine(withoutNul, NUL_MESSAGE),
+		.refine(storableText, UNSTORABLE),
 	address: optionalText('Address or area', 300),
 	timezone: z.string({ error: 'Time zone is required' }).trim().min(1, 'Time zone is required').max(64),
 	country: z
@@ -62,6 +62,6 @@ export const scenarioSchema = z.object({
 		.trim()
 		.min(1, 'Name the scenario')
 		.max(120, 'Use at most 120 characters')
-		.refine(withoutNul, NUL_MESSAGE),
+		.refine(storableText, UNSTORABLE),
 	description: optionalText('Description', 2000)
 });

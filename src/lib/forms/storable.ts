@@ -1,25 +1,31 @@
-// Values JavaScript holds that PostgreSQL cannot store: U+0000 in text or jsonb, and whole numbers past
-// its integer columns. Forms refuse them at the boundary, beside the field, instead of failing at the
-// database with a 500.
+// Values JavaScript holds that PostgreSQL cannot store: U+0000 or a lone surrogate in text or jsonb, and
+// whole numbers past its integer columns. Forms refuse them at the boundary, beside the field, instead
+// of failing at the database with a 500.
+import { NUL_MESSAGE, storableText, unstorableMessage } from '$lib/calc/storable-text';
 
-export const NUL_MESSAGE = 'Remove the invisible control character (U+0000).';
-
-/** True when the text holds no U+0000. */
-export const withoutNul = (text: string) => !text.includes('\u0000');
+export {
+	NUL_MESSAGE,
+	SURROGATE_MESSAGE,
+	storableText,
+	UNSTORABLE,
+	unstorableMessage
+} from '$lib/calc/storable-text';
 
 /**
- * The dotted path of the first string or key holding U+0000 in a value (parsed JSON, a device list),
- * or null. Walks with its own stack, so hostile nesting cannot overflow the call stack.
+ * The dotted path of the first string or key in a value (parsed JSON, a device list) that cannot be
+ * stored, with the reason in words; null when all can. Walks with its own stack, so hostile nesting
+ * cannot overflow the call stack.
  */
-export function nulPath(value: unknown): string | null {
+export function unstorableIn(value: unknown): { path: string; message: string } | null {
 	const stack: [unknown, string][] = [[value, '']];
 	for (let next = stack.pop(); next; next = stack.pop()) {
 		const [node, path] = next;
-		if (typeof node === 'string' && !withoutNul(node)) return path;
+		if (typeof node === 'string' && !storableText(node))
+			return { path, message: unstorableMessage(node) ?? NUL_MESSAGE };
 		if (!node || typeof node !== 'object') continue;
 		for (const [key, child] of Object.entries(node)) {
 			const at = path ? `${path}.${key}` : key;
-			if (!withoutNul(key)) return at;
+			if (!storableText(key)) return { path: at, message: unstorableMessage(key) ?? NUL_MESSAGE };
 			stack.push([child, at]);
 		}
 	}

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { NUL_MESSAGE, withoutNul } from './storable';
+import { storableText, UNSTORABLE } from './storable';
 
 // What the library knows about a tariff besides its charges (those follow the core's tariffSchema),
 // and the provenance every published version carries. Shared by the editor, the API and the imports.
@@ -43,14 +43,14 @@ const shortText = (label: string, max = 120) =>
 		.trim()
 		.min(1, `${label} is required`)
 		.max(max, `${label} must be at most ${max} characters`)
-		.refine(withoutNul, NUL_MESSAGE);
+		.refine(storableText, UNSTORABLE);
 
 const optionalText = (label: string, max = 120) =>
 	z
 		.string()
 		.trim()
 		.max(max, `${label} must be at most ${max} characters`)
-		.refine(withoutNul, NUL_MESSAGE)
+		.refine(storableText, UNSTORABLE)
 		.transform((s) => (s === '' ? null : s))
 		.nullable()
 		.optional()
@@ -80,7 +80,7 @@ export const tariffMetaSchema = z.object({
 	holidays: z
 		.union([
 			z.object({ country: z.string(), region: z.string().optional() }),
-			z.object({ dates: z.array(z.string()) })
+			z.object({ dates: z.array(z.string()).max(1000, 'At most 1000 holiday dates') })
 		])
 		.nullable()
 		.default(null),
@@ -102,7 +102,7 @@ export const versionMetaSchema = z
 			.string()
 			.trim()
 			.max(2000, 'Change note must be at most 2000 characters')
-			.refine(withoutNul, NUL_MESSAGE)
+			.refine(storableText, UNSTORABLE)
 			.default('')
 	})
 	.refine((v) => !v.effectiveTo || v.effectiveTo >= v.effectiveFrom, {

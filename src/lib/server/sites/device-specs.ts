@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { equipmentSchema } from '$lib/calc';
-import { MAX_REVISION, NUL_MESSAGE, withoutNul } from '$lib/forms/storable';
+import { list } from '$lib/calc/fields';
+import { MAX_REVISION, storableText, UNSTORABLE } from '$lib/forms/storable';
 
 /** A stored device: the core's equipment plus the safety flags; names must be unique within a scenario (the trail and charts name them). */
 export const deviceSpecSchema = z.intersection(
@@ -8,9 +9,15 @@ export const deviceSpecSchema = z.intersection(
 	z.object({
 		inWater: z.boolean().optional(),
 		outdoor: z.boolean().optional(),
-		notes: z.string().max(2000).refine(withoutNul, NUL_MESSAGE).optional()
+		notes: z.string().max(2000).refine(storableText, UNSTORABLE).optional()
 	})
 );
+
+/** Up to 2000 devices, checked entry by entry until enough problems are found to report. */
+const devicesSchema = list('Devices', deviceSpecSchema, {
+	max: 2000,
+	tooMany: 'A scenario holds at most 2000 devices'
+});
 
 const expectedRevision = z
 	.number({ error: 'Send the revision you edited (expectedRevision)' })
@@ -21,7 +28,7 @@ const expectedRevision = z
 export const equipmentListSchema = z
 	.object({
 		expectedRevision,
-		devices: z.array(deviceSpecSchema).max(2000, 'A scenario holds at most 2000 devices')
+		devices: devicesSchema
 	})
 	.superRefine((body, ctx) => {
 		const seen = new Map<string, number>();
@@ -38,7 +45,7 @@ export const equipmentListSchema = z
 	});
 
 export const previewSchema = z.object({
-	devices: z.array(deviceSpecSchema).max(2000, 'A scenario holds at most 2000 devices')
+	devices: devicesSchema
 });
 
 /** One row of the list through the API: `{ expectedRevision, device }`; a new row may say where it goes (0 = first). */

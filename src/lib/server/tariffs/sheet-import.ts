@@ -1,4 +1,11 @@
-import { type Tariff, holidaysSchema, parseRequest, tariffSchema, timezoneSchema } from '$lib/calc';
+import {
+	type Tariff,
+	distinctBy,
+	holidaysSchema,
+	parseRequest,
+	tariffSchema,
+	timezoneSchema
+} from '$lib/calc';
 import { amount } from '$lib/calc/fields';
 import {
 	CUSTOMER_CLASSES,
@@ -243,8 +250,7 @@ function parseRow(line: number, cell: Cell): { row: SheetRow } | { errors: Sheet
 }
 
 // The currency cell feeds both the metadata and the charges; say each problem once.
-const dedupe = (errors: SheetRowError[]) =>
-	errors.filter((e, i) => errors.findIndex((o) => o.field === e.field && o.message === e.message) === i);
+const dedupe = (errors: SheetRowError[]) => distinctBy(errors, (e) => `${e.field}\u0000${e.message}`);
 
 const versionKey = ({ meta, version }: SheetRow) =>
 	[meta.utility, meta.code ?? meta.name, version.effectiveFrom].join('|').toLowerCase();

@@ -16,7 +16,7 @@ import {
 import { priceScenario } from '$lib/server/services/results.service';
 import { scenarioSchema } from '$lib/forms/site.schema';
 import { fieldErrors, keepValues } from '$lib/forms/errors';
-import { withoutNul } from '$lib/forms/storable';
+import { storableText } from '$lib/forms/storable';
 import { hasMainsInWater } from '$lib/cautions';
 import type { Actions, PageServerLoad } from './$types';
 
@@ -107,7 +107,7 @@ export const actions = {
 	unshare: async (event) => {
 		const { site } = await requireSharer(event);
 		const parsed = z
-			.object({ userId: z.string().min(1).max(100).refine(withoutNul) })
+			.object({ userId: z.string().min(1).max(100).refine(storableText) })
 			.safeParse(Object.fromEntries(await event.request.formData()));
 		if (!parsed.success)
 			return fail(400, { action: 'unshare', errors: { form: 'Pick a person to stop sharing with.' } });

@@ -3,7 +3,7 @@ import { requireAdmin, requireRole, requireUser } from '$lib/server/guard';
 import { importTariffs } from '$lib/server/services/tariff.service';
 import { listWorkspacesFor } from '$lib/server/services/workspace.service';
 import { describeRowError, MAX_SHEET_BYTES, parseTariffSheet } from '$lib/server/tariffs/sheet-import';
-import { NUL_MESSAGE, nulPath } from '$lib/forms/storable';
+import { unstorableIn } from '$lib/forms/storable';
 import { uploadForm } from '$lib/server/http/upload-form';
 import type { Actions, PageServerLoad } from './$types';
 
@@ -51,11 +51,11 @@ export const actions = {
 		if (result.sheetErrors.length)
 			return fail(400, { owner, sheetErrors: result.sheetErrors, refused, imported: [] });
 		// A spreadsheet cell can carry U+0000 (written _x0000_), which a rider or tax label cannot store.
-		const unstorable = result.rows.find((r) => nulPath(r.structure) !== null);
+		const unstorable = result.rows.find((r) => unstorableIn(r.structure));
 		if (unstorable)
 			return fail(400, {
 				owner,
-				sheetErrors: [`Row ${unstorable.line}: ${NUL_MESSAGE}`],
+				sheetErrors: [`Row ${unstorable.line}: ${unstorableIn(unstorable.structure)?.message}`],
 				refused,
 				imported: []
 			});

@@ -2,7 +2,7 @@ import { error, fail } from '@sveltejs/kit';
 import { requireUser } from '$lib/server/guard';
 import { listWorkspacesFor } from '$lib/server/services/workspace.service';
 import { tariffFormAction } from '$lib/server/tariffs/form-action';
-import { jsonField, NUL_MESSAGE, nulPath } from '$lib/forms/storable';
+import { jsonField, unstorableIn } from '$lib/forms/storable';
 import type { Actions, PageServerLoad } from './$types';
 
 async function ownerChoices(user: SessionUser) {
@@ -27,8 +27,8 @@ export const actions = {
 		const owner = String(form.get('owner') ?? '');
 		const owners = await ownerChoices(user);
 		if (!owners.some((o) => o.value === owner)) return fail(400, { owner: 'Pick whose tariff this is.' });
-		const nul = nulPath(jsonField(form.get('payload')));
-		if (nul !== null) return fail(400, { issues: [{ path: nul, message: NUL_MESSAGE }] });
+		const unstorable = unstorableIn(jsonField(form.get('payload')));
+		if (unstorable) return fail(400, { issues: [unstorable] });
 		return tariffFormAction(event, { workspaceId: owner === 'public' ? null : owner });
 	}
 } satisfies Actions;

@@ -20,7 +20,7 @@ import {
 } from '$lib/server/services/workspace-deletion.service';
 import { emailField, roleField, workspaceNameField } from '$lib/forms/auth.schema';
 import { fieldErrors, keepValues } from '$lib/forms/errors';
-import { NUL_MESSAGE, withoutNul } from '$lib/forms/storable';
+import { storableText, UNSTORABLE } from '$lib/forms/storable';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load = (async (event) => {
@@ -40,7 +40,7 @@ export const load = (async (event) => {
 }) satisfies PageServerLoad;
 
 const inviteSchema = z.object({ email: emailField, role: roleField });
-const userIdField = z.string().min(1).max(100).refine(withoutNul, NUL_MESSAGE);
+const userIdField = z.string().min(1).max(100).refine(storableText, UNSTORABLE);
 const roleSchema = z.object({ userId: userIdField, role: roleField });
 const userSchema = z.object({ userId: userIdField });
 const invitationSchema = z.object({ invitationId: z.uuid() });

@@ -1,4 +1,4 @@
-import { parseRequest } from '$lib/calc';
+import { distinctBy, parseRequest } from '$lib/calc';
 import type { DeviceSpec } from '$lib/server/db/schema';
 import { numberCell } from '$lib/server/sheets/read-sheet';
 import { deviceSpecSchema } from '../device-specs';
@@ -105,11 +105,7 @@ export function rowToSpec(line: number, cell: Cell): { spec: DeviceSpec } | { er
 	if (parsed.success) return { spec: parsed.data as DeviceSpec };
 	for (const issue of parsed.error.issues)
 		fail(fieldOf(issue.path), windowPrefix(issue.path) + issue.message);
-	return {
-		errors: errors.filter(
-			(e, i) => errors.findIndex((o) => o.field === e.field && o.message === e.message) === i
-		)
-	};
+	return { errors: distinctBy(errors, (e) => `${e.field}\u0000${e.message}`) };
 }
 
 /** A stored device as sheet cells (numbers stay numbers, so a workbook can add them up). */

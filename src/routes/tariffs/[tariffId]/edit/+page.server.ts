@@ -1,7 +1,7 @@
 import { fail } from '@sveltejs/kit';
 import { requireTariffWrite } from '$lib/server/guard';
 import { tariffFormAction } from '$lib/server/tariffs/form-action';
-import { jsonField, MAX_REVISION, NUL_MESSAGE, nulPath } from '$lib/forms/storable';
+import { jsonField, MAX_REVISION, unstorableIn } from '$lib/forms/storable';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load = (async (event) => {
@@ -36,8 +36,8 @@ export const actions = {
 		// What the core's schema lets through but PostgreSQL refuses: U+0000 in a label (jsonb), and a
 		// revision past its integer column.
 		const submitted = jsonField((await event.request.clone().formData()).get('payload'));
-		const nul = nulPath(submitted);
-		if (nul !== null) return fail(400, { issues: [{ path: nul, message: NUL_MESSAGE }] });
+		const unstorable = unstorableIn(submitted);
+		if (unstorable) return fail(400, { issues: [unstorable] });
 		const revision = (submitted as { expectedRevision?: unknown } | undefined)?.expectedRevision;
 		if (Number.isInteger(revision) && Number(revision) > MAX_REVISION)
 			return fail(400, {

@@ -8,7 +8,7 @@ import {
 	MAX_EQUIPMENT_ROWS,
 	parseEquipmentSheet
 } from '$lib/server/sites/equipment-sheet/parse';
-import { NUL_MESSAGE, nulPath, revisionOf } from '$lib/forms/storable';
+import { revisionOf, unstorableIn } from '$lib/forms/storable';
 import { uploadForm } from '$lib/server/http/upload-form';
 import type { Actions, PageServerLoad, RequestEvent } from './$types';
 
@@ -80,11 +80,12 @@ export const actions = {
 			refused: sheet.errors.map((e) => ({ line: e.line, field: e.field, message: describeRowError(e) }))
 		};
 		// A spreadsheet cell can carry U+0000 (written _x0000_), which a device list cannot store.
-		const unstorable = sheet.devices.find((d) => nulPath(d.spec) !== null);
-		if (unstorable)
+		const unstorable = sheet.devices.find((d) => unstorableIn(d.spec));
+		const found = unstorable && unstorableIn(unstorable.spec);
+		if (unstorable && found)
 			return fail(400, {
 				...report,
-				errors: { sheet: `Row ${unstorable.line}, ${nulPath(unstorable.spec)}: ${NUL_MESSAGE}` }
+				errors: { sheet: `Row ${unstorable.line}, ${found.path}: ${found.message}` }
 			});
 		if (intent === 'check') return report;
 		if (sheet.devices.length === 0)
