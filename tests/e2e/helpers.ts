@@ -76,3 +76,12 @@ export const inventedTariff = (utility: string, name: string) => ({
 	version: { effectiveFrom: '2026-01-01', source: 'Invented for a test', checkedOn: '2026-12-01' },
 	structure: { currency: 'USD', energyCharges: [{ label: 'Energy', type: 'flat', perKwh: 0.12 }] }
 });
+
+/** One always-on water pump as the sites API takes it (invented). */
+export const rawPump = {
+	name: 'Raceway pump',
+	category: 'water-pump',
+	quantity: 1,
+	power: { watts: 370 },
+	schedule: { type: 'always' }
+};

@@ -9,7 +9,8 @@ import {
 	latestMail,
 	linkIn,
 	signInWithPassword,
-	uniqueEmail
+	uniqueEmail,
+	rawPump
 } from './helpers';
 
 // Issue 14, items 4 and 9: a workspace's private tariff is used only by that workspace's sites, and a
@@ -52,14 +53,6 @@ const siteBody = (workspaceId: string, more: Record<string, unknown> = {}) => ({
 	...more
 });
 
-const pump = {
-	name: 'Raceway pump',
-	category: 'water-pump',
-	quantity: 1,
-	power: { watts: 370 },
-	schedule: { type: 'always' }
-};
-
 /** A site with a baseline holding one pump and a second scenario, on the public tariff. */
 async function pricedSite({ request, headers }: Caller, workspaceId: string) {
 	const made = await request.post('/api/v1/sites', {
@@ -72,7 +65,10 @@ async function pricedSite({ request, headers }: Caller, workspaceId: string) {
 	const baseline = (list.scenarios as { id: string; isBaseline: boolean }[]).find((s) => s.isBaseline)!.id;
 	const equipment = `/api/v1/scenarios/${baseline}/equipment`;
 	const start = (await (await request.get(equipment)).json()).revision as number;
-	const added = await request.post(equipment, { headers, data: { expectedRevision: start, device: pump } });
+	const added = await request.post(equipment, {
+		headers,
+		data: { expectedRevision: start, device: rawPump }
+	});
 	expect(added.status()).toBe(201);
 	const other = await request.post(`/api/v1/sites/${siteId}/scenarios`, {
 		headers,

@@ -1,20 +1,13 @@
 import { expect, test, type APIRequestContext, type Browser, type Page } from '@playwright/test';
 import { readFileSync } from 'node:fs';
-import { DEMO_WS, signInWithPassword } from './helpers';
+import { DEMO_WS, signInWithPassword, rawPump } from './helpers';
 
 // Every test works on a site of its own, made through the API, so the demo sites stay as other tests see them.
 const publicTariff = (
 	JSON.parse(readFileSync('data/demo-tariffs.json', 'utf8')) as { tariffs: { id: string }[] }
 ).tariffs[0]!.id;
 
-const pump = {
-	name: 'Raceway pump',
-	category: 'water-pump',
-	quantity: 1,
-	power: { watts: 370 },
-	schedule: { type: 'always' }
-};
-const airPump = { ...pump, name: 'Air pump', category: 'air-pump', power: { watts: 60 } };
+const airPump = { ...rawPump, name: 'Air pump', category: 'air-pump', power: { watts: 60 } };
 
 type Api = { request: APIRequestContext; headers: { origin: string } };
 
@@ -59,7 +52,10 @@ test.describe('the site API', () => {
 		const { equipment } = await freshSite(editor);
 		const start = (await (await request.get(equipment)).json()).revision as number;
 
-		const first = await request.post(equipment, { headers, data: { expectedRevision: start, device: pump } });
+		const first = await request.post(equipment, {
+			headers,
+			data: { expectedRevision: start, device: rawPump }
+		});
 		expect(first.status()).toBe(201);
 		expect(await first.json()).toEqual({ revision: start + 1, position: 0 });
 		const ahead = await request.post(equipment, {
@@ -73,9 +69,9 @@ test.describe('the site API', () => {
 		const one = await request.get(`${equipment}/1`);
 		expect(one.status()).toBe(200);
 		expect(one.headers()['cache-control']).toBe('private, no-store');
-		expect(await one.json()).toMatchObject({ revision: start + 2, position: 1, device: pump });
+		expect(await one.json()).toMatchObject({ revision: start + 2, position: 1, device: rawPump });
 
-		const bigger = { ...pump, power: { watts: 550 } };
+		const bigger = { ...rawPump, power: { watts: 550 } };
 		const stale = await request.put(`${equipment}/1`, {
 			headers,
 			data: { expectedRevision: start, device: bigger }
@@ -108,7 +104,7 @@ test.describe('the site API', () => {
 		const { request, headers } = editor;
 		const { equipment } = await freshSite(editor);
 		const revision = (await (await request.get(equipment)).json()).revision as number;
-		await request.post(equipment, { headers, data: { expectedRevision: revision, device: pump } });
+		await request.post(equipment, { headers, data: { expectedRevision: revision, device: rawPump } });
 
 		expect((await request.get(`${equipment}/1`)).status()).toBe(404);
 		expect((await request.get(`${equipment}/first`)).status()).toBe(404);
@@ -138,13 +134,13 @@ test.describe('the site API', () => {
 		const { request, headers } = editor;
 		const { equipment } = await freshSite(editor);
 		const revision = (await (await request.get(equipment)).json()).revision as number;
-		await request.post(equipment, { headers, data: { expectedRevision: revision, device: pump } });
+		await request.post(equipment, { headers, data: { expectedRevision: revision, device: rawPump } });
 		await request.post(equipment, { headers, data: { expectedRevision: revision + 1, device: airPump } });
 
 		// Inserted ahead of the device it clashes with: the issue is still on the new one.
 		const twin = await request.post(equipment, {
 			headers,
-			data: { expectedRevision: revision + 2, device: { ...pump, name: ' raceway PUMP' }, position: 0 }
+			data: { expectedRevision: revision + 2, device: { ...rawPump, name: ' raceway PUMP' }, position: 0 }
 		});
 		expect(twin.status()).toBe(400);
 		const body = await twin.json();
@@ -160,7 +156,7 @@ test.describe('the site API', () => {
 
 		const negative = await request.post(equipment, {
 			headers,
-			data: { expectedRevision: revision + 2, device: { ...pump, name: 'Spare', power: { watts: -5 } } }
+			data: { expectedRevision: revision + 2, device: { ...rawPump, name: 'Spare', power: { watts: -5 } } }
 		});
 		expect(negative.status()).toBe(400);
 		expect(paths(await negative.json())).toContain('device.power.watts');
@@ -177,7 +173,7 @@ test.describe('the site API', () => {
 		const revision = (await (await editor.request.get(equipment)).json()).revision as number;
 		await editor.request.post(equipment, {
 			headers: editor.headers,
-			data: { expectedRevision: revision, device: pump }
+			data: { expectedRevision: revision, device: rawPump }
 		});
 		const site = `/api/v1/sites/${siteId}`;
 		const scenario = `/api/v1/scenarios/${scenarioId}`;

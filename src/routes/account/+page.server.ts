@@ -1,7 +1,6 @@
-import { fail, type RequestEvent } from '@sveltejs/kit';
+import { fail } from '@sveltejs/kit';
 import { requireUser } from '$lib/server/guard';
-import { signOut } from '$lib/server/auth';
-import { forwardedHeaders } from '$lib/server/auth/hand-over';
+import { handOverSignOut } from '$lib/server/auth/hand-over';
 import { revokeAllSessions } from '$lib/server/auth/sessions';
 import { deleteAccount } from '$lib/server/services/account-deletion.service';
 import { keepValues } from '$lib/forms/errors';
@@ -9,20 +8,6 @@ import type { Actions, PageServerLoad } from './$types';
 
 const DELETED = '/account?deleted=1';
 const SIGNED_OUT_EVERYWHERE = '/account?signedout=everywhere';
-
-/** Clears this browser's Auth.js session cookie (Auth.js also ends the session's row), then redirects. */
-async function signOutHere(event: RequestEvent, redirectTo: string) {
-	const body = new FormData();
-	body.set('redirectTo', redirectTo);
-	await signOut({
-		...event,
-		request: new Request(event.request.url, {
-			method: 'POST',
-			headers: forwardedHeaders(event.request),
-			body
-		})
-	});
-}
 
 export const load = (async (event) => {
 	// After a deletion, or after signing out everywhere, the visitor is signed out and lands here once,
@@ -44,7 +29,7 @@ export const actions = {
 	signOutEverywhere: async (event) => {
 		const user = requireUser(event);
 		await revokeAllSessions(user.id);
-		await signOutHere(event, SIGNED_OUT_EVERYWHERE);
+		await handOverSignOut(event, SIGNED_OUT_EVERYWHERE);
 	},
 
 	delete: async (event) => {
@@ -67,6 +52,6 @@ export const actions = {
 					form: `You are the last owner of ${result.blockers.join(', ')}, which other people use. Make one of them owner, or delete the workspace, first.`
 				}
 			});
-		await signOutHere(event, DELETED);
+		await handOverSignOut(event, DELETED);
 	}
 } satisfies Actions;

@@ -1,6 +1,5 @@
 import { redirect } from '@sveltejs/kit';
-import { signOut } from '$lib/server/auth';
-import { forwardedHeaders } from '$lib/server/auth/hand-over';
+import { handOverSignOut } from '$lib/server/auth/hand-over';
 import { revokeSession } from '$lib/server/auth/sessions';
 import type { Actions, PageServerLoad } from './$types';
 
@@ -10,15 +9,6 @@ export const actions = {
 	default: async (event) => {
 		// Auth.js's signOut event ends the session's row too; this holds even if the cookie cannot be read back.
 		if (event.locals.sessionId) await revokeSession(event.locals.sessionId);
-		const body = new FormData();
-		body.set('redirectTo', '/');
-		await signOut({
-			...event,
-			request: new Request(event.request.url, {
-				method: 'POST',
-				headers: forwardedHeaders(event.request),
-				body
-			})
-		});
+		await handOverSignOut(event, '/');
 	}
 } satisfies Actions;

@@ -1,6 +1,6 @@
 import { isRedirect, type RequestEvent } from '@sveltejs/kit';
 import { safeNext } from '$lib/safe-next';
-import { signIn } from './index';
+import { signIn, signOut } from './index';
 
 /** The browser's headers (cookies, host) without the body's type and length, which belong to the new body. */
 export function forwardedHeaders(request: Request): Headers {
@@ -36,4 +36,17 @@ export async function handOver(
 		throw error;
 	}
 	return true;
+}
+
+/** Clears this browser's Auth.js session cookie (Auth.js's signOut event also ends the session's row),
+ * then Auth.js throws its redirect to `redirectTo`. */
+export async function handOverSignOut(event: RequestEvent, redirectTo: string) {
+	const body = new FormData();
+	body.set('redirectTo', redirectTo);
+	const request = new Request(event.request.url, {
+		method: 'POST',
+		headers: forwardedHeaders(event.request),
+		body
+	});
+	await signOut({ ...event, request });
 }
