@@ -6,7 +6,7 @@
 //   PROBE_URL=http://127.0.0.1:4173 MAIL_VIEW_URL=http://127.0.0.1:3025 node scripts/probe-accounts.mjs
 import { readFileSync } from 'node:fs';
 
-const base = new URL(process.env.PROBE_URL ?? 'http://127.0.0.1:4173');
+const base = new URL(process.env.PROBE_URL ?? 'http://127.0.0.1:3000');
 const mailView = new URL(process.env.MAIL_VIEW_URL ?? 'http://127.0.0.1:3025');
 for (const url of [base, mailView])
 	if (url.hostname !== '127.0.0.1') throw new Error(`${url}: this probe only talks to 127.0.0.1`);

@@ -2,13 +2,13 @@
 // demo data, and prints each as closed or OPEN. Sends only to 127.0.0.1.
 //
 //   node scripts/probe-auth.mjs            # the app of `npm start` (port 3000, e-mail view on 3025)
-//   APP_URL=http://127.0.0.1:4173 MAIL_VIEW_URL=http://127.0.0.1:3025 node scripts/probe-auth.mjs
+//   PROBE_URL=http://127.0.0.1:4173 MAIL_VIEW_URL=http://127.0.0.1:3025 node scripts/probe-auth.mjs
 //
 // It sends one wrong password for the demo viewer (nine more in 15 minutes would lock that address), signs
 // in as the viewer and asks Auth.js for sign-in e-mails to an invented address.
 import { request as httpRequest } from 'node:http';
 
-const app = new URL(process.env.APP_URL ?? 'http://127.0.0.1:3000');
+const app = new URL(process.env.PROBE_URL ?? 'http://127.0.0.1:3000');
 const mailView = process.env.MAIL_VIEW_URL ?? 'http://127.0.0.1:3025';
 if (app.hostname !== '127.0.0.1' || new URL(mailView).hostname !== '127.0.0.1')
 	throw new Error('This probe only talks to 127.0.0.1.');

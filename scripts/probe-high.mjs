@@ -1,5 +1,6 @@
-// `npm run probe`: repeats the three high-severity attacks of the outside probe against a running Runrate
-// (`npm start`) and says, for each, whether it is closed. It sends requests only to loopback addresses.
+// `npm run probe` runs this and the other probe-* scripts in turn against a running Runrate (`npm start`).
+// This one repeats the three high-severity attacks of the outside probe and says, for each, whether it is
+// closed. It sends requests only to loopback addresses.
 //
 //   node scripts/probe-high.mjs [--base http://127.0.0.1:3000] [--mail http://127.0.0.1:3025]
 //
@@ -23,7 +24,7 @@ const args = Object.fromEntries(
 		.filter(Boolean)
 		.map((pair) => pair.trim().split(/\s+/))
 );
-const BASE = args.base ?? process.env.PROBE_BASE ?? 'http://127.0.0.1:3000';
+const BASE = args.base ?? process.env.PROBE_URL ?? 'http://127.0.0.1:3000';
 const MAIL = args.mail ?? process.env.MAIL_VIEW_URL ?? 'http://127.0.0.1:3025';
 
 for (const url of [BASE, MAIL]) {

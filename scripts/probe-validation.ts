@@ -4,7 +4,7 @@
 // 127.0.0.1 / localhost; the bodies are invented.
 import { probeCalculateBody, probeCalculateBodyOf } from '../tests/hostile-bodies';
 
-const base = new URL(process.argv[2] ?? 'http://127.0.0.1:4173');
+const base = new URL(process.argv[2] ?? process.env.PROBE_URL ?? 'http://127.0.0.1:3000');
 if (!['127.0.0.1', 'localhost', '[::1]'].includes(base.hostname)) {
 	console.error(`Refusing to probe ${base.host}: loopback only.`);
 	process.exit(2);
