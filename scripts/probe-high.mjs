@@ -117,6 +117,13 @@ async function waitForMail(to, subject, count = 1) {
 	throw new Error(`no e-mail "${subject}" reached ${to}`);
 }
 
+/** Signs up through the form; the sign-up limit (20 an hour from one address) stops the probe with a word. */
+async function signUp(browser, fields) {
+	const status = await browser.action('/signup', fields);
+	if (status === 429)
+		throw new Error('sign-up is rate limited from this address (20 an hour): restart npm start or wait');
+}
+
 const linkIn = (text) => text.match(/https?:\/\/\S+/)?.[0];
 
 // ---------------------------------------------------------------------------------------------------
@@ -180,7 +187,7 @@ async function probeFreeze() {
 async function confirmedAccount(tag, password) {
 	const email = unique(tag);
 	const owner = new Browser();
-	await owner.action('/signup', { name: 'Probe Person', email, password, confirm: password });
+	await signUp(owner, { name: 'Probe Person', email, password, confirm: password });
 	const mail = await waitForMail(email, /confirm/i);
 	// The confirmation link confirms only together with the password chosen at sign-up.
 	const token = new URL(linkIn(mail.text)).searchParams.get('token') ?? '';
@@ -237,7 +244,7 @@ async function probeLockBypass() {
 // 3. Account pre-hijack
 
 async function attackerSignsUp(email, password) {
-	await new Browser().action('/signup', { name: 'Not The Owner', email, password, confirm: password });
+	await signUp(new Browser(), { name: 'Not The Owner', email, password, confirm: password });
 }
 
 async function attackerCanSignIn(email, password) {
