@@ -13,6 +13,8 @@ export default defineConfig({
 					name: 'unit',
 					environment: 'node',
 					include: ['src/**/*.test.ts'],
+					// CI is a busy 2-core machine: worker threads and big fixtures can take seconds to start.
+					testTimeout: 20_000,
 					env: { TZ: 'UTC' }
 				}
 			},
