@@ -254,8 +254,12 @@ test.describe('phone layout at 390 × 844', () => {
 		await expect(page.getByRole('heading', { name: 'Side by side' })).toBeVisible();
 		await expect(page.getByText('Swipe the table sideways to see every scenario.')).toBeVisible();
 		await expectWholeFigures(page);
-		const region = page.getByRole('region', { name: 'The scenarios side by side' });
-		const cut = await region.evaluate((box) => {
+		const table = page.locator('table', {
+			has: page.locator('caption', { hasText: 'The scenarios compared' })
+		});
+		const cut = await table.evaluate((element) => {
+			// The table's scroll box: what shows of the table on the screen.
+			const box = element.parentElement!;
 			const right = box.getBoundingClientRect().right;
 			// The first figure column is the baseline's.
 			return [...box.querySelectorAll('tbody tr')]
@@ -269,6 +273,7 @@ test.describe('phone layout at 390 × 844', () => {
 				.map((cell) => cell!.textContent?.trim());
 		});
 		expect(cut).toEqual([]);
+		await expect(page.getByRole('region', { name: 'The scenarios side by side' })).toBeVisible();
 		for (const name of ['Download the workbook (.xlsx)', 'Table as CSV', 'Months as CSV', 'Printable report'])
 			await expectTappable(page.getByRole('link', { name }));
 		await expectNoCollidingLabels(page);
