@@ -120,8 +120,4 @@ export function stackExtent(stacks: ReadonlyArray<ScenarioStack<string>>): [numb
 	return [Math.min(0, ...ends), Math.max(0, ...ends)];
 }
 
-/** Every `n`th value, so that at most `max` ticks are named (the first always is). */
-export function thinTicks<T>(values: readonly T[], max: number): T[] {
-	const step = Math.max(1, Math.ceil(values.length / Math.max(1, max)));
-	return values.filter((_, index) => index % step === 0);
-}
+export { thinTicks } from '../chart-ticks';
