@@ -21,7 +21,7 @@ export async function signInWithPassword(page: Page, email: string, password = D
 	await page.getByLabel('Password', { exact: true }).fill(password);
 	await page.getByRole('button', { name: 'Sign in', exact: true }).click();
 	// At phone width "Sign out" sits in the closed Menu: signed in means the button is there, shown or not.
-	await expect(page.getByRole('button', { name: 'Sign out', includeHidden: true })).toBeAttached();
+	await expect(page.getByRole('button', { name: 'Sign out', includeHidden: true }).first()).toBeAttached();
 	// The server renders the signed-in page before its scripts run: wait for hydration, so the next
 	// click reaches an enhanced form on a busy machine too.
 	await expect(page.locator('body[data-hydrated="true"]')).toBeAttached();
