@@ -1,4 +1,4 @@
-import { and, desc, eq, gt, isNull, sql } from 'drizzle-orm';
+import { and, desc, eq, gt, isNotNull, isNull, sql } from 'drizzle-orm';
 import { db } from '../db';
 import { userTokens, users } from '../db/schema';
 import { hashPassword, verifyPassword } from '../auth/password';
@@ -137,6 +137,15 @@ async function pendingSignUp(where: ReturnType<typeof and>) {
 }
 
 /** The address an open confirmation link is for, or null when it is unknown, used or expired. */
+/** Whether a confirmed account owns this address. An unconfirmed sign-up may be anyone's, so it owns nothing. */
+export async function hasConfirmedAccount(email: string): Promise<boolean> {
+	const [row] = await db
+		.select({ id: users.id })
+		.from(users)
+		.where(and(eq(users.email, email), isNotNull(users.emailVerified)));
+	return !!row;
+}
+
 export async function confirmationFor(token: string): Promise<string | null> {
 	return (await pendingSignUp(openToken(token, 'verify-email')))?.email ?? null;
 }

@@ -1,10 +1,8 @@
 import { error, fail, redirect } from '@sveltejs/kit';
-import { and, eq, isNotNull } from 'drizzle-orm';
 import { z } from 'zod';
 import { handOver } from '$lib/server/auth/hand-over';
-import { db } from '$lib/server/db';
-import { users } from '$lib/server/db/schema';
 import { requireUser } from '$lib/server/guard';
+import { hasConfirmedAccount } from '$lib/server/services/account.service';
 import { signUpLimiter, TOO_MANY } from '$lib/server/rate-limit';
 import {
 	acceptInvitation,
@@ -25,11 +23,6 @@ async function openInvitation(token: string) {
 export const load = (async ({ params, locals }) => {
 	const invitation = await openInvitation(params.token);
 	if (!invitation) return { invitation: null, hasAccount: false };
-	// Only a confirmed account owns the address; an unconfirmed sign-up may be anyone's (account.service.ts).
-	const [existing] = await db
-		.select({ id: users.id })
-		.from(users)
-		.where(and(eq(users.email, invitation.email), isNotNull(users.emailVerified)));
 	return {
 		invitation: {
 			email: invitation.email,
@@ -38,7 +31,8 @@ export const load = (async ({ params, locals }) => {
 			workspaceName: invitation.siteName ?? invitation.workspaceName,
 			siteOnly: !!invitation.siteId
 		},
-		hasAccount: !!existing,
+		// Only a confirmed account owns the address (account.service.ts).
+		hasAccount: await hasConfirmedAccount(invitation.email),
 		signedInAs: locals.user?.email ?? null
 	};
 }) satisfies PageServerLoad;
