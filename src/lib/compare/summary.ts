@@ -1,3 +1,4 @@
+import { figure, moneyWhole } from '$lib/text/numbers';
 import type { ComparisonReport } from './types';
 
 /**
@@ -5,13 +6,9 @@ import type { ComparisonReport } from './types';
  * what it saves a year, when the extra purchase pays back and what it comes to over the horizon.
  * Amounts are rounded to whole currency units ("about"); the tables hold the cents.
  */
-export function money(amount: number, currency: string): string {
-	return new Intl.NumberFormat('en-US', { style: 'currency', currency, maximumFractionDigits: 0 }).format(
-		amount
-	);
-}
+export const money = moneyWhole;
 
-const whole = (n: number) => new Intl.NumberFormat('en-US', { maximumFractionDigits: 0 }).format(n);
+const whole = (n: number) => figure(n, 0);
 
 function paybackWords(years: number): string {
 	if (years === 0) return 'pays back at once, as it costs no more to buy';

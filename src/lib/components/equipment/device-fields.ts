@@ -1,5 +1,6 @@
 import { MONTH_NAMES } from '$lib/calc/months';
 import type { EQUIPMENT_CATEGORIES, EquipmentInput } from '$lib/calc/equipment.schema';
+import { figure } from '$lib/text/numbers';
 
 export type PowerInput = EquipmentInput['power'];
 export type PowerForm = 'watts' | 'amps';
@@ -40,18 +41,8 @@ export function typedWatts(power: unknown): number | undefined {
 	return (p.phases === 3 ? Math.sqrt(3) : 1) * volts * amps * powerFactor;
 }
 
-// One formatter per precision: toLocaleString builds a new one on every call, too slow for 500 rows.
-const FORMATS = new Map<number, Intl.NumberFormat>();
-
-/** A figure with up to `digits` decimals and thousands separators: 3187.3 → "3,187". */
-export function figure(value: number, digits: number): string {
-	let format = FORMATS.get(digits);
-	if (!format) {
-		format = new Intl.NumberFormat('en-US', { maximumFractionDigits: digits });
-		FORMATS.set(digits, format);
-	}
-	return format.format(value);
-}
+/** A figure with up to `digits` decimals and thousands separators (one cached formatter per precision). */
+export { figure };
 
 /**
  * The other form of a power, as it is computed: "≈ 108 W" beside amps × volts, "0.83 A at 120 V"

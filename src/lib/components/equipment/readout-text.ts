@@ -1,3 +1,4 @@
+import { money } from '$lib/text/numbers';
 import { MONTH_NAMES, figure, powerForm, powerEcho } from './device-fields';
 
 // Words and figures for a device as a viewer sees it, and for the live share of each row.
@@ -9,12 +10,7 @@ export function kwhText(kwh: number): string {
 
 /** A money formatter for a currency code; a code the browser does not know falls back to plain figures. */
 export function moneyFormat(currency: string): (amount: number) => string {
-	try {
-		const format = new Intl.NumberFormat('en-US', { style: 'currency', currency });
-		return (amount) => format.format(amount);
-	} catch {
-		return (amount) => `${figure(amount, 2)} ${currency}`;
-	}
+	return (amount) => money(amount, currency);
 }
 
 /** A power as it was entered: "100 W", or "0.9 A × 120 V, power factor 0.8, three phase". */
