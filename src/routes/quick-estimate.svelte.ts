@@ -1,46 +1,44 @@
 import type { CalculateResponse } from '$lib/calc';
+import { LatestRequest, RequestFailed } from '$lib/client/latest-request.svelte';
 import type { Issue } from './quick-estimate';
 
 /** Debounced, cancelling fetch of /api/v1/calculate: a newer edit aborts the request still in flight. */
 export class QuickEstimate {
-	result = $state<CalculateResponse | null>(null);
 	issues = $state<Issue[]>([]);
-	failure = $state<string | null>(null);
-	busy = $state(false);
-	#controller: AbortController | null = null;
-	#timer: ReturnType<typeof setTimeout> | null = null;
-
-	request(body: unknown, delayMs = 250) {
-		if (this.#timer) clearTimeout(this.#timer);
-		this.#timer = setTimeout(() => void this.#send(body), delayMs);
-	}
-
-	async #send(body: unknown) {
-		this.#controller?.abort();
-		const controller = (this.#controller = new AbortController());
-		this.busy = true;
-		try {
+	#latest = new LatestRequest<unknown, CalculateResponse>({
+		delayMs: 250,
+		noAnswer: 'No answer from the server. Check the connection.',
+		send: async (body, signal) => {
 			const res = await fetch('/api/v1/calculate', {
 				method: 'POST',
 				headers: { 'content-type': 'application/json' },
 				body: JSON.stringify(body),
-				signal: controller.signal
+				signal
 			});
 			const data = await res.json();
-			if (res.ok) {
-				this.result = data;
-				this.issues = [];
-				this.failure = null;
-			} else {
-				this.issues = data.issues ?? [];
-				this.failure = data.issues?.length ? null : (data.message ?? `The estimate failed (${res.status}).`);
-			}
-		} catch (error) {
-			if ((error as Error).name !== 'AbortError')
-				this.failure = 'No answer from the server. Check the connection.';
-		} finally {
-			if (this.#controller === controller) this.busy = false;
+			this.issues = res.ok ? [] : (data.issues ?? []);
+			if (res.ok) return data;
+			throw new RequestFailed(
+				data.issues?.length ? null : (data.message ?? `The estimate failed (${res.status}).`)
+			);
 		}
+	});
+
+	/** The last estimate the server gave; kept while a newer edit has field issues. */
+	get result(): CalculateResponse | null {
+		return this.#latest.value;
+	}
+	/** Why there is no new estimate, in words; null while the field issues say it. */
+	get failure(): string | null {
+		return this.#latest.error;
+	}
+	/** True while a request is on its way. */
+	get busy(): boolean {
+		return this.#latest.pending;
+	}
+
+	request(body: unknown, delayMs = 250) {
+		this.#latest.request(body, delayMs);
 	}
 
 	/** The message for one field, by the API's dotted path. */

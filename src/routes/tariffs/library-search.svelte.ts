@@ -1,4 +1,5 @@
 import { replaceState } from '$app/navigation';
+import { LatestRequest, RequestFailed } from '$lib/client/latest-request.svelte';
 import { libraryQuery } from './library-query';
 
 export type LibraryItem = {
@@ -24,41 +25,41 @@ export type LibraryFilters = Record<
 
 /** Search-as-you-type over GET /api/v1/tariffs: debounced, a newer query cancels the one in flight. */
 export class LibrarySearch {
-	result = $state<LibraryResult>({ page: 1, pageSize: 20, total: 0, items: [] });
-	busy = $state(false);
-	failure = $state<string | null>(null);
-	#controller: AbortController | null = null;
-	#timer: ReturnType<typeof setTimeout> | null = null;
+	#latest: LatestRequest<{ filters: LibraryFilters; page: number }, LibraryResult>;
 
 	constructor(initial: LibraryResult) {
-		this.result = initial;
+		this.#latest = new LatestRequest({
+			delayMs: 200,
+			initial,
+			noAnswer: 'No answer from the server. Check the connection.',
+			send: async ({ filters, page }, signal) => {
+				const query = libraryQuery(filters, page);
+				const res = await fetch(`/api/v1/tariffs?${query}`, { signal });
+				if (!res.ok) {
+					const body = await res.json().catch(() => ({}));
+					throw new RequestFailed(body.issues?.[0]?.message ?? 'The search failed. Try again.');
+				}
+				const result: LibraryResult = await res.json();
+				replaceState(`/tariffs${query ? `?${query}` : ''}`, {});
+				return result;
+			}
+		});
+	}
+
+	/** The page of tariffs last found (the server-rendered one at first). */
+	get result(): LibraryResult {
+		return this.#latest.value ?? { page: 1, pageSize: 20, total: 0, items: [] };
+	}
+	/** True while a search is on its way. */
+	get busy(): boolean {
+		return this.#latest.pending;
+	}
+	/** Why the last search found nothing, in words. */
+	get failure(): string | null {
+		return this.#latest.error;
 	}
 
 	search(filters: LibraryFilters, page = 1, delayMs = 200) {
-		if (this.#timer) clearTimeout(this.#timer);
-		this.#timer = setTimeout(() => void this.#fetch(filters, page), delayMs);
-	}
-
-	async #fetch(filters: LibraryFilters, page: number) {
-		this.#controller?.abort();
-		const controller = (this.#controller = new AbortController());
-		const query = libraryQuery(filters, page);
-		this.busy = true;
-		try {
-			const res = await fetch(`/api/v1/tariffs?${query}`, { signal: controller.signal });
-			if (!res.ok) {
-				const body = await res.json().catch(() => ({}));
-				this.failure = body.issues?.[0]?.message ?? 'The search failed. Try again.';
-				return;
-			}
-			this.result = await res.json();
-			this.failure = null;
-			replaceState(`/tariffs${query ? `?${query}` : ''}`, {});
-		} catch (error) {
-			if ((error as Error).name !== 'AbortError')
-				this.failure = 'No answer from the server. Check the connection.';
-		} finally {
-			if (this.#controller === controller) this.busy = false;
-		}
+		this.#latest.request({ filters, page }, delayMs);
 	}
 }

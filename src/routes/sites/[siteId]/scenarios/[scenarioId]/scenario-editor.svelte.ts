@@ -1,5 +1,6 @@
 import type { CalculateResponse } from '$lib/calc/types';
 import type { DeviceSpec } from '$lib/components/equipment/equipment-table';
+import { LatestRequest, RequestFailed } from '$lib/client/latest-request.svelte';
 
 export type Row = { key: string; spec: DeviceSpec };
 type Issue = { path: string; message: string };
@@ -14,15 +15,15 @@ export class ScenarioEditor {
 	rows = $state<Row[]>([]);
 	revision = $state(0);
 	saved = $state('');
-	result = $state<Priced | null>(null);
-	resultProblem = $state<string | null>(null);
 	issues = $state<Issue[]>([]);
 	saveMessage = $state<{ tone: 'ok' | 'error'; text: string } | null>(null);
 	saving = $state(false);
-	calculating = $state(false);
 	elapsedMs = $state<number | null>(null);
-	#controller: AbortController | null = null;
-	#timer: ReturnType<typeof setTimeout> | null = null;
+	#pricing = new LatestRequest<DeviceSpec[], Priced>({
+		delayMs: 250,
+		noAnswer: 'No answer from the server. Check the connection.',
+		send: (devices, signal) => this.#price(devices, signal)
+	});
 
 	constructor(
 		readonly scenarioId: string,
@@ -42,45 +43,41 @@ export class ScenarioEditor {
 		return JSON.stringify(this.specs) !== this.saved;
 	}
 
-	recalculate(delayMs = 250) {
-		if (this.#timer) clearTimeout(this.#timer);
-		const devices = this.specs;
-		this.#timer = setTimeout(() => void this.#price(devices), delayMs);
+	/** The live results for the rows as they were at the last recalculation. */
+	get result(): Priced | null {
+		return this.#pricing.value;
+	}
+	/** Why there are no new results, in words. */
+	get resultProblem(): string | null {
+		return this.#pricing.error;
+	}
+	/** True while results are on their way. */
+	get calculating(): boolean {
+		return this.#pricing.pending;
 	}
 
-	async #price(devices: DeviceSpec[]) {
-		this.#controller?.abort();
-		const controller = (this.#controller = new AbortController());
-		this.calculating = true;
+	recalculate(delayMs = 250) {
+		this.#pricing.request(this.specs, delayMs);
+	}
+
+	async #price(devices: DeviceSpec[], signal: AbortSignal): Promise<Priced> {
 		const started = performance.now();
-		try {
-			const res = await fetch(`/api/v1/scenarios/${this.scenarioId}/results`, {
-				method: 'POST',
-				headers: { 'content-type': 'application/json' },
-				body: JSON.stringify({ devices }),
-				signal: controller.signal
-			});
-			const body = await res.json();
-			if (res.ok) {
-				this.result = body;
-				this.resultProblem = null;
-				this.issues = [];
-				this.elapsedMs = Math.round(performance.now() - started);
-			} else {
-				this.issues = (body.issues ?? []).map((i: Issue) => ({
-					...i,
-					path: i.path.replace(/^devices\./, '')
-				}));
-				this.resultProblem = body.issues?.length
-					? 'Fix the highlighted fields to see the results.'
-					: body.message;
-			}
-		} catch (error) {
-			if ((error as Error).name !== 'AbortError')
-				this.resultProblem = 'No answer from the server. Check the connection.';
-		} finally {
-			if (this.#controller === controller) this.calculating = false;
+		const res = await fetch(`/api/v1/scenarios/${this.scenarioId}/results`, {
+			method: 'POST',
+			headers: { 'content-type': 'application/json' },
+			body: JSON.stringify({ devices }),
+			signal
+		});
+		const body = await res.json();
+		if (!res.ok) {
+			this.issues = withoutDevicesPrefix(body.issues);
+			throw new RequestFailed(
+				body.issues?.length ? 'Fix the highlighted fields to see the results.' : (body.message ?? null)
+			);
 		}
+		this.issues = [];
+		this.elapsedMs = Math.round(performance.now() - started);
+		return body;
 	}
 
 	async save() {
@@ -104,10 +101,7 @@ export class ScenarioEditor {
 					text: 'Someone else saved this scenario while you were editing. Your changes are still here and not saved: copy what you need, reload to see theirs, then make your change again.'
 				};
 			} else {
-				this.issues = (body.issues ?? []).map((i: Issue) => ({
-					...i,
-					path: i.path.replace(/^devices\./, '')
-				}));
+				this.issues = withoutDevicesPrefix(body.issues);
 				this.saveMessage = { tone: 'error', text: body.message ?? 'The list could not be saved.' };
 			}
 		} catch {
@@ -119,4 +113,9 @@ export class ScenarioEditor {
 			this.saving = false;
 		}
 	}
+}
+
+/** The API's field paths start at the request body ("devices.2.watts"); the editor's at the rows. */
+function withoutDevicesPrefix(issues: Issue[] | undefined): Issue[] {
+	return (issues ?? []).map((i) => ({ ...i, path: i.path.replace(/^devices\./, '') }));
 }
