@@ -14,7 +14,13 @@ function fakeServer() {
 			signal.addEventListener('abort', () => reject(new DOMException('aborted', 'AbortError')));
 			calls.push({ input, signal, answer: resolve, fail: reject });
 		});
-	return { calls, send };
+	/** The nth request sent; fails the test when there is none. */
+	const call = (n: number) => {
+		const found = calls[n];
+		if (!found) throw new Error(`no request ${n} was sent`);
+		return found;
+	};
+	return { calls, call, send };
 }
 
 const flush = () => new Promise<void>((resolve) => queueMicrotask(resolve)).then(() => Promise.resolve());
@@ -34,7 +40,7 @@ describe('LatestRequest', () => {
 		vi.advanceTimersByTime(1);
 		expect(server.calls.map((c) => c.input)).toEqual(['ab']);
 		expect(latest.pending).toBe(true);
-		server.calls[0].answer('AB');
+		server.call(0).answer('AB');
 		await flush();
 		expect(latest.value).toBe('AB');
 		expect(latest.error).toBeNull();
@@ -48,8 +54,8 @@ describe('LatestRequest', () => {
 		vi.advanceTimersByTime(100);
 		latest.request('new');
 		vi.advanceTimersByTime(100);
-		expect(server.calls[0].signal.aborted).toBe(true);
-		server.calls[1].answer('NEW');
+		expect(server.call(0).signal.aborted).toBe(true);
+		server.call(1).answer('NEW');
 		await flush();
 		expect(latest.value).toBe('NEW');
 		expect(latest.error).toBeNull();
@@ -65,12 +71,12 @@ describe('LatestRequest', () => {
 			initial: 'first'
 		});
 		latest.request('x');
-		server.calls[0].fail(new RequestFailed('The search failed.'));
+		server.call(0).fail(new RequestFailed('The search failed.'));
 		await flush();
 		expect(latest.error).toBe('The search failed.');
 		expect(latest.value).toBe('first');
 		latest.request('y');
-		server.calls[1].fail(new TypeError('Failed to fetch'));
+		server.call(1).fail(new TypeError('Failed to fetch'));
 		await flush();
 		expect(latest.error).toBe('No answer.');
 		expect(latest.pending).toBe(false);
@@ -99,7 +105,7 @@ describe('LatestRequest', () => {
 		vi.advanceTimersByTime(100);
 		await flush();
 		expect(server.calls).toHaveLength(1);
-		expect(server.calls[0].signal.aborted).toBe(true);
+		expect(server.call(0).signal.aborted).toBe(true);
 		expect(latest.value).toBe('shown');
 		expect(latest.error).toBeNull();
 		expect(latest.pending).toBe(true);
@@ -116,7 +122,7 @@ describe('LatestRequest', () => {
 		latest.request('a');
 		latest.clear();
 		await flush();
-		expect(server.calls[0].signal.aborted).toBe(true);
+		expect(server.call(0).signal.aborted).toBe(true);
 		expect(latest.value).toBeNull();
 		expect(latest.error).toBeNull();
 		expect(latest.pending).toBe(false);
