@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { tariffSchema, type TariffInput } from '$lib/calc/tariff.schema';
-import { describeTariff } from './tariff-words';
+import { describeTariff } from './tariff-summary';
 
 // Invented tariffs for these tests only (no real utility or rate). The expected sentences are the
 // wording Runrate's tariff page promises (the tariff-page brief; common practice, no source).

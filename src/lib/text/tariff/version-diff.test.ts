@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { TariffInput } from '$lib/calc/tariff.schema';
-import { describeTariffDiff } from './tariff-words';
+import { describeTariffDiff } from './version-diff';
 
 // Invented versions of an invented tariff; the expected lines are the wording the version history
 // promises (the tariff-page brief; common practice, no source).
