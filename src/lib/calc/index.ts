@@ -67,5 +67,5 @@ export { MONTH_ABBREVIATIONS, MONTH_NAMES } from './months';
 export { billingSpans } from './periods';
 export { RateBook } from './rates';
 export { dayProfile } from './schedule';
-export { NUL_MESSAGE, storableText, unstorableMessage } from './storable-text';
+export { NUL_MESSAGE, storableText, SURROGATE_MESSAGE, UNSTORABLE, unstorableMessage } from './storable-text';
 export { METERS_PER_FOOT, STANDARD_GRAVITY_M_PER_S2 } from './units';
