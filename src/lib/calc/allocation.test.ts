@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { device, onlyPeriod } from './fixtures';
+import { device, onlyPeriod } from './requests.fixture';
 import type { TariffInput } from './tariff.schema';
 import type { PeriodResult } from './types';
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { type ScheduleInput, device, flatTariff, line, onlyPeriod } from './fixtures';
+import { type ScheduleInput, device, flatTariff, line, onlyPeriod } from './requests.fixture';
 import type { TariffInput } from './tariff.schema';
 
 const kilowatt = (schedule: ScheduleInput, more: object = {}) =>

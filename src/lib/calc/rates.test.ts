@@ -1,7 +1,7 @@
 import Holidays from 'date-holidays';
 import { describe, expect, it } from 'vitest';
 import { dayNumber, isWeekend } from './dates';
-import { type ScheduleInput, device, line, onlyPeriod } from './fixtures';
+import { type ScheduleInput, device, line, onlyPeriod } from './requests.fixture';
 import type { TariffInput } from './tariff.schema';
 
 /** Invented "Demo Valley Power" time-of-use supply: summer on-peak weekdays, a night rate past midnight. */
