@@ -1,42 +1,21 @@
-import { expect, test, type APIRequestContext, type Browser, type Page } from '@playwright/test';
-import { readFileSync } from 'node:fs';
-import { DEMO_WS, signInWithPassword, rawPump } from './helpers';
+import { expect, test } from '@playwright/test';
+import { rawPump } from './helpers';
+import {
+	type Caller,
+	PUBLIC_TARIFF as publicTariff,
+	baselineOf,
+	callerAs,
+	callerOn,
+	createSite
+} from './site-setup';
 
 // Every test works on a site of its own, made through the API, so the demo sites stay as other tests see them.
-const publicTariff = (
-	JSON.parse(readFileSync('data/demo-tariffs.json', 'utf8')) as { tariffs: { id: string }[] }
-).tariffs[0]!.id;
-
 const airPump = { ...rawPump, name: 'Air pump', category: 'air-pump', power: { watts: 60 } };
 
-type Api = { request: APIRequestContext; headers: { origin: string } };
-
-async function api(page: Page, email: string, baseURL: string): Promise<Api> {
-	await signInWithPassword(page, email);
-	return { request: page.request, headers: { origin: baseURL } };
-}
-
-async function as(browser: Browser, email: string, baseURL: string): Promise<Api> {
-	const page = await (await browser.newContext({ baseURL })).newPage();
-	return api(page, email, baseURL);
-}
-
 /** A fresh invented site and its baseline scenario, made by whoever `editor` is signed in as. */
-async function freshSite({ request, headers }: Api) {
-	const created = await request.post('/api/v1/sites', {
-		headers,
-		data: {
-			workspaceId: DEMO_WS.id,
-			name: `API test site ${Date.now()} (invented)`,
-			timezone: 'America/Chicago',
-			country: 'US',
-			currency: 'USD'
-		}
-	});
-	expect(created.status()).toBe(201);
-	const siteId = (await created.json()).id as string;
-	const list = await (await request.get(`/api/v1/sites/${siteId}/scenarios`)).json();
-	const scenarioId = (list.scenarios as { id: string; isBaseline: boolean }[]).find((s) => s.isBaseline)!.id;
+async function freshSite(editor: Caller) {
+	const siteId = await createSite(editor, 'API test site');
+	const scenarioId = await baselineOf(editor.request, siteId);
 	return { siteId, scenarioId, equipment: `/api/v1/scenarios/${scenarioId}/equipment` };
 }
 
@@ -47,7 +26,7 @@ test.describe('the site API', () => {
 		page,
 		baseURL
 	}) => {
-		const editor = await api(page, 'editor@example.org', baseURL!);
+		const editor = await callerOn(page, 'editor@example.org', baseURL!);
 		const { request, headers } = editor;
 		const { equipment } = await freshSite(editor);
 		const start = (await (await request.get(equipment)).json()).revision as number;
@@ -100,7 +79,7 @@ test.describe('the site API', () => {
 	});
 
 	test('site API: answers 404 for a position past the end of the list', async ({ page, baseURL }) => {
-		const editor = await api(page, 'editor@example.org', baseURL!);
+		const editor = await callerOn(page, 'editor@example.org', baseURL!);
 		const { request, headers } = editor;
 		const { equipment } = await freshSite(editor);
 		const revision = (await (await request.get(equipment)).json()).revision as number;
@@ -130,7 +109,7 @@ test.describe('the site API', () => {
 		page,
 		baseURL
 	}) => {
-		const editor = await api(page, 'editor@example.org', baseURL!);
+		const editor = await callerOn(page, 'editor@example.org', baseURL!);
 		const { request, headers } = editor;
 		const { equipment } = await freshSite(editor);
 		const revision = (await (await request.get(equipment)).json()).revision as number;
@@ -168,7 +147,7 @@ test.describe('the site API', () => {
 		browser,
 		baseURL
 	}) => {
-		const editor = await api(page, 'editor@example.org', baseURL!);
+		const editor = await callerOn(page, 'editor@example.org', baseURL!);
 		const { siteId, scenarioId, equipment } = await freshSite(editor);
 		const revision = (await (await editor.request.get(equipment)).json()).revision as number;
 		await editor.request.post(equipment, {
@@ -179,7 +158,7 @@ test.describe('the site API', () => {
 		const scenario = `/api/v1/scenarios/${scenarioId}`;
 		const reads = [site, scenario, equipment, `${equipment}/0`];
 
-		const writes = (who: Api) => [
+		const writes = (who: Caller) => [
 			who.request.put(site, { headers: who.headers, data: { expectedRevision: 1, name: '' } }),
 			who.request.patch(scenario, { headers: who.headers, data: { name: 'Taken over' } }),
 			who.request.delete(scenario, { headers: who.headers }),
@@ -194,11 +173,11 @@ test.describe('the site API', () => {
 			who.request.delete(`${equipment}/0?expectedRevision=${revision + 1}`, { headers: who.headers })
 		];
 
-		const viewer = await as(browser, 'viewer@example.org', baseURL!);
+		const viewer = await callerAs(browser, 'viewer@example.org', baseURL!);
 		for (const path of reads) expect((await viewer.request.get(path)).status(), path).toBe(200);
 		for (const res of await Promise.all(writes(viewer))) expect(res.status(), res.url()).toBe(403);
 
-		const outsider = await as(browser, 'grower@example.org', baseURL!);
+		const outsider = await callerAs(browser, 'grower@example.org', baseURL!);
 		for (const path of reads) {
 			const res = await outsider.request.get(path);
 			expect(res.status(), path).toBe(404);
@@ -216,7 +195,7 @@ test.describe('the site API', () => {
 		page,
 		baseURL
 	}) => {
-		const editor = await api(page, 'editor@example.org', baseURL!);
+		const editor = await callerOn(page, 'editor@example.org', baseURL!);
 		const { request, headers } = editor;
 		const { siteId } = await freshSite(editor);
 		const made = await request.post(`/api/v1/sites/${siteId}/scenarios`, {
@@ -288,7 +267,7 @@ test.describe('the site API', () => {
 	});
 
 	test('site API: site PUT answers 400 with field paths and 409 when stale', async ({ page, baseURL }) => {
-		const editor = await api(page, 'editor@example.org', baseURL!);
+		const editor = await callerOn(page, 'editor@example.org', baseURL!);
 		const { request, headers } = editor;
 		const { siteId } = await freshSite(editor);
 		const site = `/api/v1/sites/${siteId}`;
