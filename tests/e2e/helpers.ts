@@ -86,3 +86,40 @@ export const rawPump = {
 	power: { watts: 370 },
 	schedule: { type: 'always' }
 };
+
+/** Fills in and sends the sign-up form; the page then asks to confirm the address from the e-mail. */
+export async function signUp(page: Page, email: string, name: string, password: string) {
+	await gotoReady(page, '/signup');
+	await page.getByLabel('Your name').fill(name);
+	await page.getByLabel('E-mail').fill(email);
+	await page.getByLabel('Password', { exact: true }).fill(password);
+	await page.getByLabel('Password again').fill(password);
+	await page.getByRole('button', { name: 'Create account' }).click();
+	await expect(page.getByRole('heading', { name: 'Confirm your address' })).toBeVisible();
+}
+
+/** Sends the password sign-in form without waiting for an outcome (for the refusals). */
+export async function sendPasswordSignIn(page: Page, email: string, password: string) {
+	await gotoReady(page, '/signin');
+	await page.locator('#pw-email').fill(email);
+	await page.getByLabel('Password', { exact: true }).fill(password);
+	await page.getByRole('button', { name: 'Sign in', exact: true }).click();
+}
+
+/** Signs in with an e-mailed link; for a new address this also creates the (invented) account. */
+export async function signInByLink(page: Page, email: string) {
+	const after = await lastMailId();
+	await gotoReady(page, '/signin');
+	await page.locator('#link-email').fill(email);
+	await page.getByRole('button', { name: 'E-mail me a link' }).click();
+	await expect(page.getByRole('heading', { name: 'Check your e-mail' })).toBeVisible();
+	await page.goto(linkIn((await latestMail(email, /sign-in link/, after)).text));
+	await expect(page.getByRole('heading', { name: 'Your workspaces' })).toBeVisible();
+}
+
+/** Creates a workspace from the workspaces page the person is on; its page then shows its name. */
+export async function createWorkspace(page: Page, name: string) {
+	await page.getByLabel('Workspace name').fill(name);
+	await page.getByRole('button', { name: 'Create workspace' }).click();
+	await expect(page.getByRole('heading', { name })).toBeVisible();
+}

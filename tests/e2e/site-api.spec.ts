@@ -1,4 +1,4 @@
-import { expect, test } from '@playwright/test';
+import { expect, test, type APIRequestContext, type Page } from '@playwright/test';
 import { rawPump } from './helpers';
 import {
 	type Caller,
@@ -19,6 +19,16 @@ async function freshSite(editor: Caller) {
 	return { siteId, scenarioId, equipment: `/api/v1/scenarios/${scenarioId}/equipment` };
 }
 
+/** The editor, signed in on `page`, with a fresh site of their own. */
+async function editorWithSite(page: Page, baseURL: string) {
+	const editor = await callerOn(page, 'editor@example.org', baseURL);
+	return { editor, ...editor, ...(await freshSite(editor)) };
+}
+
+/** The equipment list's revision now. */
+const revisionOf = async (request: APIRequestContext, equipment: string) =>
+	(await (await request.get(equipment)).json()).revision as number;
+
 const paths = (body: { issues?: { path: string }[] }) => (body.issues ?? []).map((i) => i.path);
 
 test.describe('the site API', () => {
@@ -26,10 +36,8 @@ test.describe('the site API', () => {
 		page,
 		baseURL
 	}) => {
-		const editor = await callerOn(page, 'editor@example.org', baseURL!);
-		const { request, headers } = editor;
-		const { equipment } = await freshSite(editor);
-		const start = (await (await request.get(equipment)).json()).revision as number;
+		const { request, headers, equipment } = await editorWithSite(page, baseURL!);
+		const start = await revisionOf(request, equipment);
 
 		const first = await request.post(equipment, {
 			headers,
@@ -79,10 +87,8 @@ test.describe('the site API', () => {
 	});
 
 	test('site API: answers 404 for a position past the end of the list', async ({ page, baseURL }) => {
-		const editor = await callerOn(page, 'editor@example.org', baseURL!);
-		const { request, headers } = editor;
-		const { equipment } = await freshSite(editor);
-		const revision = (await (await request.get(equipment)).json()).revision as number;
+		const { request, headers, equipment } = await editorWithSite(page, baseURL!);
+		const revision = await revisionOf(request, equipment);
 		await request.post(equipment, { headers, data: { expectedRevision: revision, device: rawPump } });
 
 		expect((await request.get(`${equipment}/1`)).status()).toBe(404);
@@ -109,10 +115,8 @@ test.describe('the site API', () => {
 		page,
 		baseURL
 	}) => {
-		const editor = await callerOn(page, 'editor@example.org', baseURL!);
-		const { request, headers } = editor;
-		const { equipment } = await freshSite(editor);
-		const revision = (await (await request.get(equipment)).json()).revision as number;
+		const { request, headers, equipment } = await editorWithSite(page, baseURL!);
+		const revision = await revisionOf(request, equipment);
 		await request.post(equipment, { headers, data: { expectedRevision: revision, device: rawPump } });
 		await request.post(equipment, { headers, data: { expectedRevision: revision + 1, device: airPump } });
 
@@ -147,9 +151,8 @@ test.describe('the site API', () => {
 		browser,
 		baseURL
 	}) => {
-		const editor = await callerOn(page, 'editor@example.org', baseURL!);
-		const { siteId, scenarioId, equipment } = await freshSite(editor);
-		const revision = (await (await editor.request.get(equipment)).json()).revision as number;
+		const { editor, siteId, scenarioId, equipment } = await editorWithSite(page, baseURL!);
+		const revision = await revisionOf(editor.request, equipment);
 		await editor.request.post(equipment, {
 			headers: editor.headers,
 			data: { expectedRevision: revision, device: rawPump }
@@ -195,9 +198,7 @@ test.describe('the site API', () => {
 		page,
 		baseURL
 	}) => {
-		const editor = await callerOn(page, 'editor@example.org', baseURL!);
-		const { request, headers } = editor;
-		const { siteId } = await freshSite(editor);
+		const { request, headers, siteId } = await editorWithSite(page, baseURL!);
 		const made = await request.post(`/api/v1/sites/${siteId}/scenarios`, {
 			headers,
 			data: { name: 'Timer on the fountain pump' }
@@ -267,9 +268,7 @@ test.describe('the site API', () => {
 	});
 
 	test('site API: site PUT answers 400 with field paths and 409 when stale', async ({ page, baseURL }) => {
-		const editor = await callerOn(page, 'editor@example.org', baseURL!);
-		const { request, headers } = editor;
-		const { siteId } = await freshSite(editor);
+		const { request, headers, siteId } = await editorWithSite(page, baseURL!);
 		const site = `/api/v1/sites/${siteId}`;
 		const read = await request.get(site);
 		expect(read.headers()['cache-control']).toBe('private, no-store');
