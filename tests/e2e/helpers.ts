@@ -1,4 +1,4 @@
-import { expect, type Page } from '@playwright/test';
+import { expect, type Browser, type Page } from '@playwright/test';
 import { readFileSync } from 'node:fs';
 
 export const demo = JSON.parse(readFileSync('data/demo-people.json', 'utf8')) as {
@@ -122,4 +122,26 @@ export async function createWorkspace(page: Page, name: string) {
 	await page.getByLabel('Workspace name').fill(name);
 	await page.getByRole('button', { name: 'Create workspace' }).click();
 	await expect(page.getByRole('heading', { name })).toBeVisible();
+}
+
+/**
+ * Opens the site invitation e-mailed to `email` in a browser context of its own, creates the guest's
+ * account with `name` and `password`, and closes that context once the site's page shows.
+ */
+export async function acceptSiteInvitation(
+	browser: Browser,
+	baseURL: string,
+	email: string,
+	name: string,
+	password: string
+) {
+	const mail = await latestMail(email, /is shared with you/);
+	const invite = await (await browser.newContext({ baseURL })).newPage();
+	await gotoReady(invite, new URL(linkIn(mail.text)).pathname);
+	await invite.getByLabel('Your name').fill(name);
+	await invite.getByLabel('Password', { exact: true }).fill(password);
+	await invite.getByLabel('Password again').fill(password);
+	await invite.getByRole('button', { name: 'Create account and join' }).click();
+	await expect(invite.getByRole('heading', { level: 1 })).toBeVisible();
+	await invite.context().close();
 }

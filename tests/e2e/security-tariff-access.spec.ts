@@ -2,11 +2,10 @@ import { expect, test, type APIRequestContext } from '@playwright/test';
 import postgres from 'postgres';
 import {
 	DEMO_WS,
+	acceptSiteInvitation,
 	OTHER_WS,
 	gotoReady,
 	inventedTariff,
-	latestMail,
-	linkIn,
 	signInWithPassword,
 	uniqueEmail,
 	rawPump
@@ -196,15 +195,7 @@ test.describe('a site guest and the workspace’s private tariffs', () => {
 			headers: { ...owner.headers, 'x-sveltekit-action': 'true' }
 		});
 		expect((await shared.json()).type).toBe('success');
-		const mail = await latestMail(email, /is shared with you/);
-		const invite = await (await browser.newContext({ baseURL })).newPage();
-		await gotoReady(invite, new URL(linkIn(mail.text)).pathname);
-		await invite.getByLabel('Your name').fill('Tariff guest (invented)');
-		await invite.getByLabel('Password', { exact: true }).fill(password);
-		await invite.getByLabel('Password again').fill(password);
-		await invite.getByRole('button', { name: 'Create account and join' }).click();
-		await expect(invite.getByRole('heading', { level: 1 })).toBeVisible();
-		await invite.context().close();
+		await acceptSiteInvitation(browser, baseURL!, email, 'Tariff guest (invented)', password);
 
 		const page = await (await browser.newContext({ baseURL })).newPage();
 		await signInWithPassword(page, email, password);
