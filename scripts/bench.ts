@@ -14,6 +14,7 @@ import {
 	compare,
 	compareRequestSchema
 } from '../src/lib/calc/index';
+import { tiered, tou, touPeriod } from '../src/lib/calc/tariffs.fixture';
 
 const WARM_UP = 10;
 const ITERATIONS = 50;
@@ -36,36 +37,23 @@ const tariff: TariffInput = {
 	holidaysAsWeekends: true,
 	fixedCharges: [{ label: 'Demo Valley Power customer charge', perMonth: 18.5 }],
 	energyCharges: [
-		{
-			label: 'Supply',
-			type: 'tou',
-			seasons: [
-				{
-					months: [6, 7, 8, 9],
-					periods: [
-						{ label: 'On-peak', perKwh: 0.31, days: 'weekdays', windows: [{ start: '16:00', end: '21:00' }] },
-						{ label: 'Mid-peak', perKwh: 0.19, days: 'weekdays', windows: [{ start: '07:00', end: '16:00' }] }
-					],
-					otherPerKwh: 0.11
-				},
-				{
-					months: [1, 2, 3, 4, 5, 10, 11, 12],
-					periods: [
-						{ label: 'Peak', perKwh: 0.22, days: 'all', windows: [{ start: '17:00', end: '20:00' }] }
-					],
-					otherPerKwh: 0.12
-				}
-			]
-		},
-		{
-			label: 'Delivery',
-			type: 'tiered',
-			tiers: [
-				{ uptoKwh: 1000, perKwh: 0.045 },
-				{ uptoKwh: 5000, perKwh: 0.062 },
-				{ uptoKwh: null, perKwh: 0.071 }
-			]
-		}
+		tou(
+			'Supply',
+			{
+				months: [6, 7, 8, 9],
+				periods: [
+					touPeriod('On-peak', 0.31, 'weekdays', '16:00', '21:00'),
+					touPeriod('Mid-peak', 0.19, 'weekdays', '07:00', '16:00')
+				],
+				otherPerKwh: 0.11
+			},
+			{
+				months: [1, 2, 3, 4, 5, 10, 11, 12],
+				periods: [touPeriod('Peak', 0.22, 'all', '17:00', '20:00')],
+				otherPerKwh: 0.12
+			}
+		),
+		tiered('Delivery', [1000, 0.045], [5000, 0.062], [null, 0.071])
 	],
 	demandCharges: [
 		{ label: 'Demand', perKw: 7.25, intervalMinutes: 15 },

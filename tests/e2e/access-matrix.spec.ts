@@ -1,7 +1,7 @@
 import { expect, test, type APIRequestContext, type APIResponse, type Browser } from '@playwright/test';
 import { readdirSync } from 'node:fs';
 import { OTHER_SITE, SITE, WHO, fixtures, makeFixtures, routes, ws, type Who } from './access-routes';
-import { DEMO_PASSWORD, DEMO_WS, gotoReady, latestMail, linkIn, uniqueEmail } from './helpers';
+import { DEMO_PASSWORD, DEMO_WS, acceptSiteInvitation, gotoReady, uniqueEmail } from './helpers';
 
 // Every route that exists (the table is in access-routes.ts), against every kind of caller. 303 = sent
 // to sign-in. The guest is a person the owner shared one site with (the hatchery, as a viewer); they
@@ -50,15 +50,7 @@ async function makeGuest(browser: Browser, owner: APIRequestContext, baseURL: st
 		headers: { origin: baseURL, 'x-sveltekit-action': 'true' }
 	});
 	expect(await effectiveStatus(shared)).toBe(200);
-	const mail = await latestMail(people.guest, /is shared with you/);
-	const page = await (await browser.newContext({ baseURL })).newPage();
-	await gotoReady(page, new URL(linkIn(mail.text)).pathname);
-	await page.getByLabel('Your name').fill('Matrix guest (invented)');
-	await page.getByLabel('Password', { exact: true }).fill(GUEST_PASSWORD);
-	await page.getByLabel('Password again').fill(GUEST_PASSWORD);
-	await page.getByRole('button', { name: 'Create account and join' }).click();
-	await expect(page.getByRole('heading', { level: 1 })).toBeVisible();
-	await page.context().close();
+	await acceptSiteInvitation(browser, baseURL, people.guest, 'Matrix guest (invented)', GUEST_PASSWORD);
 }
 
 for (const [column, who] of WHO.entries()) {

@@ -1,6 +1,7 @@
-import { expect, test, type APIRequestContext, type Browser } from '@playwright/test';
+import { expect, test } from '@playwright/test';
 import { crc32, deflateSync } from 'node:zlib';
-import { DEMO_WS, gotoReady, signInWithPassword } from './helpers';
+import { gotoReady } from './helpers';
+import { type Caller, callerAs, callerOn, createSite } from './site-setup';
 
 // Each test makes its own invented site and bill through the API, so the demo data stays as other tests
 // see it. The files are built here: invented test data.
@@ -47,28 +48,9 @@ function tinyPng(): Buffer {
 /** The head of a 64-bit Linux program (ELF), to be sent under a PDF's name and type. */
 const elf = Buffer.from([0x7f, 0x45, 0x4c, 0x46, 2, 1, 1, 0, ...new Array(8).fill(0), 2, 0, 0x3e, 0]);
 
-type Caller = { request: APIRequestContext; headers: { origin: string } };
-
-async function as(browser: Browser, email: string | null, baseURL: string): Promise<Caller> {
-	const page = await (await browser.newContext({ baseURL })).newPage();
-	if (email) await signInWithPassword(page, email);
-	return { request: page.request, headers: { origin: baseURL } };
-}
-
 /** A fresh invented site in the demo workspace with one January bill, made by the editor. */
 async function siteWithBill({ request, headers }: Caller) {
-	const site = await request.post('/api/v1/sites', {
-		headers,
-		data: {
-			workspaceId: DEMO_WS.id,
-			name: `Attachment test site ${Date.now()} (invented)`,
-			timezone: 'America/Chicago',
-			country: 'US',
-			currency: 'USD'
-		}
-	});
-	expect(site.status()).toBe(201);
-	const siteId = (await site.json()).id as string;
+	const siteId = await createSite({ request, headers }, 'Attachment test site');
 	const bill = await request.post(`/api/v1/sites/${siteId}/bills`, {
 		headers,
 		data: { periodFrom: '2026-01-01', periodTo: '2026-01-31', kwh: 500, amount: 80 }
@@ -92,7 +74,7 @@ test.describe('bill attachments', () => {
 		browser,
 		baseURL
 	}) => {
-		const editor = await as(browser, 'editor@example.org', baseURL!);
+		const editor = await callerAs(browser, 'editor@example.org', baseURL!);
 		const { upload, files } = await siteWithBill(editor);
 		const pdf = tinyPdf();
 
@@ -126,7 +108,7 @@ test.describe('bill attachments', () => {
 			/^attachment; filename="january-bill-invented\.pdf"/
 		);
 
-		const viewer = await as(browser, 'viewer@example.org', baseURL!);
+		const viewer = await callerAs(browser, 'viewer@example.org', baseURL!);
 		const viewed = await viewer.request.get(proxy);
 		expect(viewed.status()).toBe(200);
 		expect(Buffer.compare(await viewed.body(), pdf)).toBe(0);
@@ -137,7 +119,7 @@ test.describe('bill attachments', () => {
 		expect(viewerUpload.status()).toBe(403);
 		expect((await viewer.request.delete(proxy, { headers: viewer.headers })).status()).toBe(403);
 
-		const outsider = await as(browser, 'grower@example.org', baseURL!);
+		const outsider = await callerAs(browser, 'grower@example.org', baseURL!);
 		expect((await outsider.request.get(proxy)).status()).toBe(404);
 		expect((await outsider.request.get(`${proxy}?download=1`)).status()).toBe(404);
 		const outsiderUpload = await outsider.request.post(upload, {
@@ -151,7 +133,7 @@ test.describe('bill attachments', () => {
 		});
 		expect(outsiderForm.status()).toBe(404);
 
-		const anonymous = await as(browser, null, baseURL!);
+		const anonymous = await callerAs(browser, null, baseURL!);
 		const anonymousUpload = await anonymous.request.post(upload, {
 			headers: anonymous.headers,
 			...file('anon.pdf', 'application/pdf', pdf)
@@ -163,7 +145,7 @@ test.describe('bill attachments', () => {
 		browser,
 		baseURL
 	}) => {
-		const editor = await as(browser, 'editor@example.org', baseURL!);
+		const editor = await callerAs(browser, 'editor@example.org', baseURL!);
 		const { siteId, billId, upload, files } = await siteWithBill(editor);
 
 		const program = await editor.request.post(upload, {
@@ -226,8 +208,7 @@ test.describe('bill attachments', () => {
 		page,
 		baseURL
 	}) => {
-		await signInWithPassword(page, 'editor@example.org');
-		const { siteId, billId } = await siteWithBill({ request: page.request, headers: { origin: baseURL! } });
+		const { siteId, billId } = await siteWithBill(await callerOn(page, 'editor@example.org', baseURL!));
 		await gotoReady(page, `/sites/${siteId}/bills/${billId}`);
 		const section = page.getByRole('region', { name: 'The bill itself' });
 		await expect(section.getByText('No file attached yet.')).toBeVisible();

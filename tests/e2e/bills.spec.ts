@@ -1,25 +1,16 @@
 import { expect, test, type Page } from '@playwright/test';
 import { readFileSync } from 'node:fs';
-import { DEMO_WS, gotoReady, signInWithPassword } from './helpers';
+import { gotoReady, signInWithPassword } from './helpers';
+import { baselineOf, createSite } from './site-setup';
 
 // An invented site on an invented demo tariff, made for this test so no demo data changes.
 async function siteWithAPump(page: Page) {
-	const site = await page.request.post('/api/v1/sites', {
-		data: {
-			workspaceId: DEMO_WS.id,
-			name: `Bill check test site ${Date.now()} (invented)`,
-			timezone: 'America/Chicago',
-			country: 'US',
-			currency: 'USD',
-			tariffId: '7a1c0000-0000-4000-8000-000000000400'
-		}
+	const siteId = await createSite({ request: page.request }, 'Bill check test site', {
+		tariffId: '7a1c0000-0000-4000-8000-000000000400'
 	});
-	expect(site.status()).toBe(201);
-	const siteId = (await site.json()).id as string;
-	const scenarios = await (await page.request.get(`/api/v1/sites/${siteId}/scenarios`)).json();
-	const baseline = (scenarios.scenarios as { id: string; isBaseline: boolean }[]).find((s) => s.isBaseline)!;
-	const list = await (await page.request.get(`/api/v1/scenarios/${baseline.id}/equipment`)).json();
-	const put = await page.request.put(`/api/v1/scenarios/${baseline.id}/equipment`, {
+	const baseline = await baselineOf(page.request, siteId);
+	const list = await (await page.request.get(`/api/v1/scenarios/${baseline}/equipment`)).json();
+	const put = await page.request.put(`/api/v1/scenarios/${baseline}/equipment`, {
 		data: {
 			expectedRevision: list.revision,
 			devices: [

@@ -2,10 +2,8 @@ import ExcelJS from 'exceljs';
 import { expect, test } from '@playwright/test';
 import { readFileSync } from 'node:fs';
 import { gotoReady, signInWithPassword } from './helpers';
+import { demoSites } from './site-setup';
 
-const demoSites = JSON.parse(readFileSync('data/demo-sites.json', 'utf8')) as {
-	sites: { id: string; name: string; scenarios: { id: string; name: string }[] }[];
-};
 const hatchery = demoSites.sites[0]!;
 const greenhouse = demoSites.sites[1]!;
 

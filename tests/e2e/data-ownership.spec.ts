@@ -1,6 +1,14 @@
 import { expect, test } from '@playwright/test';
 import { readFile } from 'node:fs/promises';
-import { DEMO_WS, gotoReady, latestMail, linkIn, signInWithPassword, uniqueEmail } from './helpers';
+import {
+	DEMO_WS,
+	createWorkspace,
+	gotoReady,
+	latestMail,
+	linkIn,
+	signInWithPassword,
+	uniqueEmail
+} from './helpers';
 
 test.describe('data ownership', () => {
 	test('an owner downloads the workspace export as JSON', async ({ page }) => {
@@ -29,9 +37,7 @@ test.describe('data ownership', () => {
 		const name = `Grace test ${Date.now()} (invented)`;
 		await signInWithPassword(page, 'owner@example.org');
 		await gotoReady(page, '/workspaces');
-		await page.getByLabel('Workspace name').fill(name);
-		await page.getByRole('button', { name: 'Create workspace' }).click();
-		await expect(page.getByRole('heading', { name })).toBeVisible();
+		await createWorkspace(page, name);
 		await expect(page.locator('body[data-hydrated="true"]')).toBeAttached();
 
 		await page.locator('#ws-confirm').fill(name);
@@ -52,9 +58,7 @@ test.describe('data ownership', () => {
 		const email = uniqueEmail('leaver');
 		await signInWithPassword(page, 'owner@example.org');
 		await gotoReady(page, '/workspaces');
-		await page.getByLabel('Workspace name').fill(name);
-		await page.getByRole('button', { name: 'Create workspace' }).click();
-		await expect(page.getByRole('heading', { name })).toBeVisible();
+		await createWorkspace(page, name);
 		await expect(page.locator('body[data-hydrated="true"]')).toBeAttached();
 		await page.locator('#invite-email').fill(email);
 		await page.getByLabel('Role', { exact: true }).selectOption('viewer');

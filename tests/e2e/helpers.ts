@@ -1,4 +1,4 @@
-import { expect, type Page } from '@playwright/test';
+import { expect, type Browser, type Page } from '@playwright/test';
 import { readFileSync } from 'node:fs';
 
 export const demo = JSON.parse(readFileSync('data/demo-people.json', 'utf8')) as {
@@ -86,3 +86,62 @@ export const rawPump = {
 	power: { watts: 370 },
 	schedule: { type: 'always' }
 };
+
+/** Fills in and sends the sign-up form; the page then asks to confirm the address from the e-mail. */
+export async function signUp(page: Page, email: string, name: string, password: string) {
+	await gotoReady(page, '/signup');
+	await page.getByLabel('Your name').fill(name);
+	await page.getByLabel('E-mail').fill(email);
+	await page.getByLabel('Password', { exact: true }).fill(password);
+	await page.getByLabel('Password again').fill(password);
+	await page.getByRole('button', { name: 'Create account' }).click();
+	await expect(page.getByRole('heading', { name: 'Confirm your address' })).toBeVisible();
+}
+
+/** Sends the password sign-in form without waiting for an outcome (for the refusals). */
+export async function sendPasswordSignIn(page: Page, email: string, password: string) {
+	await gotoReady(page, '/signin');
+	await page.locator('#pw-email').fill(email);
+	await page.getByLabel('Password', { exact: true }).fill(password);
+	await page.getByRole('button', { name: 'Sign in', exact: true }).click();
+}
+
+/** Signs in with an e-mailed link; for a new address this also creates the (invented) account. */
+export async function signInByLink(page: Page, email: string) {
+	const after = await lastMailId();
+	await gotoReady(page, '/signin');
+	await page.locator('#link-email').fill(email);
+	await page.getByRole('button', { name: 'E-mail me a link' }).click();
+	await expect(page.getByRole('heading', { name: 'Check your e-mail' })).toBeVisible();
+	await page.goto(linkIn((await latestMail(email, /sign-in link/, after)).text));
+	await expect(page.getByRole('heading', { name: 'Your workspaces' })).toBeVisible();
+}
+
+/** Creates a workspace from the workspaces page the person is on; its page then shows its name. */
+export async function createWorkspace(page: Page, name: string) {
+	await page.getByLabel('Workspace name').fill(name);
+	await page.getByRole('button', { name: 'Create workspace' }).click();
+	await expect(page.getByRole('heading', { name })).toBeVisible();
+}
+
+/**
+ * Opens the site invitation e-mailed to `email` in a browser context of its own, creates the guest's
+ * account with `name` and `password`, and closes that context once the site's page shows.
+ */
+export async function acceptSiteInvitation(
+	browser: Browser,
+	baseURL: string,
+	email: string,
+	name: string,
+	password: string
+) {
+	const mail = await latestMail(email, /is shared with you/);
+	const invite = await (await browser.newContext({ baseURL })).newPage();
+	await gotoReady(invite, new URL(linkIn(mail.text)).pathname);
+	await invite.getByLabel('Your name').fill(name);
+	await invite.getByLabel('Password', { exact: true }).fill(password);
+	await invite.getByLabel('Password again').fill(password);
+	await invite.getByRole('button', { name: 'Create account and join' }).click();
+	await expect(invite.getByRole('heading', { level: 1 })).toBeVisible();
+	await invite.context().close();
+}

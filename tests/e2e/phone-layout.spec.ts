@@ -8,6 +8,7 @@ import {
 	type Page
 } from '@playwright/test';
 import { DEMO_PASSWORD, DEMO_WS, gotoReady } from './helpers';
+import { baselineOf, createSite } from './site-setup';
 
 /*
  * The pages a grower uses at the tank, on a 390 × 844 phone: nothing wider than the screen, the save bar in
@@ -35,20 +36,10 @@ test.beforeAll(async ({ browser }) => {
 	await page.getByRole('button', { name: 'Sign in', exact: true }).click();
 	await expect(page.getByRole('button', { name: 'Sign out' })).toBeVisible();
 
-	const site = await page.request.post('/api/v1/sites', {
-		data: {
-			workspaceId: DEMO_WS.id,
-			name: `Phone layout test site ${Date.now()} (invented)`,
-			timezone: 'America/Chicago',
-			country: 'US',
-			currency: 'USD',
-			tariffId: '7a1c0000-0000-4000-8000-000000000400'
-		}
+	siteId = await createSite({ request: page.request }, 'Phone layout test site', {
+		tariffId: '7a1c0000-0000-4000-8000-000000000400'
 	});
-	expect(site.status()).toBe(201);
-	siteId = (await site.json()).id as string;
-	const scenarios = await (await page.request.get(`/api/v1/sites/${siteId}/scenarios`)).json();
-	scenarioId = (scenarios.scenarios as { id: string; isBaseline: boolean }[]).find((s) => s.isBaseline)!.id;
+	scenarioId = await baselineOf(page.request, siteId);
 	const list = await (await page.request.get(`/api/v1/scenarios/${scenarioId}/equipment`)).json();
 	const devices = Array.from({ length: DEVICES }, (_, i) => ({
 		name: `Raceway ${i + 1} pump`,

@@ -1,5 +1,14 @@
 import { expect, test, type Browser, type Page } from '@playwright/test';
-import { gotoReady, lastMailId, latestMail, linkIn, uniqueEmail } from './helpers';
+import {
+	createWorkspace,
+	gotoReady,
+	latestMail,
+	linkIn,
+	sendPasswordSignIn,
+	signInByLink,
+	signUp,
+	uniqueEmail
+} from './helpers';
 
 // Issue 14, item 3: an account taken before its owner signs up. The attacker signs up with the victim's
 // address and a password of their own; whatever the victim then does with their mailbox, that password
@@ -11,36 +20,19 @@ const ATTACKER_PASSWORD = 'attacker chose this 123';
 
 async function squat(browser: Browser, victim: string): Promise<Page> {
 	const page = await (await browser.newContext({ userAgent: 'runrate-security-prehijack' })).newPage();
-	await gotoReady(page, '/signup');
-	await page.getByLabel('Your name').fill('Not The Owner (invented)');
-	await page.getByLabel('E-mail').fill(victim);
-	await page.getByLabel('Password', { exact: true }).fill(ATTACKER_PASSWORD);
-	await page.getByLabel('Password again').fill(ATTACKER_PASSWORD);
-	await page.getByRole('button', { name: 'Create account' }).click();
-	await expect(page.getByRole('heading', { name: 'Confirm your address' })).toBeVisible();
+	await signUp(page, victim, 'Not The Owner (invented)', ATTACKER_PASSWORD);
 	return page;
 }
 
 /** The victim signs in with an e-mailed link and starts a workspace of their own. */
 async function ownerSignsInByLink(page: Page, victim: string, workspace: string) {
-	const after = await lastMailId();
-	await gotoReady(page, '/signin');
-	await page.locator('#link-email').fill(victim);
-	await page.getByRole('button', { name: 'E-mail me a link' }).click();
-	await expect(page.getByRole('heading', { name: 'Check your e-mail' })).toBeVisible();
-	await page.goto(linkIn((await latestMail(victim, /sign-in link/, after)).text));
-	await expect(page.getByRole('heading', { name: 'Your workspaces' })).toBeVisible();
-	await page.getByLabel('Workspace name').fill(workspace);
-	await page.getByRole('button', { name: 'Create workspace' }).click();
-	await expect(page.getByRole('heading', { name: workspace })).toBeVisible();
+	await signInByLink(page, victim);
+	await createWorkspace(page, workspace);
 }
 
 /** The attacker tries the password they chose: no session, and the victim's workspace stays out of reach. */
 async function attackerIsShutOut(page: Page, victim: string, workspace: string) {
-	await gotoReady(page, '/signin');
-	await page.locator('#pw-email').fill(victim);
-	await page.getByLabel('Password', { exact: true }).fill(ATTACKER_PASSWORD);
-	await page.getByRole('button', { name: 'Sign in', exact: true }).click();
+	await sendPasswordSignIn(page, victim, ATTACKER_PASSWORD);
 	await expect(page.getByText('That e-mail and password do not match an account.')).toBeVisible();
 	await expect(page.getByRole('button', { name: 'Sign out' })).toHaveCount(0);
 	await page.goto('/workspaces');
@@ -84,10 +76,7 @@ test('the owner opening the squatter’s confirmation link does not confirm the 
 	await expect(owner.getByLabel('Your password')).toHaveValue('what the owner might type');
 
 	// The squatter still cannot sign in (the address is unconfirmed; a fresh link goes to the owner only).
-	await gotoReady(attacker, '/signin');
-	await attacker.locator('#pw-email').fill(victim);
-	await attacker.getByLabel('Password', { exact: true }).fill(ATTACKER_PASSWORD);
-	await attacker.getByRole('button', { name: 'Sign in', exact: true }).click();
+	await sendPasswordSignIn(attacker, victim, ATTACKER_PASSWORD);
 	await expect(attacker.getByText('Confirm your address first')).toBeVisible();
 	await expect(attacker.getByRole('button', { name: 'Sign out' })).toHaveCount(0);
 

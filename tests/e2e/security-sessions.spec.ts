@@ -1,5 +1,13 @@
 import { expect, test, type Browser, type Page } from '@playwright/test';
-import { gotoReady, lastMailId, latestMail, linkIn, signInWithPassword, uniqueEmail } from './helpers';
+import {
+	gotoReady,
+	lastMailId,
+	latestMail,
+	linkIn,
+	signInByLink,
+	signInWithPassword,
+	uniqueEmail
+} from './helpers';
 
 // Issue 14, item 6: sessions that end. A copied session cookie used to keep working for its whole 30 days
 // after sign-out, a password reset left other sessions alive and an older reset link still worked after a
@@ -10,17 +18,6 @@ const newPage = async (browser: Browser) => (await browser.newContext()).newPage
 async function isSignedOut(page: Page) {
 	await page.goto('/workspaces');
 	await expect(page).toHaveURL(/\/signin\?next=/);
-}
-
-/** Signs in with an e-mailed link; for a new address this also creates the (invented) account. */
-async function signInByLink(page: Page, email: string) {
-	const after = await lastMailId();
-	await gotoReady(page, '/signin');
-	await page.locator('#link-email').fill(email);
-	await page.getByRole('button', { name: 'E-mail me a link' }).click();
-	await expect(page.getByRole('heading', { name: 'Check your e-mail' })).toBeVisible();
-	await page.goto(linkIn((await latestMail(email, /sign-in link/, after)).text));
-	await expect(page.getByRole('heading', { name: 'Your workspaces' })).toBeVisible();
 }
 
 async function resetLink(page: Page, email: string): Promise<string> {

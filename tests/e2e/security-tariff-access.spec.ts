@@ -1,36 +1,29 @@
-import { expect, test, type APIRequestContext, type Browser } from '@playwright/test';
-import { readFileSync } from 'node:fs';
+import { expect, test, type APIRequestContext } from '@playwright/test';
 import postgres from 'postgres';
 import {
 	DEMO_WS,
+	acceptSiteInvitation,
 	OTHER_WS,
 	gotoReady,
 	inventedTariff,
-	latestMail,
-	linkIn,
 	signInWithPassword,
 	uniqueEmail,
 	rawPump
 } from './helpers';
+import {
+	type Caller,
+	PUBLIC_TARIFF as publicTariff,
+	baselineOf,
+	callerAs,
+	siteBody as inventedSite
+} from './site-setup';
 
 // Issue 14, items 4 and 9: a workspace's private tariff is used only by that workspace's sites, and a
 // site guest is offered (and may choose) only public tariffs and the site's current one.
 
-const publicTariff = (
-	JSON.parse(readFileSync('data/demo-tariffs.json', 'utf8')) as { tariffs: { id: string }[] }
-).tariffs[0]!.id;
-
 /** A rate nobody else uses, so it can be looked for in every answer. */
 const SECRET_RATE = 0.4321;
 const UNAVAILABLE = "This site's tariff is not available to this workspace";
-
-type Caller = { request: APIRequestContext; headers: { origin: string } };
-
-async function as(browser: Browser, email: string, baseURL: string, password?: string): Promise<Caller> {
-	const page = await (await browser.newContext({ baseURL })).newPage();
-	await signInWithPassword(page, email, password);
-	return { request: page.request, headers: { origin: baseURL } };
-}
 
 /** A private tariff of the demo co-op (workspace A), with a name and a rate found nowhere else. */
 async function secretTariff(owner: Caller, name: string) {
@@ -44,14 +37,8 @@ async function secretTariff(owner: Caller, name: string) {
 	return (await made.json()).id as string;
 }
 
-const siteBody = (workspaceId: string, more: Record<string, unknown> = {}) => ({
-	workspaceId,
-	name: `Tariff access site ${Date.now()} (invented)`,
-	timezone: 'America/Chicago',
-	country: 'US',
-	currency: 'USD',
-	...more
-});
+const siteBody = (workspaceId: string, more: Record<string, unknown> = {}) =>
+	inventedSite('Tariff access site', { workspaceId, ...more });
 
 /** A site with a baseline holding one pump and a second scenario, on the public tariff. */
 async function pricedSite({ request, headers }: Caller, workspaceId: string) {
@@ -61,8 +48,7 @@ async function pricedSite({ request, headers }: Caller, workspaceId: string) {
 	});
 	expect(made.status()).toBe(201);
 	const siteId = (await made.json()).id as string;
-	const list = await (await request.get(`/api/v1/sites/${siteId}/scenarios`)).json();
-	const baseline = (list.scenarios as { id: string; isBaseline: boolean }[]).find((s) => s.isBaseline)!.id;
+	const baseline = await baselineOf(request, siteId);
 	const equipment = `/api/v1/scenarios/${baseline}/equipment`;
 	const start = (await (await request.get(equipment)).json()).revision as number;
 	const added = await request.post(equipment, {
@@ -86,9 +72,9 @@ test.describe('private tariffs stay in their workspace', () => {
 		browser,
 		baseURL
 	}) => {
-		const owner = await as(browser, 'owner@example.org', baseURL!);
+		const owner = await callerAs(browser, 'owner@example.org', baseURL!);
 		const secret = await secretTariff(owner, `Secret create tariff ${Date.now()}`);
-		const grower = await as(browser, 'grower@example.org', baseURL!);
+		const grower = await callerAs(browser, 'grower@example.org', baseURL!);
 		const { request, headers } = grower;
 
 		const foreign = await request.post('/api/v1/sites', {
@@ -137,9 +123,9 @@ test.describe('private tariffs stay in their workspace', () => {
 		baseURL
 	}) => {
 		const name = `Secret forced tariff ${Date.now()}`;
-		const owner = await as(browser, 'owner@example.org', baseURL!);
+		const owner = await callerAs(browser, 'owner@example.org', baseURL!);
 		const secret = await secretTariff(owner, name);
-		const grower = await as(browser, 'grower@example.org', baseURL!);
+		const grower = await callerAs(browser, 'grower@example.org', baseURL!);
 		const { request } = grower;
 		const site = await pricedSite(grower, OTHER_WS.id);
 		const compare = `scenarios=${site.baseline},${site.other}&baseline=${site.baseline}&start=2027-01`;
@@ -198,7 +184,7 @@ test.describe('a site guest and the workspace’s private tariffs', () => {
 		browser,
 		baseURL
 	}) => {
-		const owner = await as(browser, 'owner@example.org', baseURL!);
+		const owner = await callerAs(browser, 'owner@example.org', baseURL!);
 		const name = `Secret guest tariff ${Date.now()}`;
 		const secret = await secretTariff(owner, name);
 		const site = await pricedSite(owner, DEMO_WS.id);
@@ -209,15 +195,7 @@ test.describe('a site guest and the workspace’s private tariffs', () => {
 			headers: { ...owner.headers, 'x-sveltekit-action': 'true' }
 		});
 		expect((await shared.json()).type).toBe('success');
-		const mail = await latestMail(email, /is shared with you/);
-		const invite = await (await browser.newContext({ baseURL })).newPage();
-		await gotoReady(invite, new URL(linkIn(mail.text)).pathname);
-		await invite.getByLabel('Your name').fill('Tariff guest (invented)');
-		await invite.getByLabel('Password', { exact: true }).fill(password);
-		await invite.getByLabel('Password again').fill(password);
-		await invite.getByRole('button', { name: 'Create account and join' }).click();
-		await expect(invite.getByRole('heading', { level: 1 })).toBeVisible();
-		await invite.context().close();
+		await acceptSiteInvitation(browser, baseURL!, email, 'Tariff guest (invented)', password);
 
 		const page = await (await browser.newContext({ baseURL })).newPage();
 		await signInWithPassword(page, email, password);

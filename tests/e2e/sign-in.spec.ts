@@ -1,18 +1,20 @@
 import { expect, test } from '@playwright/test';
-import { gotoReady, latestMail, linkIn, signInWithPassword, uniqueEmail } from './helpers';
+import {
+	createWorkspace,
+	gotoReady,
+	latestMail,
+	linkIn,
+	signInWithPassword,
+	signUp,
+	uniqueEmail
+} from './helpers';
 
 test.describe('signing up and in', () => {
 	test('a new grower signs up, confirms the address from the e-mail with the password and is signed in', async ({
 		page
 	}) => {
 		const email = uniqueEmail('newgrower');
-		await gotoReady(page, '/signup');
-		await page.getByLabel('Your name').fill('Test Grower (invented)');
-		await page.getByLabel('E-mail').fill(email);
-		await page.getByLabel('Password', { exact: true }).fill('a long test password');
-		await page.getByLabel('Password again').fill('a long test password');
-		await page.getByRole('button', { name: 'Create account' }).click();
-		await expect(page.getByRole('heading', { name: 'Confirm your address' })).toBeVisible();
+		await signUp(page, email, 'Test Grower (invented)', 'a long test password');
 
 		// The link and the password chosen at sign-up together confirm the account and sign in.
 		const mail = await latestMail(email, /Confirm your address/);
@@ -22,9 +24,7 @@ test.describe('signing up and in', () => {
 		await expect(page.getByRole('heading', { name: 'Your workspaces' })).toBeVisible();
 		await expect(page.getByText('You are not in a workspace yet')).toBeVisible();
 
-		await page.getByLabel('Workspace name').fill('Test greenhouse (invented)');
-		await page.getByRole('button', { name: 'Create workspace' }).click();
-		await expect(page.getByRole('heading', { name: 'Test greenhouse (invented)' })).toBeVisible();
+		await createWorkspace(page, 'Test greenhouse (invented)');
 		await expect(page.getByText('You are owner here')).toBeVisible();
 	});
 
@@ -65,13 +65,7 @@ test.describe('signing up and in', () => {
 
 	test('a forgotten password is reset from the e-mailed link', async ({ page }) => {
 		const email = uniqueEmail('forgetful');
-		await gotoReady(page, '/signup');
-		await page.getByLabel('Your name').fill('Forgetful (invented)');
-		await page.getByLabel('E-mail').fill(email);
-		await page.getByLabel('Password', { exact: true }).fill('first password 123');
-		await page.getByLabel('Password again').fill('first password 123');
-		await page.getByRole('button', { name: 'Create account' }).click();
-		await expect(page.getByRole('heading', { name: 'Confirm your address' })).toBeVisible();
+		await signUp(page, email, 'Forgetful (invented)', 'first password 123');
 
 		await gotoReady(page, '/forgot');
 		await page.getByLabel('E-mail').fill(email);

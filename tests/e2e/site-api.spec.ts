@@ -1,44 +1,33 @@
-import { expect, test, type APIRequestContext, type Browser, type Page } from '@playwright/test';
-import { readFileSync } from 'node:fs';
-import { DEMO_WS, signInWithPassword, rawPump } from './helpers';
+import { expect, test, type APIRequestContext, type Page } from '@playwright/test';
+import { rawPump } from './helpers';
+import {
+	type Caller,
+	PUBLIC_TARIFF as publicTariff,
+	baselineOf,
+	callerAs,
+	callerOn,
+	createSite
+} from './site-setup';
 
 // Every test works on a site of its own, made through the API, so the demo sites stay as other tests see them.
-const publicTariff = (
-	JSON.parse(readFileSync('data/demo-tariffs.json', 'utf8')) as { tariffs: { id: string }[] }
-).tariffs[0]!.id;
-
 const airPump = { ...rawPump, name: 'Air pump', category: 'air-pump', power: { watts: 60 } };
 
-type Api = { request: APIRequestContext; headers: { origin: string } };
-
-async function api(page: Page, email: string, baseURL: string): Promise<Api> {
-	await signInWithPassword(page, email);
-	return { request: page.request, headers: { origin: baseURL } };
-}
-
-async function as(browser: Browser, email: string, baseURL: string): Promise<Api> {
-	const page = await (await browser.newContext({ baseURL })).newPage();
-	return api(page, email, baseURL);
-}
-
 /** A fresh invented site and its baseline scenario, made by whoever `editor` is signed in as. */
-async function freshSite({ request, headers }: Api) {
-	const created = await request.post('/api/v1/sites', {
-		headers,
-		data: {
-			workspaceId: DEMO_WS.id,
-			name: `API test site ${Date.now()} (invented)`,
-			timezone: 'America/Chicago',
-			country: 'US',
-			currency: 'USD'
-		}
-	});
-	expect(created.status()).toBe(201);
-	const siteId = (await created.json()).id as string;
-	const list = await (await request.get(`/api/v1/sites/${siteId}/scenarios`)).json();
-	const scenarioId = (list.scenarios as { id: string; isBaseline: boolean }[]).find((s) => s.isBaseline)!.id;
+async function freshSite(editor: Caller) {
+	const siteId = await createSite(editor, 'API test site');
+	const scenarioId = await baselineOf(editor.request, siteId);
 	return { siteId, scenarioId, equipment: `/api/v1/scenarios/${scenarioId}/equipment` };
 }
+
+/** The editor, signed in on `page`, with a fresh site of their own. */
+async function editorWithSite(page: Page, baseURL: string) {
+	const editor = await callerOn(page, 'editor@example.org', baseURL);
+	return { editor, ...editor, ...(await freshSite(editor)) };
+}
+
+/** The equipment list's revision now. */
+const revisionOf = async (request: APIRequestContext, equipment: string) =>
+	(await (await request.get(equipment)).json()).revision as number;
 
 const paths = (body: { issues?: { path: string }[] }) => (body.issues ?? []).map((i) => i.path);
 
@@ -47,10 +36,8 @@ test.describe('the site API', () => {
 		page,
 		baseURL
 	}) => {
-		const editor = await api(page, 'editor@example.org', baseURL!);
-		const { request, headers } = editor;
-		const { equipment } = await freshSite(editor);
-		const start = (await (await request.get(equipment)).json()).revision as number;
+		const { request, headers, equipment } = await editorWithSite(page, baseURL!);
+		const start = await revisionOf(request, equipment);
 
 		const first = await request.post(equipment, {
 			headers,
@@ -100,10 +87,8 @@ test.describe('the site API', () => {
 	});
 
 	test('site API: answers 404 for a position past the end of the list', async ({ page, baseURL }) => {
-		const editor = await api(page, 'editor@example.org', baseURL!);
-		const { request, headers } = editor;
-		const { equipment } = await freshSite(editor);
-		const revision = (await (await request.get(equipment)).json()).revision as number;
+		const { request, headers, equipment } = await editorWithSite(page, baseURL!);
+		const revision = await revisionOf(request, equipment);
 		await request.post(equipment, { headers, data: { expectedRevision: revision, device: rawPump } });
 
 		expect((await request.get(`${equipment}/1`)).status()).toBe(404);
@@ -130,10 +115,8 @@ test.describe('the site API', () => {
 		page,
 		baseURL
 	}) => {
-		const editor = await api(page, 'editor@example.org', baseURL!);
-		const { request, headers } = editor;
-		const { equipment } = await freshSite(editor);
-		const revision = (await (await request.get(equipment)).json()).revision as number;
+		const { request, headers, equipment } = await editorWithSite(page, baseURL!);
+		const revision = await revisionOf(request, equipment);
 		await request.post(equipment, { headers, data: { expectedRevision: revision, device: rawPump } });
 		await request.post(equipment, { headers, data: { expectedRevision: revision + 1, device: airPump } });
 
@@ -168,9 +151,8 @@ test.describe('the site API', () => {
 		browser,
 		baseURL
 	}) => {
-		const editor = await api(page, 'editor@example.org', baseURL!);
-		const { siteId, scenarioId, equipment } = await freshSite(editor);
-		const revision = (await (await editor.request.get(equipment)).json()).revision as number;
+		const { editor, siteId, scenarioId, equipment } = await editorWithSite(page, baseURL!);
+		const revision = await revisionOf(editor.request, equipment);
 		await editor.request.post(equipment, {
 			headers: editor.headers,
 			data: { expectedRevision: revision, device: rawPump }
@@ -179,7 +161,7 @@ test.describe('the site API', () => {
 		const scenario = `/api/v1/scenarios/${scenarioId}`;
 		const reads = [site, scenario, equipment, `${equipment}/0`];
 
-		const writes = (who: Api) => [
+		const writes = (who: Caller) => [
 			who.request.put(site, { headers: who.headers, data: { expectedRevision: 1, name: '' } }),
 			who.request.patch(scenario, { headers: who.headers, data: { name: 'Taken over' } }),
 			who.request.delete(scenario, { headers: who.headers }),
@@ -194,11 +176,11 @@ test.describe('the site API', () => {
 			who.request.delete(`${equipment}/0?expectedRevision=${revision + 1}`, { headers: who.headers })
 		];
 
-		const viewer = await as(browser, 'viewer@example.org', baseURL!);
+		const viewer = await callerAs(browser, 'viewer@example.org', baseURL!);
 		for (const path of reads) expect((await viewer.request.get(path)).status(), path).toBe(200);
 		for (const res of await Promise.all(writes(viewer))) expect(res.status(), res.url()).toBe(403);
 
-		const outsider = await as(browser, 'grower@example.org', baseURL!);
+		const outsider = await callerAs(browser, 'grower@example.org', baseURL!);
 		for (const path of reads) {
 			const res = await outsider.request.get(path);
 			expect(res.status(), path).toBe(404);
@@ -216,9 +198,7 @@ test.describe('the site API', () => {
 		page,
 		baseURL
 	}) => {
-		const editor = await api(page, 'editor@example.org', baseURL!);
-		const { request, headers } = editor;
-		const { siteId } = await freshSite(editor);
+		const { request, headers, siteId } = await editorWithSite(page, baseURL!);
 		const made = await request.post(`/api/v1/sites/${siteId}/scenarios`, {
 			headers,
 			data: { name: 'Timer on the fountain pump' }
@@ -288,9 +268,7 @@ test.describe('the site API', () => {
 	});
 
 	test('site API: site PUT answers 400 with field paths and 409 when stale', async ({ page, baseURL }) => {
-		const editor = await api(page, 'editor@example.org', baseURL!);
-		const { request, headers } = editor;
-		const { siteId } = await freshSite(editor);
+		const { request, headers, siteId } = await editorWithSite(page, baseURL!);
 		const site = `/api/v1/sites/${siteId}`;
 		const read = await request.get(site);
 		expect(read.headers()['cache-control']).toBe('private, no-store');

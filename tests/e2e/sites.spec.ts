@@ -1,10 +1,7 @@
 import { expect, test } from '@playwright/test';
-import { readFileSync } from 'node:fs';
 import { DEMO_WS, gotoReady, latestMail, linkIn, signInWithPassword, uniqueEmail } from './helpers';
+import { demoSites } from './site-setup';
 
-const demoSites = JSON.parse(readFileSync('data/demo-sites.json', 'utf8')) as {
-	sites: { id: string; name: string; scenarios: { id: string; name: string }[] }[];
-};
 const pond = demoSites.sites[2]!;
 
 test.describe('sites and scenarios', () => {

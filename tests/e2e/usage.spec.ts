@@ -1,6 +1,7 @@
 import { expect, test, type Browser, type Page } from '@playwright/test';
 import { readFileSync } from 'node:fs';
-import { DEMO_WS, gotoReady, signInWithPassword } from './helpers';
+import { gotoReady, signInWithPassword } from './helpers';
+import { createSite } from './site-setup';
 
 // Every test works on a site of its own, made through the API, so the demo sites keep no readings.
 const fixture = (name: string) => `tests/fixtures/green-button/${name}`;
@@ -12,19 +13,8 @@ async function signedIn(browser: Browser, baseURL: string, email: string): Promi
 }
 
 /** A fresh invented site in the demo workspace, made by whoever `page` is signed in as. */
-async function freshSite(page: Page, baseURL: string): Promise<string> {
-	const created = await page.request.post('/api/v1/sites', {
-		headers: { origin: baseURL },
-		data: {
-			workspaceId: DEMO_WS.id,
-			name: `Usage test site ${Date.now()} (invented)`,
-			timezone: 'America/Chicago',
-			country: 'US',
-			currency: 'USD'
-		}
-	});
-	expect(created.status()).toBe(201);
-	return (await created.json()).id as string;
+function freshSite(page: Page, baseURL: string): Promise<string> {
+	return createSite({ request: page.request, headers: { origin: baseURL } }, 'Usage test site');
 }
 
 test.describe('metered usage', () => {

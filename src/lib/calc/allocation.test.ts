@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { device, onlyPeriod } from './fixtures';
+import { device, onlyPeriod } from './requests.fixture';
 import type { TariffInput } from './tariff.schema';
+import { tiered, tou, touPeriod, twoTierDelivery } from './tariffs.fixture';
 import type { PeriodResult } from './types';
 
 /** Invented tariff with one of everything (Demo Valley Power, fictional). */
@@ -12,27 +13,12 @@ const everything: TariffInput = {
 	],
 	energyCharges: [
 		{ label: 'Energy', type: 'flat', perKwh: 0.0917 },
-		{
-			label: 'Delivery',
-			type: 'tiered',
-			tiers: [
-				{ uptoKwh: 300, perKwh: 0.041 },
-				{ uptoKwh: null, perKwh: 0.067 }
-			]
-		},
-		{
-			label: 'Supply',
-			type: 'tou',
-			seasons: [
-				{
-					months: [1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11, 12],
-					periods: [
-						{ label: 'Peak', perKwh: 0.213, days: 'weekdays', windows: [{ start: '17:00', end: '20:00' }] }
-					],
-					otherPerKwh: 0.087
-				}
-			]
-		}
+		tiered('Delivery', [300, 0.041], [null, 0.067]),
+		tou('Supply', {
+			months: [1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11, 12],
+			periods: [touPeriod('Peak', 0.213, 'weekdays', '17:00', '20:00')],
+			otherPerKwh: 0.087
+		})
 	],
 	demandCharges: [{ label: 'Demand', perKw: 6.33 }],
 	riders: [{ label: 'Fuel adjustment', perKwh: 0.0131 }],
@@ -109,19 +95,7 @@ describe('sharing charges that are not per interval', () => {
 
 	it('shares a tiered charge at the period’s average tier rate', () => {
 		const period = onlyPeriod({
-			tariff: {
-				currency: 'USD',
-				energyCharges: [
-					{
-						label: 'Delivery',
-						type: 'tiered',
-						tiers: [
-							{ uptoKwh: 500, perKwh: 0.05 },
-							{ uptoKwh: null, perKwh: 0.08 }
-						]
-					}
-				]
-			},
+			tariff: twoTierDelivery(),
 			equipment: [device({ power: { watts: 600 / 0.72 } }), device({ power: { watts: 100 / 0.72 } })]
 		});
 		const average = (500 * 0.05 + 200 * 0.08) / 700;

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { device, flatTariff, line, onlyPeriod, run, sumOfLines } from './fixtures';
+import { device, flatTariff, line, onlyPeriod, run, sumOfLines } from './requests.fixture';
 
 describe('trade rules of thumb (common practice, no source)', () => {
 	const amps = (current: number) =>

@@ -1,7 +1,7 @@
 import { NPV } from '@formulajs/formulajs';
 import { describe, expect, it } from 'vitest';
 import { compare } from './compare';
-import { device, flatTariff } from './fixtures';
+import { device, flatTariff } from './requests.fixture';
 import { parseRequest } from './parse';
 import { type CompareRequestInput, compareRequestSchema } from './request.schema';
 

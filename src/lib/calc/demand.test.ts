@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { type ScheduleInput, device, line, onlyPeriod } from './fixtures';
+import { type ScheduleInput, device, line, onlyPeriod } from './requests.fixture';
 import type { TariffInput } from './tariff.schema';
 
 type DemandChargeInput = NonNullable<TariffInput['demandCharges']>[number];

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { type ScheduleInput, device, flatTariff, line, onlyPeriod } from './fixtures';
+import { type ScheduleInput, device, flatTariff, line, onlyPeriod } from './requests.fixture';
 import type { TariffInput } from './tariff.schema';
+import { twoTierDelivery } from './tariffs.fixture';
 
 const kilowatt = (schedule: ScheduleInput, more: object = {}) =>
 	device({ power: { watts: 1000 }, schedule, ...more });
@@ -29,19 +30,7 @@ describe('a flat charge', () => {
 
 describe('a tiered charge in a calculation', () => {
 	it('tiers the billing period’s total kWh', () => {
-		const tariff: TariffInput = {
-			currency: 'USD',
-			energyCharges: [
-				{
-					label: 'Delivery',
-					type: 'tiered',
-					tiers: [
-						{ uptoKwh: 500, perKwh: 0.05 },
-						{ uptoKwh: null, perKwh: 0.08 }
-					]
-				}
-			]
-		};
+		const tariff = twoTierDelivery();
 		const period = onlyPeriod({ tariff, equipment: [kilowatt({ type: 'always' })] });
 		expect(line(period, 'energy')).toBe(42.6); // 500 × 0.05 + 220 × 0.08
 	});

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { type Edit, issuesAfter, setDevice } from './fixtures';
+import { type Edit, issuesAfter, setDevice } from './requests.fixture';
 
 const windows = (start: string, end: string) => ({ type: 'windows', windows: [{ start, end }] });
 const runs = { type: 'runs', runsPerDay: 5, minutesPerRun: 30, windows: [{ start: '06:00', end: '08:00' }] };

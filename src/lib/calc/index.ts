@@ -42,3 +42,30 @@ export type { DatedTariff, VersionedResponse } from './versions';
 export { REFERENCE_WATTS, referenceMonthlyCost } from './reference';
 export { DUTY_OF, redundancy } from './redundancy';
 export type { Duty, DutyRedundancy } from './redundancy';
+
+// What the app's pages, charts, forms, exports and scripts read from the core besides the three
+// calculations: clock and calendar building blocks, meters, field schemas, units and month names.
+export { tieredAmount } from './bill';
+export { buildCalendar } from './calendar';
+export {
+	daysMatch,
+	INTERVAL_HOURS,
+	INTERVAL_MINUTES,
+	nominalWindowMinutes,
+	slotMask,
+	SLOTS_PER_DAY
+} from './clock';
+export type { DaySelector } from './clock';
+export { STANDARD_DAY } from './day-shapes';
+export { DemandMeter } from './demand';
+export { UsageMeter } from './energy';
+export { amount, list } from './fields';
+export type { Bounds } from './fields';
+export type { HolidaySpec } from './holidays';
+export { groupLoads, ProfileBook } from './loads';
+export { MONTH_ABBREVIATIONS, MONTH_NAMES } from './months';
+export { billingSpans } from './periods';
+export { RateBook } from './rates';
+export { dayProfile } from './schedule';
+export { NUL_MESSAGE, storableText, SURROGATE_MESSAGE, UNSTORABLE, unstorableMessage } from './storable-text';
+export { METERS_PER_FOOT, STANDARD_GRAVITY_M_PER_S2 } from './units';

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { VALID_INPUT, issuesAfter, setDevice, setField } from './fixtures';
+import { VALID_INPUT, issuesAfter, setDevice, setField } from './requests.fixture';
 import { parseRequest } from './parse';
 import { calculateRequestSchema } from './request.schema';
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { type Edit, issuesAfter, setField } from './fixtures';
+import { type Edit, issuesAfter, setField } from './requests.fixture';
 
 const billing = (from: string, to: string) => setField('period', { billingPeriods: [{ from, to }] });
 

@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { deviceArb, periodArb, rate, requestArb, tariffArb, zoneArb } from './arbitraries';
+import { deviceArb, periodArb, rate, requestArb, tariffArb, zoneArb } from './arbitraries.fixture';
 import { calculate } from './calculate';
 import { dayNumber, isoDate } from './dates';
 import { parseRequest } from './parse';

@@ -1,34 +1,27 @@
 import Holidays from 'date-holidays';
 import { describe, expect, it } from 'vitest';
 import { dayNumber, isWeekend } from './dates';
-import { type ScheduleInput, device, line, onlyPeriod } from './fixtures';
+import { type ScheduleInput, device, line, onlyPeriod } from './requests.fixture';
 import type { TariffInput } from './tariff.schema';
+import { tou, touPeriod } from './tariffs.fixture';
 
 /** Invented "Demo Valley Power" time-of-use supply: summer on-peak weekdays, a night rate past midnight. */
 function touTariff(more: Partial<TariffInput> = {}): TariffInput {
 	return {
 		currency: 'USD',
 		energyCharges: [
-			{
-				label: 'Supply',
-				type: 'tou',
-				seasons: [
-					{
-						months: [6, 7, 8, 9],
-						periods: [
-							{
-								label: 'On-peak',
-								perKwh: 0.3,
-								days: 'weekdays',
-								windows: [{ start: '16:00', end: '21:00' }]
-							},
-							{ label: 'Night', perKwh: 0.05, days: 'all', windows: [{ start: '22:00', end: '06:00' }] }
-						],
-						otherPerKwh: 0.1
-					},
-					{ months: [1, 2, 3, 4, 5, 10, 11, 12], periods: [], otherPerKwh: 0.08 }
-				]
-			}
+			tou(
+				'Supply',
+				{
+					months: [6, 7, 8, 9],
+					periods: [
+						touPeriod('On-peak', 0.3, 'weekdays', '16:00', '21:00'),
+						touPeriod('Night', 0.05, 'all', '22:00', '06:00')
+					],
+					otherPerKwh: 0.1
+				},
+				{ months: [1, 2, 3, 4, 5, 10, 11, 12], periods: [], otherPerKwh: 0.08 }
+			)
 		],
 		...more
 	};

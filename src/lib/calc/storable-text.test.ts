@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { issuesAfter, request, setDevice } from './fixtures';
+import { issuesAfter, request, setDevice } from './requests.fixture';
 import { parseRequest } from './parse';
 import { calculateRequestSchema } from './request.schema';
 import { SURROGATE_MESSAGE } from './storable-text';

@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { parseRequest } from './parse';
 import { periodOverlapIssues, seasonCoverageIssues, tierIssues } from './tariff';
 import { tariffSchema } from './tariff.schema';
+import { tiered } from './tariffs.fixture';
 
 const window = (start: string, end: string) => ({ start, end });
 
@@ -17,17 +18,7 @@ describe('tiers', () => {
 
 	it('reports tiers that do not increase, and a last tier with an end', () => {
 		const issues = issuesOf({
-			energyCharges: [
-				{
-					label: 'Delivery',
-					type: 'tiered',
-					tiers: [
-						{ uptoKwh: 500, perKwh: 0.05 },
-						{ uptoKwh: 400, perKwh: 0.06 },
-						{ uptoKwh: 900, perKwh: 0.07 }
-					]
-				}
-			]
+			energyCharges: [tiered('Delivery', [500, 0.05], [400, 0.06], [900, 0.07])]
 		});
 		expect(issues.map((issue) => issue.path)).toEqual([
 			'energyCharges.0.tiers.1.uptoKwh',

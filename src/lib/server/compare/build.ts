@@ -8,7 +8,7 @@ import {
 	type CompareRequest,
 	type Tariff
 } from '$lib/calc';
-import { hasMainsInWater } from '$lib/cautions';
+import { needsElectricalCaution } from '$lib/cautions';
 import type { ComparedScenario, ComparisonQuery, ComparisonReport } from '$lib/compare/types';
 import type { DeviceSpec } from '$lib/server/db/schema';
 import { requireScenarioAccess } from '$lib/server/guard';
@@ -156,7 +156,7 @@ export async function buildComparison(event: RequestEvent, query: ComparisonQuer
 		deviceCount: l.specs.length,
 		kwhByCategory: kwhByCategory(l.specs, result.scenarios[i]?.periods ?? []),
 		redundancy: redundancy(parsed.data.scenarios[i]?.equipment ?? []),
-		caution: hasMainsInWater(l.specs)
+		caution: needsElectricalCaution(l.specs)
 	}));
 	const report: ComparisonReport = {
 		query,

@@ -1,6 +1,6 @@
 import type { Schedule } from '$lib/calc/equipment.schema';
 import type { HolidaySpec } from '$lib/calc/holidays';
-import { daysText, monthsText, windowsText } from '$lib/tariff-phrases';
+import { daysText, monthsText, windowsText } from '$lib/text/tariff';
 
 // The same figures as the tariff words' figureText, with one formatter kept: a workbook of thousands
 // of devices would otherwise build a new one per number.

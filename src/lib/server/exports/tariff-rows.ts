@@ -1,5 +1,5 @@
 import type { EnergyCharge } from '$lib/calc/tariff.schema';
-import { limitsMonths, monthsText, whenText } from '$lib/tariff-phrases';
+import { limitsMonths, monthsText, whenText } from '$lib/text/tariff';
 import { type SheetWriter, a1, on } from './cells';
 import type { Formats } from './formats';
 

@@ -1,5 +1,5 @@
 import type { Tariff } from '$lib/calc/tariff.schema';
-import { demandText, riderText, taxText } from '$lib/tariff-sentences';
+import { demandText, riderText, taxText } from '$lib/text/tariff';
 import type { SheetWriter } from './cells';
 import { formatsFor } from './formats';
 import { type EnergyCells, TariffRows } from './tariff-rows';

@@ -17,7 +17,7 @@ import { priceScenario } from '$lib/server/services/results.service';
 import { scenarioSchema } from '$lib/forms/site.schema';
 import { fieldErrors, keepValues } from '$lib/forms/errors';
 import { storableText } from '$lib/forms/storable';
-import { hasMainsInWater } from '$lib/cautions';
+import { needsElectricalCaution } from '$lib/cautions';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load = (async (event) => {
@@ -46,7 +46,7 @@ export const load = (async (event) => {
 					archived: !!s.archivedAt,
 					deleted: !!s.deletedAt,
 					deviceCount: devices.length,
-					caution: hasMainsInWater(devices.map((d) => d.spec)),
+					caution: needsElectricalCaution(devices.map((d) => d.spec)),
 					annual: priced?.ok ? { cost: priced.result.totals.cost, kwh: priced.result.totals.kwh } : null,
 					problem: priced && !priced.ok ? priced.message : null
 				};

@@ -1,7 +1,7 @@
 import { error } from '@sveltejs/kit';
 import { requireScenarioAccess } from '$lib/server/guard';
 import { listDevices } from '$lib/server/services/site.service';
-import { hasMainsInWater } from '$lib/cautions';
+import { needsElectricalCaution } from '$lib/cautions';
 import type { PageServerLoad } from './$types';
 
 export const load = (async (event) => {
@@ -18,7 +18,7 @@ export const load = (async (event) => {
 			revision: scenario.revision
 		},
 		devices: specs,
-		caution: hasMainsInWater(specs),
+		caution: needsElectricalCaution(specs),
 		canEdit: role !== 'viewer'
 	};
 }) satisfies PageServerLoad;

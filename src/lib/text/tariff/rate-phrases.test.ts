@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { listText, moneyText, monthsText, whenText } from './tariff-phrases';
+import { listText, moneyText, monthsText, whenText } from './rate-phrases';
 
 describe('monthsText', () => {
 	// Expected wording: runs of the calendar as a person would say them (common practice, no source).

@@ -9,8 +9,8 @@ import {
 	moneyText,
 	monthsText,
 	whenText
-} from './tariff-phrases';
-import { energySentences, labelWithMonths, tiersText, touPeriodText } from './tariff-sentences';
+} from './rate-phrases';
+import { energySentences, labelWithMonths, tiersText, touPeriodText } from './charge-sentences';
 
 export interface Labelled {
 	label: string;

@@ -1,8 +1,7 @@
-import type { AnyTariff } from './tariff-phrases';
-import { moneyText } from './tariff-phrases';
-import { demandText, energySentences, fixedText, riderText, taxText } from './tariff-sentences';
-
-export { describeTariffDiff } from './tariff-diff';
+/** The tariff page's plain-words description: each charge of a tariff in sentences, grouped by kind. */
+import type { AnyTariff } from './rate-phrases';
+import { moneyText } from './rate-phrases';
+import { demandText, energySentences, fixedText, riderText, taxText } from './charge-sentences';
 
 /** One block of the tariff page's plain-words description. */
 export interface TariffSection {

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import type { TariffInput } from '$lib/calc/tariff.schema';
-import { describeTariffDiff } from './tariff-words';
+import { tiered, tou, touPeriod } from '$lib/calc/tariffs.fixture';
+import { describeTariffDiff } from './version-diff';
 
 // Invented versions of an invented tariff; the expected lines are the wording the version history
 // promises (the tariff-page brief; common practice, no source).
@@ -10,28 +11,16 @@ const base: TariffInput = {
 	fixedCharges: [{ label: 'Customer charge', perMonth: 12.5 }],
 	energyCharges: [
 		{ label: 'Energy', type: 'flat', perKwh: 0.18 },
-		{
-			label: 'Delivery',
-			type: 'tiered',
-			tiers: [
-				{ uptoKwh: 500, perKwh: 0.05 },
-				{ uptoKwh: null, perKwh: 0.08 }
-			]
-		},
-		{
-			label: 'Supply',
-			type: 'tou',
-			seasons: [
-				{
-					months: [6, 7, 8, 9],
-					periods: [
-						{ label: 'On-peak', perKwh: 0.32, days: 'weekdays', windows: [{ start: '16:00', end: '21:00' }] }
-					],
-					otherPerKwh: 0.12
-				},
-				{ months: [10, 11, 12, 1, 2, 3, 4, 5], periods: [], otherPerKwh: 0.1 }
-			]
-		}
+		tiered('Delivery', [500, 0.05], [null, 0.08]),
+		tou(
+			'Supply',
+			{
+				months: [6, 7, 8, 9],
+				periods: [touPeriod('On-peak', 0.32, 'weekdays', '16:00', '21:00')],
+				otherPerKwh: 0.12
+			},
+			{ months: [10, 11, 12, 1, 2, 3, 4, 5], periods: [], otherPerKwh: 0.1 }
+		)
 	],
 	demandCharges: [{ label: 'Demand', perKw: 8 }],
 	taxes: [{ label: 'Sales tax', percent: 4 }]
@@ -40,6 +29,14 @@ const base: TariffInput = {
 type Edit = (tariff: TariffInput) => TariffInput;
 const copy = (tariff: TariffInput): TariffInput => structuredClone(tariff);
 const energyAt = (tariff: TariffInput, i: number) => tariff.energyCharges?.[i];
+/** An edit that changes a copy of the tariff in place. */
+const editing =
+	(change: (next: TariffInput) => void): Edit =>
+	(t) => {
+		const next = copy(t);
+		change(next);
+		return next;
+	};
 
 describe('describeTariffDiff, one change at a time', () => {
 	const cases: Array<{ name: string; edit: Edit; lines: string[] }> = [
@@ -73,35 +70,29 @@ describe('describeTariffDiff, one change at a time', () => {
 		},
 		{
 			name: 'a dearer second tier',
-			edit: (t) => {
-				const next = copy(t);
+			edit: editing((next) => {
 				const delivery = energyAt(next, 1);
 				if (delivery?.type === 'tiered' && delivery.tiers[1]) delivery.tiers[1].perKwh = 0.085;
-				return next;
-			},
+			}),
 			lines: ['Delivery, above 500 kWh: $0.08 → $0.085 per kWh']
 		},
 		{
 			name: 'a longer first tier',
-			edit: (t) => {
-				const next = copy(t);
+			edit: editing((next) => {
 				const delivery = energyAt(next, 1);
 				if (delivery?.type === 'tiered' && delivery.tiers[0]) delivery.tiers[0].uptoKwh = 600;
-				return next;
-			},
+			}),
 			lines: [
 				'Delivery: tiers now $0.05 per kWh for the first 600 kWh of each billing period, then $0.08 per kWh'
 			]
 		},
 		{
 			name: 'a dearer and shifted on-peak period',
-			edit: (t) => {
-				const next = copy(t);
+			edit: editing((next) => {
 				const supply = energyAt(next, 2);
 				const period = supply?.type === 'tou' ? supply.seasons[0]?.periods[0] : undefined;
 				if (period) Object.assign(period, { perKwh: 0.34, windows: [{ start: '15:00', end: '20:00' }] });
-				return next;
-			},
+			}),
 			lines: [
 				'Supply, June–September, On-peak: $0.32 → $0.34 per kWh',
 				'Supply, June–September, On-peak: now on weekdays 15:00–20:00'
@@ -109,12 +100,10 @@ describe('describeTariffDiff, one change at a time', () => {
 		},
 		{
 			name: 'a cheaper off-season',
-			edit: (t) => {
-				const next = copy(t);
+			edit: editing((next) => {
 				const supply = energyAt(next, 2);
 				if (supply?.type === 'tou' && supply.seasons[1]) supply.seasons[1].otherPerKwh = 0.095;
-				return next;
-			},
+			}),
 			lines: ['Supply, October–May, other times: $0.10 → $0.095 per kWh']
 		},
 		{
@@ -157,17 +146,7 @@ describe('describeTariffDiff, other situations', () => {
 	it('spells out a charge that changes kind', () => {
 		const after: TariffInput = {
 			...copy(base),
-			energyCharges: [
-				{
-					label: 'Energy',
-					type: 'tiered',
-					tiers: [
-						{ uptoKwh: 1000, perKwh: 0.17 },
-						{ uptoKwh: null, perKwh: 0.2 }
-					]
-				},
-				...(base.energyCharges ?? []).slice(1)
-			]
+			energyCharges: [tiered('Energy', [1000, 0.17], [null, 0.2]), ...(base.energyCharges ?? []).slice(1)]
 		};
 		expect(describeTariffDiff(base, after)).toEqual([
 			'Energy: now tiered (was flat)',

@@ -1,3 +1,4 @@
+/** The small phrases a rate is written with: money in the tariff's currency, months, clock windows, days. */
 import { MONTH_NAMES } from '$lib/calc/months';
 import type { Tariff, TariffInput } from '$lib/calc/tariff.schema';
 

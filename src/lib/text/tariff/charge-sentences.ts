@@ -1,3 +1,4 @@
+/** The words for each kind of charge, without the label; `describeTariff` and the diff build on them. */
 import type { TariffInput } from '$lib/calc/tariff.schema';
 import {
 	type EnergyInput,
@@ -10,9 +11,7 @@ import {
 	monthsText,
 	whenText,
 	windowsText
-} from './tariff-phrases';
-
-/** The words for each kind of charge, without the label; `describeTariff` and the diff build on them. */
+} from './rate-phrases';
 
 export type FixedInput = NonNullable<TariffInput['fixedCharges']>[number];
 export type DemandInput = NonNullable<TariffInput['demandCharges']>[number];

@@ -1,6 +1,7 @@
-import { type AnyTariff, figureText, moneyText } from './tariff-phrases';
-import { type FixedInput, demandText, energySentences, fixedText } from './tariff-sentences';
-import { type Labelled, diffList, energyChanges } from './tariff-diff-parts';
+/** The version history's words: what changed between two versions of a tariff, one line per change. */
+import { type AnyTariff, figureText, moneyText } from './rate-phrases';
+import { type FixedInput, demandText, energySentences, fixedText } from './charge-sentences';
+import { type Labelled, diffList, energyChanges } from './diff-parts';
 
 /** "$12.50 → $14.00 a month", or "$12.50 a month → $0.45 a day" when the charge changes kind. */
 function fixedChanges(a: FixedInput, b: FixedInput, ca: string, cb: string): string[] {

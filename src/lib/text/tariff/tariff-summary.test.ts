@@ -1,20 +1,14 @@
 import { describe, expect, it } from 'vitest';
 import { tariffSchema, type TariffInput } from '$lib/calc/tariff.schema';
-import { describeTariff } from './tariff-words';
+import { tiered, touPeriod, twoTierDelivery, usdTariff } from '$lib/calc/tariffs.fixture';
+import { describeTariff } from './tariff-summary';
 
 // Invented tariffs for these tests only (no real utility or rate). The expected sentences are the
 // wording Runrate's tariff page promises (the tariff-page brief; common practice, no source).
 
 const supplySummer = {
 	months: [6, 7, 8, 9],
-	periods: [
-		{
-			label: 'On-peak',
-			perKwh: 0.32,
-			days: 'weekdays' as const,
-			windows: [{ start: '16:00', end: '21:00' }]
-		}
-	],
+	periods: [touPeriod('On-peak', 0.32, 'weekdays', '16:00', '21:00')],
 	otherPerKwh: 0.12
 };
 const supplyRest = { months: [10, 11, 12, 1, 2, 3, 4, 5], periods: [], otherPerKwh: 0.1 };
@@ -48,37 +42,12 @@ describe('describeTariff, one charge at a time', () => {
 		},
 		{
 			name: 'two inclining tiers',
-			tariff: {
-				currency: 'USD',
-				energyCharges: [
-					{
-						label: 'Delivery',
-						type: 'tiered',
-						tiers: [
-							{ uptoKwh: 500, perKwh: 0.05 },
-							{ uptoKwh: null, perKwh: 0.08 }
-						]
-					}
-				]
-			},
+			tariff: twoTierDelivery(),
 			line: 'Delivery: $0.05 per kWh for the first 500 kWh of each billing period, then $0.08 per kWh.'
 		},
 		{
 			name: 'three tiers with a middle band',
-			tariff: {
-				currency: 'USD',
-				energyCharges: [
-					{
-						label: 'Delivery',
-						type: 'tiered',
-						tiers: [
-							{ uptoKwh: 500, perKwh: 0.05 },
-							{ uptoKwh: 1500, perKwh: 0.065 },
-							{ uptoKwh: null, perKwh: 0.08 }
-						]
-					}
-				]
-			},
+			tariff: usdTariff({ energyCharges: [tiered('Delivery', [500, 0.05], [1500, 0.065], [null, 0.08])] }),
 			line:
 				'Delivery: $0.05 per kWh for the first 500 kWh of each billing period, ' +
 				'$0.065 per kWh from 500 to 1,500 kWh, then $0.08 per kWh.'

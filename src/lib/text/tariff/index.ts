@@ -1,0 +1,8 @@
+/**
+ * The tariff in plain words, for the tariff page, its version history, its charts and the exported
+ * workbook: one place to import them from, so a rate reads the same everywhere.
+ */
+export * from './rate-phrases';
+export * from './charge-sentences';
+export { type TariffSection, describeTariff } from './tariff-summary';
+export { describeTariffDiff } from './version-diff';
