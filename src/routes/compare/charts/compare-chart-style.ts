@@ -1,7 +1,7 @@
 import type { ComparisonReport } from '$lib/compare/types';
-import { LEGEND_DASH, type LegendEntry } from '../chart-legend';
-import { CATEGORY_COLOURS, CATEGORY_NAMES } from '../scenario-charts/chart-style';
-import type { Category } from '../scenario-charts/daily-profile';
+import { LEGEND_DASH, type LegendEntry } from '$lib/components/charts/chart-legend';
+import { CATEGORY_COLOURS, CATEGORY_NAMES } from '$lib/components/charts/chart-style';
+import type { Category } from '$lib/components/charts/chart-style';
 
 /**
  * How the compare charts tell scenarios apart. The colours come from the scenario charts' family

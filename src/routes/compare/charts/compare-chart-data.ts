@@ -1,8 +1,8 @@
 import { EQUIPMENT_CATEGORIES } from '$lib/calc/equipment.schema';
 import type { ChargeKind } from '$lib/calc/types';
 import type { ComparisonReport } from '$lib/compare/types';
-import { periodNames } from '../scenario-charts/chart-data';
-import { CHARGE_KINDS } from '../scenario-charts/chart-style';
+import { periodNames } from '$lib/components/charts/chart-data';
+import { CHARGE_KINDS } from '$lib/components/charts/chart-style';
 
 /**
  * A comparison shaped for the compare page's bar charts: the months side by side, and each
@@ -120,4 +120,4 @@ export function stackExtent(stacks: ReadonlyArray<ScenarioStack<string>>): [numb
 	return [Math.min(0, ...ends), Math.max(0, ...ends)];
 }
 
-export { thinTicks } from '../chart-ticks';
+export { thinTicks } from '$lib/components/charts/chart-ticks';
