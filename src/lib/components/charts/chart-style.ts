@@ -95,3 +95,9 @@ export function moneyLabel(amount: number, currency: string, compact = false): s
 export function figureLabel(value: number, digits = 1): string {
 	return value.toLocaleString('en-US', { maximumFractionDigits: digits });
 }
+
+/** The axes' figures and names: small, soft, not bold (layerchart's defaults are bold). */
+export const TICK_LABEL = { class: 'fill-ink-soft text-xs font-normal' };
+
+/** The grid lines a value axis draws across the chart. */
+export const AXIS_GRID = { class: 'stroke-mist-line' };
