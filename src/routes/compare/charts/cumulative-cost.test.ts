@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { inventedReport } from './compare-chart-fixture';
+import { inventedReport } from './compare-chart.fixture';
 import {
 	cumulativeCosts,
 	cumulativeLines,

@@ -3,6 +3,7 @@ import { STANDARD_DAY } from '$lib/calc/day-shapes';
 import { EQUIPMENT_CATEGORIES, equipmentSchema, type EquipmentInput } from '$lib/calc/equipment.schema';
 import { unitWatts } from '$lib/calc/power';
 import { dayProfile } from '$lib/calc/schedule';
+import type { Category } from '$lib/components/charts/chart-style';
 
 /**
  * The load over one representative day, drawn in the browser from the equipment list alone. It uses
@@ -13,7 +14,7 @@ import { dayProfile } from '$lib/calc/schedule';
  */
 
 export type DayType = 'weekday' | 'weekend';
-export type Category = (typeof EQUIPMENT_CATEGORIES)[number];
+export type { Category };
 
 export interface ProfileOptions {
 	dayType: DayType;

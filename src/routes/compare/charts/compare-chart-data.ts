@@ -1,8 +1,9 @@
 import { EQUIPMENT_CATEGORIES } from '$lib/calc/equipment.schema';
 import type { ChargeKind } from '$lib/calc/types';
 import type { ComparisonReport } from '$lib/compare/types';
-import { periodNames } from '../scenario-charts/chart-data';
-import { CHARGE_KINDS } from '../scenario-charts/chart-style';
+import { scenarioName, type ScenarioKey } from './compare-chart-style';
+import { periodNames } from '$lib/components/charts/chart-data';
+import { CHARGE_KINDS } from '$lib/components/charts/chart-style';
 
 /**
  * A comparison shaped for the compare page's bar charts: the months side by side, and each
@@ -120,4 +121,26 @@ export function stackExtent(stacks: ReadonlyArray<ScenarioStack<string>>): [numb
 	return [Math.min(0, ...ends), Math.max(0, ...ends)];
 }
 
-export { thinTicks } from '../chart-ticks';
+/**
+ * The table under a chart of stacked bars: a row a scenario (named as the legend names it), a
+ * column a key shown, then the bar's total, each figure in `format`.
+ */
+export function stackTableRows<K extends string>(
+	keys: readonly ScenarioKey[],
+	stacks: ReadonlyArray<ScenarioStack<K>>,
+	shown: readonly K[],
+	format: (amount: number) => string
+): { key: number; cells: string[] }[] {
+	const amountOf = (index: number, key: K) =>
+		stacks[index]?.segments.find((segment) => segment.key === key)?.amount ?? 0;
+	return keys.map((scenario) => ({
+		key: scenario.index,
+		cells: [
+			scenarioName(scenario),
+			...shown.map((key) => format(amountOf(scenario.index, key))),
+			format(stacks[scenario.index]?.total ?? 0)
+		]
+	}));
+}
+
+export { thinTicks } from '$lib/components/charts/chart-ticks';

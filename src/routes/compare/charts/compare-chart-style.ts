@@ -1,7 +1,7 @@
 import type { ComparisonReport } from '$lib/compare/types';
-import { LEGEND_DASH, type LegendEntry } from '../chart-legend';
-import { CATEGORY_COLOURS, CATEGORY_NAMES } from '../scenario-charts/chart-style';
-import type { Category } from '../scenario-charts/daily-profile';
+import { LEGEND_DASH, type LegendEntry } from '$lib/components/charts/chart-legend';
+import { CATEGORY_COLOURS, CATEGORY_NAMES } from '$lib/components/charts/chart-style';
+import type { Category } from '$lib/components/charts/chart-style';
 
 /**
  * How the compare charts tell scenarios apart. The colours come from the scenario charts' family
@@ -39,11 +39,16 @@ export function scenarioKeys(report: ComparisonReport): ScenarioKey[] {
 	});
 }
 
+/** A scenario's name as the legends, tables and bars give it: the baseline says so. */
+export function scenarioName(key: ScenarioKey): string {
+	return key.baseline ? `${key.name} (baseline)` : key.name;
+}
+
 /** The scenarios as a legend: the baseline says so, and its line is dashed. */
 export function scenarioLegend(keys: readonly ScenarioKey[]): LegendEntry[] {
 	return keys.map((key) => ({
 		key: key.index,
-		name: key.baseline ? `${key.name} (baseline)` : key.name,
+		name: scenarioName(key),
 		colour: key.colour,
 		dashed: key.baseline
 	}));

@@ -1,5 +1,5 @@
 import type { ChargeKind } from '$lib/calc/types';
-import type { Category } from './daily-profile';
+import type { EQUIPMENT_CATEGORIES } from '$lib/calc';
 
 /**
  * How the scenario charts look: names, colours and number formats. Runrate's categorical colours for the scenario charts, drawn from the app's palette (reed, ink,
@@ -7,6 +7,9 @@ import type { Category } from './daily-profile';
  * each stack differ in lightness as well as hue, so adjacent bands stay apart in grey or bright sun;
  * white strokes between segments do the rest.
  */
+
+/** A kind of equipment, as the charts group and colour it. */
+export type Category = (typeof EQUIPMENT_CATEGORIES)[number];
 
 /** The order charges stack in, bottom to top, and the legend's order. */
 export const CHARGE_KINDS: readonly ChargeKind[] = ['fixed', 'energy', 'demand', 'rider', 'minimum', 'tax'];
@@ -92,3 +95,9 @@ export function moneyLabel(amount: number, currency: string, compact = false): s
 export function figureLabel(value: number, digits = 1): string {
 	return value.toLocaleString('en-US', { maximumFractionDigits: digits });
 }
+
+/** The axes' figures and names: small, soft, not bold (layerchart's defaults are bold). */
+export const TICK_LABEL = { class: 'fill-ink-soft text-xs font-normal' };
+
+/** The grid lines a value axis draws across the chart. */
+export const AXIS_GRID = { class: 'stroke-mist-line' };

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { CHARGE_KINDS } from '../scenario-charts/chart-style';
+import { CHARGE_KINDS } from '$lib/components/charts/chart-style';
 import {
 	categoryOrder,
 	categoryStacks,
@@ -11,10 +11,10 @@ import {
 	stackExtent,
 	thinTicks
 } from './compare-chart-data';
-import { inventedReport, period } from './compare-chart-fixture';
+import { inventedReport, period } from './compare-chart.fixture';
 import { SCENARIO_COLOURS, scenarioKeys } from './compare-chart-style';
 
-// The report is invented (compare-chart-fixture.ts); the expected sums are worked by hand from it.
+// The report is invented (compare-chart.fixture.ts); the expected sums are worked by hand from it.
 
 describe('monthly cost side by side', () => {
 	const groups = monthGroups(inventedReport());

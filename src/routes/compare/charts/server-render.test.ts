@@ -6,9 +6,9 @@ import CategoryKwhChart from './CategoryKwhChart.svelte';
 import ChargeKindChart from './ChargeKindChart.svelte';
 import CumulativeCostChart from './CumulativeCostChart.svelte';
 import MonthlyCostChart from './MonthlyCostChart.svelte';
-import { inventedReport } from './compare-chart-fixture';
+import { inventedReport } from './compare-chart.fixture';
 
-// The invented comparison of compare-chart-fixture.ts, rendered as the server sends it.
+// The invented comparison of compare-chart.fixture.ts, rendered as the server sends it.
 
 const html = (component: Component<{ report: ComparisonReport }>) =>
 	render(component, { props: { report: inventedReport() } }).body;
