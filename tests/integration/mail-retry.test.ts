@@ -71,7 +71,7 @@ beforeAll(async () => {
 	// mail.ts builds its transport from SMTP_URL when first imported: point it here before anything does.
 	env.SMTP_URL = `smtp://127.0.0.1:${(smtp.server.address() as AddressInfo).port}`;
 	({ announceVersion } = await import('$lib/server/services/tariff-notice.service'));
-	const { createWorkspace } = await import('$lib/server/services/workspace.service');
+	const { createWorkspace } = await import('$lib/server/workspaces/workspace.service');
 
 	const owner = await makeUser(recipient, 'Retry test owner (invented)');
 	workspaceId = await createWorkspace(`Retry ${tag}`, owner.id);

@@ -13,8 +13,8 @@ import {
 	resetPassword,
 	requestPasswordReset,
 	signUp
-} from '$lib/server/services/account.service';
-import { acceptInvitation, createWorkspace, invite } from '$lib/server/services/workspace.service';
+} from '$lib/server/accounts/sign-up';
+import { acceptInvitation, createWorkspace, invite } from '$lib/server/workspaces/workspace.service';
 import { makeUser } from './fixtures';
 
 // Account pre-hijack (issue 14, item 3), against the real PostgreSQL and mail catcher of `npm test`.

@@ -12,7 +12,7 @@ import {
 	listMembers,
 	MembershipRuleError,
 	removeMember
-} from '$lib/server/services/workspace.service';
+} from '$lib/server/workspaces/workspace.service';
 import { makeUser } from './fixtures';
 import { newestMailTo } from './mail-catcher';
 

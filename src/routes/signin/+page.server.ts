@@ -5,7 +5,7 @@ import { verifyPassword } from '$lib/server/auth/password';
 import { db } from '$lib/server/db';
 import { users } from '$lib/server/db/schema';
 import { mailLinkLimiter, recordSignInFailure, signInLocked, TOO_MANY } from '$lib/server/rate-limit';
-import { pendingSignUpWith, resendConfirmation } from '$lib/server/services/account.service';
+import { pendingSignUpWith, resendConfirmation } from '$lib/server/accounts/sign-up';
 import { magicLinkSchema, signInSchema } from '$lib/forms/auth.schema';
 import { fieldErrors, keepValues } from '$lib/forms/errors';
 import { safeNext } from '$lib/safe-next';

@@ -8,7 +8,7 @@ import { db } from '../db';
 import { accounts, sessions, users, verificationTokens } from '../db/schema';
 import { logger } from '../log';
 import { mailServer, sendMail } from '../mail';
-import { addressProvenBySignInLink } from '../services/account.service';
+import { addressProvenBySignInLink } from '../accounts/sign-up';
 import { verifyPassword } from './password';
 import { extendSession, revokeSession, SESSION_MAX_AGE_S, startSession } from './sessions';
 import { signInSchema } from '$lib/forms/auth.schema';

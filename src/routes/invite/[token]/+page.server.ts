@@ -2,13 +2,13 @@ import { error, fail, redirect } from '@sveltejs/kit';
 import { z } from 'zod';
 import { handOver } from '$lib/server/auth/hand-over';
 import { requireUser } from '$lib/server/guard';
-import { hasConfirmedAccount } from '$lib/server/services/account.service';
+import { hasConfirmedAccount } from '$lib/server/accounts/sign-up';
 import { signUpLimiter, TOO_MANY } from '$lib/server/rate-limit';
 import {
 	acceptInvitation,
 	findOpenInvitation,
 	MembershipRuleError
-} from '$lib/server/services/workspace.service';
+} from '$lib/server/workspaces/workspace.service';
 import { nameField, newPasswordField } from '$lib/forms/auth.schema';
 import { fieldErrors, keepValues } from '$lib/forms/errors';
 import type { Actions, PageServerLoad } from './$types';

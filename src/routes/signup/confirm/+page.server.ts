@@ -2,7 +2,7 @@ import { fail, redirect } from '@sveltejs/kit';
 import { z } from 'zod';
 import { handOver } from '$lib/server/auth/hand-over';
 import { recordSignInFailure, signInLocked, TOO_MANY } from '$lib/server/rate-limit';
-import { confirmationFor, confirmSignUp } from '$lib/server/services/account.service';
+import { confirmationFor, confirmSignUp } from '$lib/server/accounts/sign-up';
 import { confirmSignUpSchema } from '$lib/forms/auth.schema';
 import { fieldErrors } from '$lib/forms/errors';
 import type { Actions, PageServerLoad } from './$types';

@@ -12,12 +12,12 @@ import {
 	removeMember,
 	renameWorkspace,
 	revokeInvitation
-} from '$lib/server/services/workspace.service';
+} from '$lib/server/workspaces/workspace.service';
 import {
 	deletionDate,
 	restoreWorkspace,
 	scheduleWorkspaceDeletion
-} from '$lib/server/services/workspace-deletion.service';
+} from '$lib/server/workspaces/deletion';
 import { emailField, roleField, workspaceNameField } from '$lib/forms/auth.schema';
 import { fieldErrors, keepValues } from '$lib/forms/errors';
 import { storableText, UNSTORABLE } from '$lib/forms/storable';
