@@ -1,5 +1,5 @@
 // Set-up shared by the integration tests: invented people, sites and tariffs, stored through the app's own
-// services. Nothing here may import workspace.service: it loads mail.ts, whose transport
+// services. Nothing here may import workspaces/invitation.ts: it loads mail.ts, whose transport
 // mail-retry.test.ts must point at its own mail server first.
 import type { TariffInput } from '$lib/calc';
 import type { SiteInput } from '$lib/forms/site.schema';

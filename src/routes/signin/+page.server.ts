@@ -35,7 +35,7 @@ export const actions = {
 		const [user] = await db.select().from(users).where(eq(users.email, email));
 		// One message whether the address is unknown or the password wrong: the form must not tell who has an account.
 		if (!(await verifyPassword(password, user?.passwordHash)) || !user) {
-			// A sign-up not confirmed yet keeps its password on its link, not on the account (account.service.ts).
+			// A sign-up not confirmed yet keeps its password on its link, not on the account (accounts/sign-up.ts).
 			// A fresh link goes out within the mail-link limit, so repeated sign-ins cannot flood the mailbox.
 			const pending = await pendingSignUpWith(email, password);
 			if (pending) {

@@ -24,7 +24,7 @@ const drizzle = DrizzleAdapter(db, {
 /**
  * The Drizzle adapter, except that proving an address with an e-mailed sign-in link never adopts what an
  * unconfirmed sign-up set: Auth.js calls `updateUser` with `emailVerified` when such a link is used, and
- * first the account drops any pending password and sign-up links (see account.service.ts).
+ * first the account drops any pending password and sign-up links (see accounts/sign-up.ts).
  */
 const adapter: Adapter = {
 	...drizzle,

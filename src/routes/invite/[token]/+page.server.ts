@@ -31,7 +31,7 @@ export const load = (async ({ params, locals }) => {
 			workspaceName: invitation.siteName ?? invitation.workspaceName,
 			siteOnly: !!invitation.siteId
 		},
-		// Only a confirmed account owns the address (account.service.ts).
+		// Only a confirmed account owns the address (accounts/sign-up.ts).
 		hasAccount: await hasConfirmedAccount(invitation.email),
 		signedInAs: locals.user?.email ?? null
 	};

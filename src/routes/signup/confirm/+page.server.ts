@@ -12,7 +12,7 @@ const CLOSED = 'This link has been used already, was replaced by a newer one or 
 
 /**
  * Opening the link changes nothing (mail scanners open links too): the page asks for the password chosen
- * at sign-up, and only the link and that password together confirm the account (account.service.ts).
+ * at sign-up, and only the link and that password together confirm the account (accounts/sign-up.ts).
  */
 export const load = (async ({ url }) => {
 	const parsed = query.safeParse({ token: url.searchParams.get('token') });

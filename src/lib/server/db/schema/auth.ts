@@ -59,7 +59,7 @@ export const verificationTokens = pgTable(
  *
  * A sign-up's name and password wait on its `verify-email` row (`name`, `password_hash`) rather than on the
  * user: until someone proves the address *and* knows that password, nobody may sign in with it. An
- * unconfirmed user row therefore never has a password (see account.service.ts, "pending sign-ups").
+ * unconfirmed user row therefore never has a password (see accounts/sign-up.ts, "pending sign-ups").
  */
 export const userTokens = pgTable('user_token', {
 	id: text('id')
