@@ -14,7 +14,8 @@ import {
 	requestPasswordReset,
 	signUp
 } from '$lib/server/accounts/sign-up';
-import { acceptInvitation, createWorkspace, invite } from '$lib/server/workspaces/workspace.service';
+import { createWorkspace } from '$lib/server/workspaces/workspace.service';
+import { acceptInvitation, invite } from '$lib/server/workspaces/invitation';
 import { makeUser } from './fixtures';
 
 // Account pre-hijack (issue 14, item 3), against the real PostgreSQL and mail catcher of `npm test`.

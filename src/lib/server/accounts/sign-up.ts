@@ -1,5 +1,5 @@
 import { and, desc, eq, gt, isNotNull, isNull, sql } from 'drizzle-orm';
-import { db } from '../db';
+import { db, type Tx } from '../db';
 import { userTokens, users } from '../db/schema';
 import { hashPassword, verifyPassword } from '../auth/password';
 import { revokeAllSessions } from '../auth/sessions';
@@ -25,7 +25,6 @@ import { sendMail } from '../mail';
  */
 
 type Purpose = 'verify-email' | 'reset-password';
-type Tx = Parameters<Parameters<typeof db.transaction>[0]>[0];
 const LIFETIME_MS: Record<Purpose, number> = { 'verify-email': 48 * HOUR_MS, 'reset-password': 1 * HOUR_MS };
 
 async function issueToken(

@@ -3,6 +3,15 @@ import { users } from './auth';
 
 export const roleEnum = pgEnum('workspace_role', ['owner', 'editor', 'viewer']);
 
+/** A member's role in a workspace (or a guest's on one shared site); it lives with the column that stores it. */
+export type Role = (typeof roleEnum.enumValues)[number];
+
+/** The rank order: each role may do everything the roles below it may. */
+const ROLE_RANK: Record<Role, number> = { viewer: 1, editor: 2, owner: 3 };
+
+/** Whether someone with `role` may do what needs `needed`; the guard and the services ask the same question. */
+export const roleAtLeast = (role: Role, needed: Role): boolean => ROLE_RANK[role] >= ROLE_RANK[needed];
+
 /** A farm, a school program or a consultancy: the unit that owns sites, tariffs and bills. */
 export const workspaces = pgTable('workspace', {
 	id: uuid('id').primaryKey().defaultRandom(),
