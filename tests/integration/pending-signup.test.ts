@@ -10,10 +10,9 @@ import {
 	confirmSignUp,
 	pendingSignUpWith,
 	resendConfirmation,
-	resetPassword,
-	requestPasswordReset,
 	signUp
 } from '$lib/server/accounts/sign-up';
+import { requestPasswordReset, resetPassword } from '$lib/server/accounts/password-reset';
 import { createWorkspace } from '$lib/server/workspaces/workspace.service';
 import { acceptInvitation, invite } from '$lib/server/workspaces/invitation';
 import { makeUser } from './fixtures';

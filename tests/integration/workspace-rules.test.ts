@@ -5,7 +5,12 @@ import { invitations, memberships } from '$lib/server/db/schema';
 import { createHash } from 'node:crypto';
 import { createWorkspace } from '$lib/server/workspaces/workspace.service';
 import { acceptInvitation, findOpenInvitation, invite } from '$lib/server/workspaces/invitation';
-import { changeRole, listMembers, MembershipRuleError, removeMember } from '$lib/server/workspaces/membership';
+import {
+	changeRole,
+	listMembers,
+	MembershipRuleError,
+	removeMember
+} from '$lib/server/workspaces/membership';
 import { makeUser } from './fixtures';
 import { newestMailTo } from './mail-catcher';
 

@@ -37,7 +37,8 @@ export async function requireRole(
 	if (!UUID.test(workspaceId)) error(404, 'Not found');
 	const row = await findMembership(workspaceId, user.id);
 	if (!row) error(404, 'Not found');
-	if (!roleAtLeast(row.role, needed)) error(403, `This needs the ${needed} role; you are a ${row.role} here.`);
+	if (!roleAtLeast(row.role, needed))
+		error(403, `This needs the ${needed} role; you are a ${row.role} here.`);
 	return { user, workspace: { id: row.id, name: row.name }, role: row.role };
 }
 

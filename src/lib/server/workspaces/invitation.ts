@@ -1,6 +1,16 @@
 import { and, asc, eq, gt, isNull } from 'drizzle-orm';
+import { z } from 'zod';
 import { db } from '../db';
-import { invitations, memberships, siteGrants, sites, userTokens, users, workspaces, type Role } from '../db/schema';
+import {
+	invitations,
+	memberships,
+	siteGrants,
+	sites,
+	userTokens,
+	users,
+	workspaces,
+	type Role
+} from '../db/schema';
 import { hashPassword } from '../auth/password';
 import { HOUR_MS, hashToken, newToken } from '../auth/tokens';
 import { sendMail } from '../mail';
@@ -108,8 +118,15 @@ export async function revokeInvitation(workspaceId: string, invitationId: string
 		);
 }
 
-/** The invitation behind a link, with the workspace's name, or null when unknown, used, revoked or expired. */
+/** The shape of a link's token; anything else is no invitation, and the database is not asked. */
+const tokenSchema = z.string().min(20).max(100);
+
+/**
+ * The invitation behind a link, with the workspace's name, or null when the token is malformed, unknown,
+ * used, revoked or expired.
+ */
 export async function findOpenInvitation(token: string) {
+	if (!tokenSchema.safeParse(token).success) return null;
 	const [row] = await db
 		.select({
 			id: invitations.id,
@@ -126,6 +143,34 @@ export async function findOpenInvitation(token: string) {
 		.leftJoin(sites, eq(sites.id, invitations.siteId))
 		.where(openByToken(token));
 	return row ?? null;
+}
+
+/**
+ * Accepts for someone signed in, only when the invitation was sent to their address: 'closed' when the
+ * link no longer works, `{ sentTo }` when it is someone else's, else where the acceptance leads.
+ */
+export async function acceptAsUser(
+	token: string,
+	user: { id: string; email: string }
+): Promise<'closed' | { sentTo: string } | { home: string }> {
+	const invitation = await findOpenInvitation(token);
+	if (!invitation) return 'closed';
+	if (invitation.email !== user.email.toLowerCase()) return { sentTo: invitation.email };
+	const accepted = await acceptInvitation(token, { userId: user.id });
+	return accepted ? { home: invitationHome(accepted) } : 'closed';
+}
+
+/**
+ * Accepts for someone without an account, who chooses a name and password here: 'closed' when the link no
+ * longer works, `{ refused }` with the reason when the owner rule turns it down, else the acceptance.
+ */
+export async function joinByInvitation(token: string, who: { name: string; password: string }) {
+	try {
+		return (await acceptInvitation(token, who)) ?? ('closed' as const);
+	} catch (e: unknown) {
+		if (e instanceof MembershipRuleError) return { refused: e.message };
+		throw e;
+	}
 }
 
 /** Where an accepted invitation leads: the shared site, or the workspace. */

@@ -1,0 +1,21 @@
+import { eq } from 'drizzle-orm';
+import { db } from '../db';
+import { users } from '../db/schema';
+import { verifyPassword } from '../auth/password';
+import { pendingSignUpWith, type PendingSignUp } from './sign-up';
+
+/** What a password sign-in attempt found: the account, a sign-up still waiting for its link, or nothing. */
+export type PasswordCheck =
+	{ found: 'account' } | { found: 'pending'; pending: PendingSignUp } | { found: 'none' };
+
+/**
+ * Checks an e-mail and password before Auth.js signs the person in. The caller answers "unknown address"
+ * and "wrong password" alike, so the form never tells who has an account; the hash comparison runs either
+ * way. A sign-up not confirmed yet keeps its password on its link, not on the account (sign-up.ts).
+ */
+export async function checkPassword(email: string, password: string): Promise<PasswordCheck> {
+	const [user] = await db.select().from(users).where(eq(users.email, email));
+	if ((await verifyPassword(password, user?.passwordHash)) && user) return { found: 'account' };
+	const pending = await pendingSignUpWith(email, password);
+	return pending ? { found: 'pending', pending } : { found: 'none' };
+}
