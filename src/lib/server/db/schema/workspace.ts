@@ -1,4 +1,5 @@
 import { index, pgEnum, pgTable, primaryKey, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { belongsTo, createdAt, uuidId } from './columns';
 import { users } from './auth';
 
 export const roleEnum = pgEnum('workspace_role', ['owner', 'editor', 'viewer']);
@@ -14,24 +15,22 @@ export const roleAtLeast = (role: Role, needed: Role): boolean => ROLE_RANK[role
 
 /** A farm, a school program or a consultancy: the unit that owns sites, tariffs and bills. */
 export const workspaces = pgTable('workspace', {
-	id: uuid('id').primaryKey().defaultRandom(),
+	id: uuidId(),
 	name: text('name').notNull(),
 	/** Set when an owner deletes the workspace: it is kept (and can be restored) until then, then purged. */
 	deleteAfter: timestamp('delete_after', { mode: 'date' }),
-	createdAt: timestamp('created_at', { mode: 'date' }).notNull().defaultNow()
+	createdAt: createdAt()
 });
 
 export const memberships = pgTable(
 	'membership',
 	{
-		workspaceId: uuid('workspace_id')
-			.notNull()
-			.references(() => workspaces.id, { onDelete: 'cascade' }),
+		workspaceId: belongsTo('workspace_id', () => workspaces.id),
 		userId: text('user_id')
 			.notNull()
 			.references(() => users.id, { onDelete: 'cascade' }),
 		role: roleEnum('role').notNull(),
-		createdAt: timestamp('created_at', { mode: 'date' }).notNull().defaultNow()
+		createdAt: createdAt()
 	},
 	(m) => [primaryKey({ columns: [m.workspaceId, m.userId] }), index('membership_user_idx').on(m.userId)]
 );
@@ -40,10 +39,8 @@ export const memberships = pgTable(
 export const invitations = pgTable(
 	'invitation',
 	{
-		id: uuid('id').primaryKey().defaultRandom(),
-		workspaceId: uuid('workspace_id')
-			.notNull()
-			.references(() => workspaces.id, { onDelete: 'cascade' }),
+		id: uuidId(),
+		workspaceId: belongsTo('workspace_id', () => workspaces.id),
 		email: text('email').notNull(),
 		role: roleEnum('role').notNull(),
 		/** Set for a site-level share: the invitee gets that site only, as editor or viewer. */
@@ -53,7 +50,7 @@ export const invitations = pgTable(
 		expiresAt: timestamp('expires_at', { mode: 'date' }).notNull(),
 		acceptedAt: timestamp('accepted_at', { mode: 'date' }),
 		revokedAt: timestamp('revoked_at', { mode: 'date' }),
-		createdAt: timestamp('created_at', { mode: 'date' }).notNull().defaultNow()
+		createdAt: createdAt()
 	},
 	(i) => [index('invitation_workspace_idx').on(i.workspaceId)]
 );
@@ -62,15 +59,13 @@ export const invitations = pgTable(
 export const notices = pgTable(
 	'notice',
 	{
-		id: uuid('id').primaryKey().defaultRandom(),
-		workspaceId: uuid('workspace_id')
-			.notNull()
-			.references(() => workspaces.id, { onDelete: 'cascade' }),
+		id: uuidId(),
+		workspaceId: belongsTo('workspace_id', () => workspaces.id),
 		/** Makes a retried job idempotent: the same news is recorded once. */
 		dedupeKey: text('dedupe_key').notNull().unique(),
 		title: text('title').notNull(),
 		body: text('body').notNull(),
-		createdAt: timestamp('created_at', { mode: 'date' }).notNull().defaultNow()
+		createdAt: createdAt()
 	},
 	(n) => [index('notice_workspace_idx').on(n.workspaceId, n.createdAt)]
 );
