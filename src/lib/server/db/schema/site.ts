@@ -12,7 +12,7 @@ import {
 } from 'drizzle-orm/pg-core';
 import { belongsTo, createdAt, updatedAt, uuidId } from './columns';
 import type { EquipmentInput } from '$lib/calc';
-import { users } from './auth';
+import { belongsToUser, users } from './auth';
 import { tariffs } from './tariff';
 import { workspaces } from './workspace';
 
@@ -87,9 +87,7 @@ export const siteGrants = pgTable(
 	'site_grant',
 	{
 		siteId: belongsTo('site_id', () => sites.id),
-		userId: text('user_id')
-			.notNull()
-			.references(() => users.id, { onDelete: 'cascade' }),
+		userId: belongsToUser('user_id'),
 		role: siteRoleEnum('role').notNull(),
 		createdAt: createdAt()
 	},

@@ -1,6 +1,6 @@
 import { index, pgEnum, pgTable, primaryKey, text, timestamp, uuid } from 'drizzle-orm/pg-core';
 import { belongsTo, createdAt, uuidId } from './columns';
-import { users } from './auth';
+import { belongsToUser, users } from './auth';
 
 export const roleEnum = pgEnum('workspace_role', ['owner', 'editor', 'viewer']);
 
@@ -26,9 +26,7 @@ export const memberships = pgTable(
 	'membership',
 	{
 		workspaceId: belongsTo('workspace_id', () => workspaces.id),
-		userId: text('user_id')
-			.notNull()
-			.references(() => users.id, { onDelete: 'cascade' }),
+		userId: belongsToUser('user_id'),
 		role: roleEnum('role').notNull(),
 		createdAt: createdAt()
 	},
