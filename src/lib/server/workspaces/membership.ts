@@ -1,4 +1,4 @@
-import { and, asc, count, eq } from 'drizzle-orm';
+import { and, asc, count, eq, type SQL } from 'drizzle-orm';
 import { db, type Tx } from '../db';
 import { memberships, siteGrants, users, workspaces, type Role } from '../db/schema';
 
@@ -36,14 +36,20 @@ export async function siteGrantRole(siteId: string, userId: string): Promise<Rol
 	return grant?.role ?? null;
 }
 
+/** The people a membership or a site grant names, with its role, by e-mail. */
+function peopleIn<T extends typeof memberships | typeof siteGrants>(grants: T, where: SQL) {
+	return db
+		.select({ userId: users.id, name: users.name, email: users.email, role: grants.role as T['role'] })
+		// Both tables have the same user and role columns; Drizzle's `from` only wants one table type.
+		.from(grants as typeof memberships)
+		.innerJoin(users, eq(users.id, grants.userId))
+		.where(where)
+		.orderBy(asc(users.email));
+}
+
 /** The members of a workspace with their roles, by e-mail, for the workspace page. */
 export async function listMembers(workspaceId: string) {
-	return db
-		.select({ userId: users.id, name: users.name, email: users.email, role: memberships.role })
-		.from(memberships)
-		.innerJoin(users, eq(users.id, memberships.userId))
-		.where(eq(memberships.workspaceId, workspaceId))
-		.orderBy(asc(users.email));
+	return peopleIn(memberships, eq(memberships.workspaceId, workspaceId));
 }
 
 /** Locks the workspace's owner rows for the transaction and returns who the owners are. */
@@ -99,12 +105,7 @@ export async function countOwners(workspaceId: string): Promise<number> {
 
 /** The people one site is shared with (outside its workspace), with their grant's role. */
 export async function siteGuests(siteId: string) {
-	return db
-		.select({ userId: users.id, name: users.name, email: users.email, role: siteGrants.role })
-		.from(siteGrants)
-		.innerJoin(users, eq(users.id, siteGrants.userId))
-		.where(eq(siteGrants.siteId, siteId))
-		.orderBy(asc(users.email));
+	return peopleIn(siteGrants, eq(siteGrants.siteId, siteId));
 }
 
 /** Stops sharing a site with one guest. */
