@@ -38,13 +38,15 @@ export async function siteGrantRole(siteId: string, userId: string): Promise<Rol
 
 /** The people a membership or a site grant names, with its role, by e-mail. */
 function peopleIn<T extends typeof memberships | typeof siteGrants>(grants: T, where: SQL) {
-	return db
-		.select({ userId: users.id, name: users.name, email: users.email, role: grants.role as T['role'] })
-		// Both tables have the same user and role columns; Drizzle's `from` only wants one table type.
-		.from(grants as typeof memberships)
-		.innerJoin(users, eq(users.id, grants.userId))
-		.where(where)
-		.orderBy(asc(users.email));
+	return (
+		db
+			.select({ userId: users.id, name: users.name, email: users.email, role: grants.role as T['role'] })
+			// Both tables have the same user and role columns; Drizzle's `from` only wants one table type.
+			.from(grants as typeof memberships)
+			.innerJoin(users, eq(users.id, grants.userId))
+			.where(where)
+			.orderBy(asc(users.email))
+	);
 }
 
 /** The members of a workspace with their roles, by e-mail, for the workspace page. */
