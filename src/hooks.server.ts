@@ -78,6 +78,6 @@ export const handleError: HandleServerError = ({ error, event, status, message }
 /** Starts the job queue's workers with the server; the job modules register their jobs when imported. */
 export const init: ServerInit = async () => {
 	await import('$lib/server/services/tariff-notice.service');
-	await import('$lib/server/services/workspace-deletion.service');
+	await import('$lib/server/workspaces/deletion');
 	await startJobs();
 };

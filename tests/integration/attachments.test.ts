@@ -13,9 +13,9 @@ import {
 	readAttachment,
 	removeAttachment
 } from '$lib/server/bills/attachments';
-import type { Actor } from '$lib/server/services/audit.service';
+import type { Actor } from '$lib/server/workspaces/audit';
 import type { SiteRow } from '$lib/server/services/site.service';
-import { createWorkspace } from '$lib/server/services/workspace.service';
+import { createWorkspace } from '$lib/server/workspaces/workspace.service';
 import { deleteObject, getObject, putObject } from '$lib/server/storage/object-store';
 import { makeSite, makeUser } from './fixtures';
 

@@ -13,15 +13,15 @@ import {
 	workspaces
 } from '$lib/server/db/schema';
 import { createSite } from '$lib/server/services/site.service';
-import { createWorkspace } from '$lib/server/services/workspace.service';
-import { exportWorkspace } from '$lib/server/services/workspace-export.service';
+import { createWorkspace } from '$lib/server/workspaces/workspace.service';
+import { exportWorkspace } from '$lib/server/workspaces/export';
 import {
 	deletionDate,
 	purgeDeletedWorkspaces,
 	restoreWorkspace,
 	scheduleWorkspaceDeletion
-} from '$lib/server/services/workspace-deletion.service';
-import { deleteAccount } from '$lib/server/services/account-deletion.service';
+} from '$lib/server/workspaces/deletion';
+import { deleteAccount } from '$lib/server/accounts/deletion';
 import { makeUser, siteInput } from './fixtures';
 
 // Against the real PostgreSQL that `npm test` starts; every row here is invented test data.

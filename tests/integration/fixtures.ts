@@ -1,12 +1,12 @@
 // Set-up shared by the integration tests: invented people, sites and tariffs, stored through the app's own
-// services. Nothing here may import workspace.service: it loads mail.ts, whose transport
+// services. Nothing here may import workspaces/invitation.ts: it loads mail.ts, whose transport
 // mail-retry.test.ts must point at its own mail server first.
 import type { TariffInput } from '$lib/calc';
 import type { SiteInput } from '$lib/forms/site.schema';
 import type { TariffMeta, VersionMeta } from '$lib/forms/tariff-meta.schema';
 import { db } from '$lib/server/db';
 import { users, type HolidayRule } from '$lib/server/db/schema';
-import type { Actor } from '$lib/server/services/audit.service';
+import type { Actor } from '$lib/server/workspaces/audit';
 import { createSite, findSite, type SiteRow } from '$lib/server/services/site.service';
 
 /** Stores a user with that email and name; `more` fills other columns (a password hash, a verified date). */

@@ -3,7 +3,7 @@ import type { RequestEvent } from '@sveltejs/kit';
 import { client, db } from '$lib/server/db';
 import { memberships } from '$lib/server/db/schema';
 import { requireRole, type Role } from '$lib/server/guard';
-import { createWorkspace } from '$lib/server/services/workspace.service';
+import { createWorkspace } from '$lib/server/workspaces/workspace.service';
 import { makeUser } from './fixtures';
 
 const tag = `guard-${Date.now()}`;

@@ -4,7 +4,7 @@
 // if the job says hold, stands still (the transaction open, the database waiting) until it is killed.
 import { writeSync } from 'node:fs';
 import { register } from 'node:module';
-import type { Actor } from '$lib/server/services/audit.service';
+import type { Actor } from '$lib/server/workspaces/audit';
 import {
 	billSheetCsv,
 	DONE,

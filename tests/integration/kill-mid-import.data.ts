@@ -1,7 +1,7 @@
 // The invented imports of kill-mid-import.test.ts, built the same way in the test and in the child process
 // it kills (kill-mid-import.child.ts). Every utility, bill and device here is made up.
 import type { DeviceSpec } from '$lib/server/db/schema';
-import type { Actor } from '$lib/server/services/audit.service';
+import type { Actor } from '$lib/server/workspaces/audit';
 import type { ScenarioRow, SiteRow } from '$lib/server/services/site.service';
 import type { Interval } from '$lib/server/usage/interval';
 

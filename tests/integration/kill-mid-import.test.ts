@@ -16,10 +16,10 @@ import {
 } from '$lib/server/db/schema';
 import { parseBillSheet } from '$lib/server/bills/bill-sheet';
 import { createBills } from '$lib/server/bills/bill.service';
-import type { Actor } from '$lib/server/services/audit.service';
+import type { Actor } from '$lib/server/workspaces/audit';
 import { saveDevices, type SiteRow } from '$lib/server/services/site.service';
 import { importTariffs } from '$lib/server/services/tariff.service';
-import { createWorkspace } from '$lib/server/services/workspace.service';
+import { createWorkspace } from '$lib/server/workspaces/workspace.service';
 import { parseTariffSheet } from '$lib/server/tariffs/sheet-import';
 import { importUsage, usageSummary } from '$lib/server/usage/usage.service';
 import {

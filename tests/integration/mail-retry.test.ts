@@ -66,12 +66,27 @@ async function until<T>(what: string, find: () => Promise<T | undefined> | T | u
 	throw new Error(`Waited ${ms} ms for ${what}`);
 }
 
+/** The queue's row for the job whose data has `key` = `value`, once the queue has completed it. */
+async function completedJob(what: string, name: string, key: string, value: string) {
+	const [job] = await until(
+		`${what} to complete`,
+		async () => {
+			const rows = await client<{ state: string; retryCount: number }[]>`
+				select state, retry_count as "retryCount" from pgboss.job
+				where name = ${name} and data->>${key}::text = ${value}`;
+			return rows[0]?.state === 'completed' ? rows : undefined;
+		},
+		5_000
+	);
+	return job!;
+}
+
 beforeAll(async () => {
 	await new Promise<void>((resolve) => smtp.listen(0, '127.0.0.1', resolve));
 	// mail.ts builds its transport from SMTP_URL when first imported: point it here before anything does.
 	env.SMTP_URL = `smtp://127.0.0.1:${(smtp.server.address() as AddressInfo).port}`;
 	({ announceVersion } = await import('$lib/server/services/tariff-notice.service'));
-	const { createWorkspace } = await import('$lib/server/services/workspace.service');
+	const { createWorkspace } = await import('$lib/server/workspaces/workspace.service');
 
 	const owner = await makeUser(recipient, 'Retry test owner (invented)');
 	workspaceId = await createWorkspace(`Retry ${tag}`, owner.id);
@@ -103,18 +118,9 @@ describe('a tariff notice whose first send the mail server turns away', () => {
 			() => delivered.find((m) => m.to.includes(recipient)),
 			25_000
 		);
-		const [job] = await until(
-			'the notice job to complete',
-			async () => {
-				const rows = await client<{ state: string; retryCount: number }[]>`
-					select state, retry_count as "retryCount" from pgboss.job
-					where name = 'tariff-version-notice' and data->>'workspaceId' = ${workspaceId}`;
-				return rows[0]?.state === 'completed' ? rows : undefined;
-			},
-			5_000
-		);
+		const job = await completedJob('the notice job', 'tariff-version-notice', 'workspaceId', workspaceId);
 		expect(attempts.map((a) => a.accepted)).toEqual([false, true]);
-		expect(job!.retryCount).toBeGreaterThanOrEqual(1);
+		expect(job.retryCount).toBeGreaterThanOrEqual(1);
 		// RETRY: 5 s, doubled per attempt with jitter, so the first retry comes 5 to 10 s after the failure.
 		expect(attempts[1]!.at - attempts[0]!.at).toBeGreaterThanOrEqual(4_000);
 		expect(mail.at - started).toBeLessThan(25_000);
@@ -140,18 +146,9 @@ describe('a message sent from a request whose first send the mail server turns a
 			() => delivered.find((m) => m.to.includes(invitee)),
 			25_000
 		);
-		const [job] = await until(
-			'the mail job to complete',
-			async () => {
-				const rows = await client<{ state: string; retryCount: number }[]>`
-					select state, retry_count as "retryCount" from pgboss.job
-					where name = 'send-mail' and data->>'to' = ${invitee}`;
-				return rows[0]?.state === 'completed' ? rows : undefined;
-			},
-			5_000
-		);
+		const job = await completedJob('the mail job', 'send-mail', 'to', invitee);
 		expect(inviteeAttempts.map((a) => a.accepted)).toEqual([false, true]);
-		expect(job!.retryCount).toBeGreaterThanOrEqual(1);
+		expect(job.retryCount).toBeGreaterThanOrEqual(1);
 		expect(delivered.filter((m) => m.to.includes(invitee))).toHaveLength(1);
 		expect(mail.subject).toBe(`Invitation (${tag})`);
 	}, 30_000);

@@ -10,11 +10,11 @@ import {
 	confirmSignUp,
 	pendingSignUpWith,
 	resendConfirmation,
-	resetPassword,
-	requestPasswordReset,
 	signUp
-} from '$lib/server/services/account.service';
-import { acceptInvitation, createWorkspace, invite } from '$lib/server/services/workspace.service';
+} from '$lib/server/accounts/sign-up';
+import { requestPasswordReset, resetPassword } from '$lib/server/accounts/password-reset';
+import { createWorkspace } from '$lib/server/workspaces/workspace.service';
+import { acceptInvitation, invite } from '$lib/server/workspaces/invitation';
 import { makeUser } from './fixtures';
 
 // Account pre-hijack (issue 14, item 3), against the real PostgreSQL and mail catcher of `npm test`.

@@ -11,7 +11,7 @@ import {
 import { client, db } from '$lib/server/db';
 import { userSessions, userTokens } from '$lib/server/db/schema';
 import { stopJobs } from '$lib/server/jobs';
-import { requestPasswordReset, resetPassword } from '$lib/server/services/account.service';
+import { requestPasswordReset, resetPassword } from '$lib/server/accounts/password-reset';
 import { makeUser } from './fixtures';
 
 // Sessions that end (issue 14, item 6), against the real PostgreSQL of `npm test`. Invented people.

@@ -2,7 +2,8 @@ import { afterAll, describe, expect, it } from 'vitest';
 import { and, eq } from 'drizzle-orm';
 import { client, db } from '$lib/server/db';
 import { memberships, siteGrants, users } from '$lib/server/db/schema';
-import { acceptInvitation, createWorkspace, inviteToSite } from '$lib/server/services/workspace.service';
+import { createWorkspace } from '$lib/server/workspaces/workspace.service';
+import { acceptInvitation, inviteToSite } from '$lib/server/workspaces/invitation';
 import { makeSite, makeUser } from './fixtures';
 import { newestMailTo } from './mail-catcher';
 

@@ -8,7 +8,7 @@ import { priceScenario } from '$lib/server/services/results.service';
 import { createScenario, listScenarios, type SiteRow } from '$lib/server/services/site.service';
 import { createTariff, publishVersion, searchTariffs } from '$lib/server/services/tariff.service';
 import { costChanges } from '$lib/server/services/tariff-notice.service';
-import { createWorkspace } from '$lib/server/services/workspace.service';
+import { createWorkspace } from '$lib/server/workspaces/workspace.service';
 import {
 	chooserFor,
 	PICK_A_TARIFF,

@@ -11,7 +11,7 @@ import {
 	searchTariffs,
 	TariffConflict
 } from '$lib/server/services/tariff.service';
-import { createWorkspace } from '$lib/server/services/workspace.service';
+import { createWorkspace } from '$lib/server/workspaces/workspace.service';
 import { flat, makeUser, tariffMeta, versionMeta } from './fixtures';
 
 // Against the real PostgreSQL of `npm test`; every tariff here is invented.

@@ -3,8 +3,8 @@ import { eq, inArray } from 'drizzle-orm';
 import { client, db } from '$lib/server/db';
 import { workspaces } from '$lib/server/db/schema';
 import { startJobs, stopJobs } from '$lib/server/jobs';
-import { purgeDeletedWorkspaces, purgeJob } from '$lib/server/services/workspace-deletion.service';
-import { createWorkspace } from '$lib/server/services/workspace.service';
+import { purgeDeletedWorkspaces, purgeJob } from '$lib/server/workspaces/deletion';
+import { createWorkspace } from '$lib/server/workspaces/workspace.service';
 import { makeUser } from './fixtures';
 
 // Against the real PostgreSQL and job queue of `npm test`; every workspace here is invented.
@@ -67,7 +67,7 @@ describe('two app processes', () => {
 		vi.resetModules();
 		const second = {
 			jobs: await import('$lib/server/jobs'),
-			deletion: await import('$lib/server/services/workspace-deletion.service'),
+			deletion: await import('$lib/server/workspaces/deletion'),
 			db: await import('$lib/server/db')
 		};
 		try {

@@ -3,16 +3,14 @@ import { eq } from 'drizzle-orm';
 import { client, db } from '$lib/server/db';
 import { invitations, memberships } from '$lib/server/db/schema';
 import { createHash } from 'node:crypto';
+import { createWorkspace } from '$lib/server/workspaces/workspace.service';
+import { acceptInvitation, findOpenInvitation, invite } from '$lib/server/workspaces/invitation';
 import {
-	acceptInvitation,
 	changeRole,
-	createWorkspace,
-	findOpenInvitation,
-	invite,
 	listMembers,
 	MembershipRuleError,
 	removeMember
-} from '$lib/server/services/workspace.service';
+} from '$lib/server/workspaces/membership';
 import { makeUser } from './fixtures';
 import { newestMailTo } from './mail-catcher';
 

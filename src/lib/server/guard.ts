@@ -1,12 +1,14 @@
 import { error, redirect, type RequestEvent } from '@sveltejs/kit';
-import { and, eq } from 'drizzle-orm';
-import { db } from './db';
-import { memberships, siteGrants, workspaces } from './db/schema';
+import { roleAtLeast, type Role } from './db/schema';
 import { findTariff } from './services/tariff.service';
 import { findScenario, findSite, type SiteRow } from './services/site.service';
+import { findMembership, memberRole, siteGrantRole } from './workspaces/membership';
 
-export type Role = 'owner' | 'editor' | 'viewer';
-const RANK: Record<Role, number> = { viewer: 1, editor: 2, owner: 3 };
+/*
+ * The guard depends on the services and never the reverse: the role type and its rank order live with the
+ * schema (db/schema/workspace.ts), the membership lookups in workspaces/membership.ts.
+ */
+export type { Role };
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
@@ -33,13 +35,10 @@ export async function requireRole(
 ): Promise<WorkspaceAccess> {
 	const user = requireUser(event);
 	if (!UUID.test(workspaceId)) error(404, 'Not found');
-	const [row] = await db
-		.select({ id: workspaces.id, name: workspaces.name, role: memberships.role })
-		.from(memberships)
-		.innerJoin(workspaces, eq(workspaces.id, memberships.workspaceId))
-		.where(and(eq(memberships.workspaceId, workspaceId), eq(memberships.userId, user.id)));
+	const row = await findMembership(workspaceId, user.id);
 	if (!row) error(404, 'Not found');
-	if (RANK[row.role] < RANK[needed]) error(403, `This needs the ${needed} role; you are a ${row.role} here.`);
+	if (!roleAtLeast(row.role, needed))
+		error(403, `This needs the ${needed} role; you are a ${row.role} here.`);
 	return { user, workspace: { id: row.id, name: row.name }, role: row.role };
 }
 
@@ -50,7 +49,8 @@ export function requireAdmin(event: RequestEvent): SessionUser {
 	return user;
 }
 
-export const can = (role: Role, needed: Role) => RANK[role] >= RANK[needed];
+/** Whether `role` may do what needs `needed` (the rank order of db/schema/workspace.ts). */
+export const can = roleAtLeast;
 
 /**
  * Read access to a tariff: public tariffs are open to everyone (the quick estimate uses them); a private
@@ -64,7 +64,7 @@ export async function requireTariffRead(event: RequestEvent, tariffId: string) {
 		if (!event.locals.user) error(404, 'Not found');
 		const access = await memberRole(event.locals.user.id, found.tariff.workspaceId);
 		if (!access) error(404, 'Not found');
-		return { ...found, role: access as Role };
+		return { ...found, role: access };
 	}
 	return { ...found, role: null };
 }
@@ -78,14 +78,6 @@ export async function requireTariffWrite(event: RequestEvent, tariffId: string) 
 			error(403, 'Only editors of this workspace may change its tariffs.');
 	} else if (!user.isAdmin) error(403, 'Only platform admins may change public tariffs.');
 	return { ...found, user };
-}
-
-async function memberRole(userId: string, workspaceId: string): Promise<Role | null> {
-	const [row] = await db
-		.select({ role: memberships.role })
-		.from(memberships)
-		.where(and(eq(memberships.workspaceId, workspaceId), eq(memberships.userId, userId)));
-	return row?.role ?? null;
 }
 
 export type SiteAccess = { user: SessionUser; site: SiteRow; role: Role; viaGrant: boolean };
@@ -104,14 +96,7 @@ export async function requireSiteAccess(
 	const site = await findSite(siteId);
 	if (!site) error(404, 'Not found');
 	const member = await memberRole(user.id, site.workspaceId);
-	let role: Role | null = member;
-	if (!role) {
-		const [grant] = await db
-			.select({ role: siteGrants.role })
-			.from(siteGrants)
-			.where(and(eq(siteGrants.siteId, siteId), eq(siteGrants.userId, user.id)));
-		role = grant?.role ?? null;
-	}
+	const role = member ?? (await siteGrantRole(siteId, user.id));
 	if (!role) error(404, 'Not found');
 	if (!can(role, needed)) error(403, `This needs the ${needed} role; you are a ${role} here.`);
 	return { user, site, role, viaGrant: !member };

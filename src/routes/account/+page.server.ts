@@ -2,7 +2,7 @@ import { fail } from '@sveltejs/kit';
 import { requireUser } from '$lib/server/guard';
 import { handOverSignOut } from '$lib/server/auth/hand-over';
 import { revokeAllSessions } from '$lib/server/auth/sessions';
-import { deleteAccount } from '$lib/server/services/account-deletion.service';
+import { deleteAccount } from '$lib/server/accounts/deletion';
 import { keepValues } from '$lib/forms/errors';
 import type { Actions, PageServerLoad } from './$types';
 

@@ -1,6 +1,6 @@
 import { fail } from '@sveltejs/kit';
 import { mailLinkLimiter, TOO_MANY } from '$lib/server/rate-limit';
-import { requestPasswordReset } from '$lib/server/services/account.service';
+import { requestPasswordReset } from '$lib/server/accounts/password-reset';
 import { magicLinkSchema } from '$lib/forms/auth.schema';
 import { fieldErrors, keepValues } from '$lib/forms/errors';
 import type { Actions } from './$types';

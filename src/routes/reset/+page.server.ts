@@ -1,5 +1,5 @@
 import { fail, redirect } from '@sveltejs/kit';
-import { resetPassword } from '$lib/server/services/account.service';
+import { resetPassword } from '$lib/server/accounts/password-reset';
 import { resetSchema } from '$lib/forms/auth.schema';
 import { fieldErrors } from '$lib/forms/errors';
 import type { Actions, PageServerLoad } from './$types';

@@ -1,11 +1,8 @@
 import { fail, redirect } from '@sveltejs/kit';
-import { eq } from 'drizzle-orm';
 import { handOver } from '$lib/server/auth/hand-over';
-import { verifyPassword } from '$lib/server/auth/password';
-import { db } from '$lib/server/db';
-import { users } from '$lib/server/db/schema';
+import { checkPassword } from '$lib/server/accounts/sign-in';
 import { mailLinkLimiter, recordSignInFailure, signInLocked, TOO_MANY } from '$lib/server/rate-limit';
-import { pendingSignUpWith, resendConfirmation } from '$lib/server/services/account.service';
+import { resendConfirmation } from '$lib/server/accounts/sign-up';
 import { magicLinkSchema, signInSchema } from '$lib/forms/auth.schema';
 import { fieldErrors, keepValues } from '$lib/forms/errors';
 import { safeNext } from '$lib/safe-next';
@@ -32,21 +29,19 @@ export const actions = {
 		if (signInLocked(event, email))
 			return fail(429, { action: 'password', values, errors: { form: TOO_MANY } });
 
-		const [user] = await db.select().from(users).where(eq(users.email, email));
+		const checked = await checkPassword(email, password);
+		// A fresh confirmation link goes out within the mail-link limit, so repeated sign-ins cannot flood the mailbox.
+		if (checked.found === 'pending') {
+			if (!(await mailLinkLimiter.isLimited(event, email)))
+				await resendConfirmation(checked.pending, event.url.origin);
+			return fail(400, {
+				action: 'password',
+				values,
+				errors: { form: 'Confirm your address first: we have sent you a new confirmation link.' }
+			});
+		}
 		// One message whether the address is unknown or the password wrong: the form must not tell who has an account.
-		if (!(await verifyPassword(password, user?.passwordHash)) || !user) {
-			// A sign-up not confirmed yet keeps its password on its link, not on the account (account.service.ts).
-			// A fresh link goes out within the mail-link limit, so repeated sign-ins cannot flood the mailbox.
-			const pending = await pendingSignUpWith(email, password);
-			if (pending) {
-				if (!(await mailLinkLimiter.isLimited(event, email)))
-					await resendConfirmation(pending, event.url.origin);
-				return fail(400, {
-					action: 'password',
-					values,
-					errors: { form: 'Confirm your address first: we have sent you a new confirmation link.' }
-				});
-			}
+		if (checked.found === 'none') {
 			await recordSignInFailure(event, email);
 			return fail(400, { action: 'password', values, errors: { password: NO_MATCH } });
 		}

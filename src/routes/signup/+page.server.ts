@@ -1,6 +1,6 @@
 import { fail, redirect } from '@sveltejs/kit';
 import { signUpLimiter, TOO_MANY } from '$lib/server/rate-limit';
-import { signUp } from '$lib/server/services/account.service';
+import { signUp } from '$lib/server/accounts/sign-up';
 import { signUpSchema } from '$lib/forms/auth.schema';
 import { fieldErrors, keepValues } from '$lib/forms/errors';
 import type { Actions, PageServerLoad } from './$types';

@@ -1,5 +1,5 @@
 import { libraryPage, libraryQuerySchema, queryObject } from '$lib/server/tariffs/library';
-import { listWorkspacesFor } from '$lib/server/services/workspace.service';
+import { listWorkspacesFor } from '$lib/server/workspaces/workspace.service';
 import type { PageServerLoad } from './$types';
 
 export const load = (async ({ url, locals }) => {

@@ -1,7 +1,7 @@
 import { fail, redirect } from '@sveltejs/kit';
 import { z } from 'zod';
 import { requireUser } from '$lib/server/guard';
-import { createWorkspace, listWorkspacesFor } from '$lib/server/services/workspace.service';
+import { createWorkspace, listWorkspacesFor } from '$lib/server/workspaces/workspace.service';
 import { workspaceNameField } from '$lib/forms/auth.schema';
 import { fieldErrors, keepValues } from '$lib/forms/errors';
 import type { Actions, PageServerLoad } from './$types';

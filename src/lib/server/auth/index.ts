@@ -3,13 +3,12 @@ import { DrizzleAdapter } from '@auth/drizzle-adapter';
 import { SvelteKitAuth } from '@auth/sveltekit';
 import Credentials from '@auth/sveltekit/providers/credentials';
 import Nodemailer from '@auth/sveltekit/providers/nodemailer';
-import { eq } from 'drizzle-orm';
 import { db } from '../db';
 import { accounts, sessions, users, verificationTokens } from '../db/schema';
 import { logger } from '../log';
 import { mailServer, sendMail } from '../mail';
-import { addressProvenBySignInLink } from '../services/account.service';
-import { verifyPassword } from './password';
+import { accountWithPassword } from '../accounts/sign-in';
+import { addressProvenBySignInLink } from '../accounts/sign-up';
 import { extendSession, revokeSession, SESSION_MAX_AGE_S, startSession } from './sessions';
 import { signInSchema } from '$lib/forms/auth.schema';
 import { safeNext } from '$lib/safe-next';
@@ -24,7 +23,7 @@ const drizzle = DrizzleAdapter(db, {
 /**
  * The Drizzle adapter, except that proving an address with an e-mailed sign-in link never adopts what an
  * unconfirmed sign-up set: Auth.js calls `updateUser` with `emailVerified` when such a link is used, and
- * first the account drops any pending password and sign-up links (see account.service.ts).
+ * first the account drops any pending password and sign-up links (see accounts/sign-up.ts).
  */
 const adapter: Adapter = {
 	...drizzle,
@@ -52,8 +51,7 @@ export const {
 			async authorize(raw) {
 				const parsed = signInSchema.safeParse(raw);
 				if (!parsed.success) return null;
-				const [user] = await db.select().from(users).where(eq(users.email, parsed.data.email));
-				if (!(await verifyPassword(parsed.data.password, user?.passwordHash))) return null;
+				const user = await accountWithPassword(parsed.data.email, parsed.data.password);
 				// Password sign-in waits for the address to be confirmed (the sign-in action explains this).
 				if (!user?.emailVerified) return null;
 				return { id: user.id, email: user.email, name: user.name };

@@ -1,6 +1,6 @@
 import { randomBytes } from 'node:crypto';
 import { and, eq, gt, isNotNull, isNull, lt, lte, or, sql } from 'drizzle-orm';
-import { db } from '../db';
+import { db, type Tx } from '../db';
 import { users, userSessions } from '../db/schema';
 
 /**
@@ -18,8 +18,6 @@ export const SESSION_MAX_AGE_S = 30 * 24 * 60 * 60;
 const SESSION_MAX_AGE_MS = SESSION_MAX_AGE_S * 1000;
 /** A used session's row is moved forward at most this often (Auth.js renews the JWT on every read). */
 const EXTEND_EVERY_MS = 24 * 60 * 60 * 1000;
-
-type Tx = Parameters<Parameters<typeof db.transaction>[0]>[0];
 
 /** Records a new session for the user and returns its id, for the JWT. */
 export async function startSession(userId: string, now = new Date()): Promise<string> {

@@ -1,5 +1,5 @@
 import type { RequestEvent } from '@sveltejs/kit';
-import type { Actor } from '../services/audit.service';
+import type { Actor } from '../workspaces/audit';
 import { addAttachment, type AttachmentSummary } from './attachments';
 import { MAX_ATTACHMENT_BYTES, refuseBySize, type UploadRefusal } from './attachments-check';
 

@@ -3,7 +3,7 @@ import { and, asc, eq } from 'drizzle-orm';
 import { db } from '../db';
 import { billAttachments, bills } from '../db/schema';
 import { logger } from '../log';
-import { audit, type Actor } from '../services/audit.service';
+import { audit, type Actor } from '../workspaces/audit';
 import { deleteObject, getObject, putObject, type StoredObject } from '../storage/object-store';
 import {
 	checkUpload,

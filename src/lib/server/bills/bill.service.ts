@@ -2,7 +2,7 @@ import { and, asc, eq, gte, lte, ne } from 'drizzle-orm';
 import type { BillInput } from '$lib/forms/bill.schema';
 import { db } from '../db';
 import { bills } from '../db/schema';
-import { audit, type Actor } from '../services/audit.service';
+import { audit, type Actor } from '../workspaces/audit';
 import { StaleWrite, type SiteRow } from '../services/site.service';
 
 export type BillRow = typeof bills.$inferSelect;

@@ -19,6 +19,8 @@ export const client = postgres(env.DATABASE_URL ?? 'postgres://build-time-placeh
 
 export const db = drizzle(client, { schema });
 export type Db = typeof db;
+/** The handle a `db.transaction` callback receives, for helpers that run inside the caller's transaction. */
+export type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
 export { schema };
 
 process.on('sveltekit:shutdown', async () => {

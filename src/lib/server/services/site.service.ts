@@ -2,7 +2,7 @@ import { and, asc, eq, inArray, isNull, or } from 'drizzle-orm';
 import type { SiteInput } from '$lib/forms/site.schema';
 import { db } from '../db';
 import { devices, scenarios, sites, type DeviceSpec } from '../db/schema';
-import { audit, changedFields, type Actor } from './audit.service';
+import { audit, changedFields, type Actor } from '../workspaces/audit';
 
 export type SiteRow = typeof sites.$inferSelect;
 export type ScenarioRow = typeof scenarios.$inferSelect;

@@ -2,7 +2,7 @@ import { and, count, eq, gte, lt, max, min, sql, sum } from 'drizzle-orm';
 import { DateTime } from 'luxon';
 import { db } from '../db';
 import { usageIntervals } from '../db/schema';
-import { audit, type Actor } from '../services/audit.service';
+import { audit, type Actor } from '../workspaces/audit';
 import type { SiteRow } from '../services/site.service';
 import type { Interval } from './interval';
 

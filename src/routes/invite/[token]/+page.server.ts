@@ -1,27 +1,22 @@
 import { error, fail, redirect } from '@sveltejs/kit';
-import { z } from 'zod';
 import { handOver } from '$lib/server/auth/hand-over';
 import { requireUser } from '$lib/server/guard';
-import { hasConfirmedAccount } from '$lib/server/services/account.service';
+import { hasConfirmedAccount } from '$lib/server/accounts/sign-up';
 import { signUpLimiter, TOO_MANY } from '$lib/server/rate-limit';
 import {
-	acceptInvitation,
+	acceptAsUser,
 	findOpenInvitation,
-	MembershipRuleError
-} from '$lib/server/services/workspace.service';
-import { nameField, newPasswordField } from '$lib/forms/auth.schema';
+	invitationHome,
+	joinByInvitation
+} from '$lib/server/workspaces/invitation';
+import { joinSchema } from '$lib/server/workspaces/workspace.schema';
 import { fieldErrors, keepValues } from '$lib/forms/errors';
 import type { Actions, PageServerLoad } from './$types';
 
-const tokenSchema = z.string().min(20).max(100);
-
-async function openInvitation(token: string) {
-	if (!tokenSchema.safeParse(token).success) return null;
-	return findOpenInvitation(token);
-}
+const CLOSED = 'This invitation has been used, withdrawn or has expired.';
 
 export const load = (async ({ params, locals }) => {
-	const invitation = await openInvitation(params.token);
+	const invitation = await findOpenInvitation(params.token);
 	if (!invitation) return { invitation: null, hasAccount: false };
 	return {
 		invitation: {
@@ -31,30 +26,21 @@ export const load = (async ({ params, locals }) => {
 			workspaceName: invitation.siteName ?? invitation.workspaceName,
 			siteOnly: !!invitation.siteId
 		},
-		// Only a confirmed account owns the address (account.service.ts).
+		// Only a confirmed account owns the address (accounts/sign-up.ts).
 		hasAccount: await hasConfirmedAccount(invitation.email),
 		signedInAs: locals.user?.email ?? null
 	};
 }) satisfies PageServerLoad;
 
-const joinSchema = z
-	.object({ name: nameField, password: newPasswordField, confirm: z.string() })
-	.refine((v) => v.password === v.confirm, { path: ['confirm'], message: 'The two passwords differ.' });
-
 export const actions = {
 	accept: async (event) => {
-		const user = requireUser(event);
-		const invitation = await openInvitation(event.params.token);
-		if (!invitation) error(404, 'This invitation has been used, withdrawn or has expired.');
-		if (invitation.email !== user.email.toLowerCase())
+		const accepted = await acceptAsUser(event.params.token, requireUser(event));
+		if (accepted === 'closed') error(404, CLOSED);
+		if ('sentTo' in accepted)
 			return fail(403, {
-				errors: {
-					form: `This invitation is for ${invitation.email}. Sign in with that address to accept it.`
-				}
+				errors: { form: `This invitation is for ${accepted.sentTo}. Sign in with that address to accept it.` }
 			});
-		const accepted = await acceptInvitation(event.params.token, { userId: user.id });
-		if (!accepted) error(404, 'This invitation has been used, withdrawn or has expired.');
-		redirect(303, accepted.siteId ? `/sites/${accepted.siteId}` : `/w/${accepted.workspaceId}`);
+		redirect(303, accepted.home);
 	},
 
 	join: async (event) => {
@@ -63,22 +49,14 @@ export const actions = {
 		const parsed = joinSchema.safeParse(Object.fromEntries(form));
 		if (!parsed.success) return fail(400, { values, errors: fieldErrors(parsed.error) });
 		if (await signUpLimiter.isLimited(event)) return fail(429, { values, errors: { form: TOO_MANY } });
-		let accepted;
-		try {
-			accepted = await acceptInvitation(event.params.token, {
-				name: parsed.data.name,
-				password: parsed.data.password
-			});
-		} catch (e) {
-			if (e instanceof MembershipRuleError) return fail(409, { values, errors: { form: e.message } });
-			throw e;
-		}
-		if (!accepted) error(404, 'This invitation has been used, withdrawn or has expired.');
+		const joined = await joinByInvitation(event.params.token, parsed.data);
+		if (joined === 'closed') error(404, CLOSED);
+		if ('refused' in joined) return fail(409, { values, errors: { form: joined.refused } });
 		await handOver(event, 'password', {
-			email: accepted.email,
+			email: joined.email,
 			password: parsed.data.password,
-			next: accepted.siteId ? `/sites/${accepted.siteId}` : `/w/${accepted.workspaceId}`
+			next: invitationHome(joined)
 		});
-		redirect(303, accepted.siteId ? `/sites/${accepted.siteId}` : `/w/${accepted.workspaceId}`);
+		redirect(303, invitationHome(joined));
 	}
 } satisfies Actions;

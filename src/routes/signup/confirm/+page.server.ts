@@ -2,7 +2,7 @@ import { fail, redirect } from '@sveltejs/kit';
 import { z } from 'zod';
 import { handOver } from '$lib/server/auth/hand-over';
 import { recordSignInFailure, signInLocked, TOO_MANY } from '$lib/server/rate-limit';
-import { confirmationFor, confirmSignUp } from '$lib/server/services/account.service';
+import { confirmationFor, confirmSignUp } from '$lib/server/accounts/sign-up';
 import { confirmSignUpSchema } from '$lib/forms/auth.schema';
 import { fieldErrors } from '$lib/forms/errors';
 import type { Actions, PageServerLoad } from './$types';
@@ -12,7 +12,7 @@ const CLOSED = 'This link has been used already, was replaced by a newer one or 
 
 /**
  * Opening the link changes nothing (mail scanners open links too): the page asks for the password chosen
- * at sign-up, and only the link and that password together confirm the account (account.service.ts).
+ * at sign-up, and only the link and that password together confirm the account (accounts/sign-up.ts).
  */
 export const load = (async ({ url }) => {
 	const parsed = query.safeParse({ token: url.searchParams.get('token') });

@@ -1,10 +1,11 @@
 import { error, fail, redirect } from '@sveltejs/kit';
 import { inviteLimiter, TOO_MANY } from '$lib/server/rate-limit';
-import { inviteToSite, removeSiteGuest, siteGuests } from '$lib/server/services/workspace.service';
+import { inviteToSite } from '$lib/server/workspaces/invitation';
+import { removeSiteGuest, siteGuests } from '$lib/server/workspaces/membership';
 import { emailField } from '$lib/forms/auth.schema';
 import { z } from 'zod';
 import { requireSiteAccess } from '$lib/server/guard';
-import { siteTrail } from '$lib/server/services/audit.service';
+import { siteTrail } from '$lib/server/workspaces/audit';
 import { usableTariff } from '$lib/server/tariffs/usable';
 import {
 	changeScenario,

@@ -1,6 +1,6 @@
 import { error, fail } from '@sveltejs/kit';
 import { requireUser } from '$lib/server/guard';
-import { listWorkspacesFor } from '$lib/server/services/workspace.service';
+import { listWorkspacesFor } from '$lib/server/workspaces/workspace.service';
 import { tariffFormAction } from '$lib/server/tariffs/form-action';
 import { jsonField, unstorableIn } from '$lib/forms/storable';
 import type { Actions, PageServerLoad } from './$types';

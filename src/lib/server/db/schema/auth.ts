@@ -16,12 +16,16 @@ export const users = pgTable('user', {
 	createdAt: timestamp('created_at', { mode: 'date' }).notNull().defaultNow()
 });
 
+/** A required link to the user a row belongs to; it goes when the account does. */
+export const belongsToUser = (name: string) =>
+	text(name)
+		.notNull()
+		.references(() => users.id, { onDelete: 'cascade' });
+
 export const accounts = pgTable(
 	'account',
 	{
-		userId: text('userId')
-			.notNull()
-			.references(() => users.id, { onDelete: 'cascade' }),
+		userId: belongsToUser('userId'),
 		type: text('type').notNull(),
 		provider: text('provider').notNull(),
 		providerAccountId: text('providerAccountId').notNull(),
@@ -38,9 +42,7 @@ export const accounts = pgTable(
 
 export const sessions = pgTable('session', {
 	sessionToken: text('sessionToken').primaryKey(),
-	userId: text('userId')
-		.notNull()
-		.references(() => users.id, { onDelete: 'cascade' }),
+	userId: belongsToUser('userId'),
 	expires: timestamp('expires', { mode: 'date' }).notNull()
 });
 
@@ -59,15 +61,13 @@ export const verificationTokens = pgTable(
  *
  * A sign-up's name and password wait on its `verify-email` row (`name`, `password_hash`) rather than on the
  * user: until someone proves the address *and* knows that password, nobody may sign in with it. An
- * unconfirmed user row therefore never has a password (see account.service.ts, "pending sign-ups").
+ * unconfirmed user row therefore never has a password (see accounts/sign-up.ts, "pending sign-ups").
  */
 export const userTokens = pgTable('user_token', {
 	id: text('id')
 		.primaryKey()
 		.$defaultFn(() => crypto.randomUUID()),
-	userId: text('user_id')
-		.notNull()
-		.references(() => users.id, { onDelete: 'cascade' }),
+	userId: belongsToUser('user_id'),
 	purpose: text('purpose', { enum: ['verify-email', 'reset-password'] }).notNull(),
 	tokenHash: text('token_hash').notNull().unique(),
 	expiresAt: timestamp('expires_at', { mode: 'date' }).notNull(),
@@ -88,9 +88,7 @@ export const userSessions = pgTable(
 	'user_session',
 	{
 		id: text('id').primaryKey(),
-		userId: text('user_id')
-			.notNull()
-			.references(() => users.id, { onDelete: 'cascade' }),
+		userId: belongsToUser('user_id'),
 		createdAt: timestamp('created_at', { mode: 'date' }).notNull().defaultNow(),
 		/** Moves forward as the session is used (Auth.js renews the JWT), at most once a day. */
 		expiresAt: timestamp('expires_at', { mode: 'date' }).notNull(),

@@ -7,9 +7,9 @@ import {
 	pgTable,
 	primaryKey,
 	text,
-	timestamp,
-	uuid
+	timestamp
 } from 'drizzle-orm/pg-core';
+import { belongsTo, createdAt, updatedAt, uuidId } from './columns';
 import { users } from './auth';
 import { sites } from './site';
 
@@ -19,10 +19,8 @@ export type BillLineItem = { label: string; amount: number };
 export const bills = pgTable(
 	'bill',
 	{
-		id: uuid('id').primaryKey().defaultRandom(),
-		siteId: uuid('site_id')
-			.notNull()
-			.references(() => sites.id, { onDelete: 'cascade' }),
+		id: uuidId(),
+		siteId: belongsTo('site_id', () => sites.id),
 		periodFrom: date('period_from', { mode: 'string' }).notNull(),
 		periodTo: date('period_to', { mode: 'string' }).notNull(),
 		kwh: doublePrecision('kwh').notNull(),
@@ -31,8 +29,8 @@ export const bills = pgTable(
 		lineItems: jsonb('line_items').$type<BillLineItem[]>().notNull().default([]),
 		notes: text('notes'),
 		revision: integer('revision').notNull().default(1),
-		createdAt: timestamp('created_at', { mode: 'date' }).notNull().defaultNow(),
-		updatedAt: timestamp('updated_at', { mode: 'date' }).notNull().defaultNow()
+		createdAt: createdAt(),
+		updatedAt: updatedAt()
 	},
 	(b) => [index('bill_site_idx').on(b.siteId, b.periodFrom)]
 );
@@ -41,10 +39,8 @@ export const bills = pgTable(
 export const billAttachments = pgTable(
 	'bill_attachment',
 	{
-		id: uuid('id').primaryKey().defaultRandom(),
-		billId: uuid('bill_id')
-			.notNull()
-			.references(() => bills.id, { onDelete: 'cascade' }),
+		id: uuidId(),
+		billId: belongsTo('bill_id', () => bills.id),
 		storageKey: text('storage_key').notNull().unique(),
 		/** Checked from the bytes, not the name: application/pdf, image/png or image/jpeg. */
 		contentType: text('content_type').notNull(),
@@ -52,7 +48,7 @@ export const billAttachments = pgTable(
 		/** The uploaded file's name, shown to people only. */
 		fileName: text('file_name').notNull(),
 		uploadedBy: text('uploaded_by').references(() => users.id, { onDelete: 'set null' }),
-		createdAt: timestamp('created_at', { mode: 'date' }).notNull().defaultNow()
+		createdAt: createdAt()
 	},
 	(a) => [index('bill_attachment_bill_idx').on(a.billId)]
 );
@@ -61,9 +57,7 @@ export const billAttachments = pgTable(
 export const usageIntervals = pgTable(
 	'usage_interval',
 	{
-		siteId: uuid('site_id')
-			.notNull()
-			.references(() => sites.id, { onDelete: 'cascade' }),
+		siteId: belongsTo('site_id', () => sites.id),
 		start: timestamp('start', { mode: 'date', withTimezone: true }).notNull(),
 		seconds: integer('seconds').notNull(),
 		kwh: doublePrecision('kwh').notNull()

@@ -10,8 +10,9 @@ import {
 	timestamp,
 	uuid
 } from 'drizzle-orm/pg-core';
+import { belongsTo, createdAt, updatedAt, uuidId } from './columns';
 import type { EquipmentInput } from '$lib/calc';
-import { users } from './auth';
+import { belongsToUser, users } from './auth';
 import { tariffs } from './tariff';
 import { workspaces } from './workspace';
 
@@ -19,10 +20,8 @@ import { workspaces } from './workspace';
 export const sites = pgTable(
 	'site',
 	{
-		id: uuid('id').primaryKey().defaultRandom(),
-		workspaceId: uuid('workspace_id')
-			.notNull()
-			.references(() => workspaces.id, { onDelete: 'cascade' }),
+		id: uuidId(),
+		workspaceId: belongsTo('workspace_id', () => workspaces.id),
 		name: text('name').notNull(),
 		address: text('address'),
 		timezone: text('timezone').notNull(),
@@ -36,8 +35,8 @@ export const sites = pgTable(
 		notes: text('notes'),
 		revision: integer('revision').notNull().default(1),
 		archivedAt: timestamp('archived_at', { mode: 'date' }),
-		createdAt: timestamp('created_at', { mode: 'date' }).notNull().defaultNow(),
-		updatedAt: timestamp('updated_at', { mode: 'date' }).notNull().defaultNow()
+		createdAt: createdAt(),
+		updatedAt: updatedAt()
 	},
 	(s) => [index('site_workspace_idx').on(s.workspaceId), index('site_tariff_idx').on(s.tariffId)]
 );
@@ -46,10 +45,8 @@ export const sites = pgTable(
 export const scenarios = pgTable(
 	'scenario',
 	{
-		id: uuid('id').primaryKey().defaultRandom(),
-		siteId: uuid('site_id')
-			.notNull()
-			.references(() => sites.id, { onDelete: 'cascade' }),
+		id: uuidId(),
+		siteId: belongsTo('site_id', () => sites.id),
 		name: text('name').notNull(),
 		description: text('description'),
 		isBaseline: boolean('is_baseline').notNull().default(false),
@@ -61,8 +58,8 @@ export const scenarios = pgTable(
 		archivedAt: timestamp('archived_at', { mode: 'date' }),
 		/** Deleted scenarios stay for an undo window before they are purged. */
 		deletedAt: timestamp('deleted_at', { mode: 'date' }),
-		createdAt: timestamp('created_at', { mode: 'date' }).notNull().defaultNow(),
-		updatedAt: timestamp('updated_at', { mode: 'date' }).notNull().defaultNow()
+		createdAt: createdAt(),
+		updatedAt: updatedAt()
 	},
 	(s) => [index('scenario_site_idx').on(s.siteId)]
 );
@@ -73,14 +70,12 @@ export type DeviceSpec = EquipmentInput & { inWater?: boolean; outdoor?: boolean
 export const devices = pgTable(
 	'device',
 	{
-		id: uuid('id').primaryKey().defaultRandom(),
-		scenarioId: uuid('scenario_id')
-			.notNull()
-			.references(() => scenarios.id, { onDelete: 'cascade' }),
+		id: uuidId(),
+		scenarioId: belongsTo('scenario_id', () => scenarios.id),
 		position: integer('position').notNull(),
 		spec: jsonb('spec').$type<DeviceSpec>().notNull(),
-		createdAt: timestamp('created_at', { mode: 'date' }).notNull().defaultNow(),
-		updatedAt: timestamp('updated_at', { mode: 'date' }).notNull().defaultNow()
+		createdAt: createdAt(),
+		updatedAt: updatedAt()
 	},
 	(d) => [index('device_scenario_idx').on(d.scenarioId, d.position)]
 );
@@ -91,14 +86,10 @@ export const siteRoleEnum = pgEnum('site_role', ['editor', 'viewer']);
 export const siteGrants = pgTable(
 	'site_grant',
 	{
-		siteId: uuid('site_id')
-			.notNull()
-			.references(() => sites.id, { onDelete: 'cascade' }),
-		userId: text('user_id')
-			.notNull()
-			.references(() => users.id, { onDelete: 'cascade' }),
+		siteId: belongsTo('site_id', () => sites.id),
+		userId: belongsToUser('user_id'),
 		role: siteRoleEnum('role').notNull(),
-		createdAt: timestamp('created_at', { mode: 'date' }).notNull().defaultNow()
+		createdAt: createdAt()
 	},
 	(g) => [primaryKey({ columns: [g.siteId, g.userId] }), index('site_grant_user_idx').on(g.userId)]
 );
@@ -107,10 +98,8 @@ export const siteGrants = pgTable(
 export const auditEvents = pgTable(
 	'audit_event',
 	{
-		id: uuid('id').primaryKey().defaultRandom(),
-		workspaceId: uuid('workspace_id')
-			.notNull()
-			.references(() => workspaces.id, { onDelete: 'cascade' }),
+		id: uuidId(),
+		workspaceId: belongsTo('workspace_id', () => workspaces.id),
 		siteId: uuid('site_id').references(() => sites.id, { onDelete: 'cascade' }),
 		userId: text('user_id').references(() => users.id, { onDelete: 'set null' }),
 		userName: text('user_name'),
@@ -119,7 +108,7 @@ export const auditEvents = pgTable(
 		action: text('action').notNull(),
 		summary: text('summary').notNull(),
 		changes: jsonb('changes').$type<Record<string, { from: unknown; to: unknown }>>(),
-		createdAt: timestamp('created_at', { mode: 'date' }).notNull().defaultNow()
+		createdAt: createdAt()
 	},
 	(a) => [index('audit_site_idx').on(a.siteId, a.createdAt)]
 );

@@ -1,4 +1,5 @@
 import { date, index, integer, jsonb, pgTable, text, timestamp, unique, uuid } from 'drizzle-orm/pg-core';
+import { belongsTo, createdAt, updatedAt, uuidId } from './columns';
 import type { TariffInput } from '$lib/calc';
 import { users } from './auth';
 import { workspaces } from './workspace';
@@ -13,7 +14,7 @@ export type HolidayRule = { country: string; region?: string } | { dates: string
 export const tariffs = pgTable(
 	'tariff',
 	{
-		id: uuid('id').primaryKey().defaultRandom(),
+		id: uuidId(),
 		workspaceId: uuid('workspace_id').references(() => workspaces.id, { onDelete: 'cascade' }),
 		utility: text('utility').notNull(),
 		name: text('name').notNull(),
@@ -29,8 +30,8 @@ export const tariffs = pgTable(
 		copiedFromId: uuid('copied_from_id'),
 		revision: integer('revision').notNull().default(0),
 		createdBy: text('created_by').references(() => users.id, { onDelete: 'set null' }),
-		createdAt: timestamp('created_at', { mode: 'date' }).notNull().defaultNow(),
-		updatedAt: timestamp('updated_at', { mode: 'date' }).notNull().defaultNow()
+		createdAt: createdAt(),
+		updatedAt: updatedAt()
 	},
 	(t) => [
 		index('tariff_workspace_idx').on(t.workspaceId),
@@ -41,10 +42,8 @@ export const tariffs = pgTable(
 export const tariffVersions = pgTable(
 	'tariff_version',
 	{
-		id: uuid('id').primaryKey().defaultRandom(),
-		tariffId: uuid('tariff_id')
-			.notNull()
-			.references(() => tariffs.id, { onDelete: 'cascade' }),
+		id: uuidId(),
+		tariffId: belongsTo('tariff_id', () => tariffs.id),
 		number: integer('number').notNull(),
 		effectiveFrom: date('effective_from', { mode: 'string' }).notNull(),
 		effectiveTo: date('effective_to', { mode: 'string' }),

@@ -1,28 +1,34 @@
 import { index, pgEnum, pgTable, primaryKey, text, timestamp, uuid } from 'drizzle-orm/pg-core';
-import { users } from './auth';
+import { belongsTo, createdAt, uuidId } from './columns';
+import { belongsToUser, users } from './auth';
 
 export const roleEnum = pgEnum('workspace_role', ['owner', 'editor', 'viewer']);
 
+/** A member's role in a workspace (or a guest's on one shared site); it lives with the column that stores it. */
+export type Role = (typeof roleEnum.enumValues)[number];
+
+/** The rank order: each role may do everything the roles below it may. */
+const ROLE_RANK: Record<Role, number> = { viewer: 1, editor: 2, owner: 3 };
+
+/** Whether someone with `role` may do what needs `needed`; the guard and the services ask the same question. */
+export const roleAtLeast = (role: Role, needed: Role): boolean => ROLE_RANK[role] >= ROLE_RANK[needed];
+
 /** A farm, a school program or a consultancy: the unit that owns sites, tariffs and bills. */
 export const workspaces = pgTable('workspace', {
-	id: uuid('id').primaryKey().defaultRandom(),
+	id: uuidId(),
 	name: text('name').notNull(),
 	/** Set when an owner deletes the workspace: it is kept (and can be restored) until then, then purged. */
 	deleteAfter: timestamp('delete_after', { mode: 'date' }),
-	createdAt: timestamp('created_at', { mode: 'date' }).notNull().defaultNow()
+	createdAt: createdAt()
 });
 
 export const memberships = pgTable(
 	'membership',
 	{
-		workspaceId: uuid('workspace_id')
-			.notNull()
-			.references(() => workspaces.id, { onDelete: 'cascade' }),
-		userId: text('user_id')
-			.notNull()
-			.references(() => users.id, { onDelete: 'cascade' }),
+		workspaceId: belongsTo('workspace_id', () => workspaces.id),
+		userId: belongsToUser('user_id'),
 		role: roleEnum('role').notNull(),
-		createdAt: timestamp('created_at', { mode: 'date' }).notNull().defaultNow()
+		createdAt: createdAt()
 	},
 	(m) => [primaryKey({ columns: [m.workspaceId, m.userId] }), index('membership_user_idx').on(m.userId)]
 );
@@ -31,10 +37,8 @@ export const memberships = pgTable(
 export const invitations = pgTable(
 	'invitation',
 	{
-		id: uuid('id').primaryKey().defaultRandom(),
-		workspaceId: uuid('workspace_id')
-			.notNull()
-			.references(() => workspaces.id, { onDelete: 'cascade' }),
+		id: uuidId(),
+		workspaceId: belongsTo('workspace_id', () => workspaces.id),
 		email: text('email').notNull(),
 		role: roleEnum('role').notNull(),
 		/** Set for a site-level share: the invitee gets that site only, as editor or viewer. */
@@ -44,7 +48,7 @@ export const invitations = pgTable(
 		expiresAt: timestamp('expires_at', { mode: 'date' }).notNull(),
 		acceptedAt: timestamp('accepted_at', { mode: 'date' }),
 		revokedAt: timestamp('revoked_at', { mode: 'date' }),
-		createdAt: timestamp('created_at', { mode: 'date' }).notNull().defaultNow()
+		createdAt: createdAt()
 	},
 	(i) => [index('invitation_workspace_idx').on(i.workspaceId)]
 );
@@ -53,15 +57,13 @@ export const invitations = pgTable(
 export const notices = pgTable(
 	'notice',
 	{
-		id: uuid('id').primaryKey().defaultRandom(),
-		workspaceId: uuid('workspace_id')
-			.notNull()
-			.references(() => workspaces.id, { onDelete: 'cascade' }),
+		id: uuidId(),
+		workspaceId: belongsTo('workspace_id', () => workspaces.id),
 		/** Makes a retried job idempotent: the same news is recorded once. */
 		dedupeKey: text('dedupe_key').notNull().unique(),
 		title: text('title').notNull(),
 		body: text('body').notNull(),
-		createdAt: timestamp('created_at', { mode: 'date' }).notNull().defaultNow()
+		createdAt: createdAt()
 	},
 	(n) => [index('notice_workspace_idx').on(n.workspaceId, n.createdAt)]
 );

@@ -1,7 +1,7 @@
 import { error } from '@sveltejs/kit';
 import { requireRole } from '$lib/server/guard';
 import { download, safeFileName } from '$lib/server/exports/download';
-import { exportWorkspace } from '$lib/server/services/workspace-export.service';
+import { exportWorkspace } from '$lib/server/workspaces/export';
 import type { RequestHandler } from './$types';
 
 /** All of the workspace's data as one JSON file, for its owners. */

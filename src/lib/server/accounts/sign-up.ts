@@ -1,10 +1,9 @@
-import { and, desc, eq, gt, isNotNull, isNull, sql } from 'drizzle-orm';
-import { db } from '../db';
+import { and, desc, eq, isNotNull, isNull, sql } from 'drizzle-orm';
+import { db, type Tx } from '../db';
 import { userTokens, users } from '../db/schema';
 import { hashPassword, verifyPassword } from '../auth/password';
-import { revokeAllSessions } from '../auth/sessions';
-import { HOUR_MS, hashToken, newToken } from '../auth/tokens';
 import { sendMail } from '../mail';
+import { consumeToken, issueToken, openLinks, openToken, voidTokens } from './user-tokens';
 
 /*
  * Pending sign-ups: proving an address never adopts a password someone else chose.
@@ -23,54 +22,6 @@ import { sendMail } from '../mail';
  * - Both sign-up paths hash the password before branching and answer with the same page, so neither the
  *   answer nor its timing tells who has an account.
  */
-
-type Purpose = 'verify-email' | 'reset-password';
-type Tx = Parameters<Parameters<typeof db.transaction>[0]>[0];
-const LIFETIME_MS: Record<Purpose, number> = { 'verify-email': 48 * HOUR_MS, 'reset-password': 1 * HOUR_MS };
-
-async function issueToken(
-	tx: Tx | typeof db,
-	userId: string,
-	purpose: Purpose,
-	pending: { name: string | null; passwordHash: string } | null = null
-): Promise<string> {
-	const { token, tokenHash } = newToken();
-	await tx.insert(userTokens).values({
-		userId,
-		purpose,
-		tokenHash,
-		expiresAt: new Date(Date.now() + LIFETIME_MS[purpose]),
-		name: pending?.name ?? null,
-		passwordHash: pending?.passwordHash ?? null
-	});
-	return token;
-}
-
-/** Marks every open link of that purpose for the user as used: none of them works any more. */
-async function voidTokens(tx: Tx | typeof db, userId: string, purpose: Purpose): Promise<void> {
-	await tx
-		.update(userTokens)
-		.set({ usedAt: new Date() })
-		.where(and(eq(userTokens.userId, userId), eq(userTokens.purpose, purpose), isNull(userTokens.usedAt)));
-}
-
-const openToken = (token: string, purpose: Purpose) =>
-	and(
-		eq(userTokens.tokenHash, hashToken(token)),
-		eq(userTokens.purpose, purpose),
-		isNull(userTokens.usedAt),
-		gt(userTokens.expiresAt, new Date())
-	);
-
-/** Marks the token used and returns its user, or null when it is unknown, used or expired. Single use. */
-async function consumeToken(tx: Tx, token: string, purpose: Purpose): Promise<string | null> {
-	const [row] = await tx
-		.update(userTokens)
-		.set({ usedAt: new Date() })
-		.where(openToken(token, purpose))
-		.returning({ userId: userTokens.userId });
-	return row?.userId ?? null;
-}
 
 /**
  * Starts a sign-up, or tells the address's owner someone tried. Returns nothing: the caller shows the same
@@ -136,7 +87,6 @@ async function pendingSignUp(where: ReturnType<typeof and>) {
 	return row;
 }
 
-/** The address an open confirmation link is for, or null when it is unknown, used or expired. */
 /** Whether a confirmed account owns this address. An unconfirmed sign-up may be anyone's, so it owns nothing. */
 export async function hasConfirmedAccount(email: string): Promise<boolean> {
 	const [row] = await db
@@ -146,6 +96,7 @@ export async function hasConfirmedAccount(email: string): Promise<boolean> {
 	return !!row;
 }
 
+/** The address an open confirmation link is for, or null when it is unknown, used or expired. */
 export async function confirmationFor(token: string): Promise<string | null> {
 	return (await pendingSignUp(openToken(token, 'verify-email')))?.email ?? null;
 }
@@ -182,14 +133,7 @@ export type PendingSignUp = NonNullable<Awaited<ReturnType<typeof pendingSignUp>
  * whether or not a sign-up is pending.
  */
 export async function pendingSignUpWith(email: string, password: string): Promise<PendingSignUp | null> {
-	const pending = await pendingSignUp(
-		and(
-			eq(users.email, email),
-			eq(userTokens.purpose, 'verify-email'),
-			isNull(userTokens.usedAt),
-			gt(userTokens.expiresAt, new Date())
-		)
-	);
+	const pending = await pendingSignUp(and(eq(users.email, email), openLinks('verify-email')));
 	return (await verifyPassword(password, pending?.passwordHash)) && pending ? pending : null;
 }
 
@@ -220,38 +164,4 @@ export async function addressProvenBySignInLink(userId: string, tx: Tx | typeof 
 		})
 		.where(eq(users.id, userId));
 	await voidTokens(tx, userId, 'verify-email');
-}
-
-/** Always behaves the same to the caller; only an existing account gets a reset link. */
-export async function requestPasswordReset(email: string, origin: string): Promise<void> {
-	const [user] = await db.select({ id: users.id }).from(users).where(eq(users.email, email));
-	if (!user) return;
-	const token = await issueToken(db, user.id, 'reset-password');
-	await sendMail({
-		to: email,
-		subject: 'Reset your Runrate password',
-		text: `Open this link to choose a new password (it works once, for one hour):\n\n${origin}/reset?token=${token}\n\nIf you did not ask for it, ignore this message; your password stays as it is.`
-	});
-}
-
-/**
- * Sets the new password. The link proves the address, so it also counts as confirmed (any pending sign-up
- * is void). Using one reset link voids the user's other reset links, and every session of the account
- * ends: whoever knew the old password is signed out everywhere, and the person signs in again.
- */
-export async function resetPassword(token: string, password: string): Promise<string | null> {
-	const passwordHash = await hashPassword(password);
-	return db.transaction(async (tx) => {
-		const userId = await consumeToken(tx, token, 'reset-password');
-		if (!userId) return null;
-		await voidTokens(tx, userId, 'reset-password');
-		await voidTokens(tx, userId, 'verify-email');
-		const [user] = await tx
-			.update(users)
-			.set({ passwordHash, emailVerified: sql`coalesce(${users.emailVerified}, now())` })
-			.where(eq(users.id, userId))
-			.returning({ email: users.email });
-		await revokeAllSessions(userId, tx);
-		return user?.email ?? null;
-	});
 }

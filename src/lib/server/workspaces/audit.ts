@@ -1,8 +1,7 @@
 import { desc, eq } from 'drizzle-orm';
-import { db } from '../db';
+import { db, type Tx } from '../db';
 import { auditEvents } from '../db/schema';
 
-type Tx = Parameters<Parameters<typeof db.transaction>[0]>[0];
 export type Actor = { id: string; name: string | null; email: string };
 export type AuditEntry = {
 	workspaceId: string;

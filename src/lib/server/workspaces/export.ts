@@ -5,15 +5,14 @@ import {
 	billAttachments,
 	bills,
 	devices,
-	memberships,
 	scenarios,
 	sites,
 	tariffs,
 	tariffVersions,
 	usageIntervals,
-	users,
 	workspaces
 } from '../db/schema';
+import { listMembers } from './membership';
 
 export const EXPORT_FORMAT = 'runrate-workspace-export';
 export const EXPORT_VERSION = 1;
@@ -143,12 +142,8 @@ export async function exportWorkspace(workspaceId: string, now = new Date()) {
 		.from(workspaces)
 		.where(eq(workspaces.id, workspaceId));
 	if (!workspace) return null;
-	const members = await db
-		.select({ name: users.name, email: users.email, role: memberships.role })
-		.from(memberships)
-		.innerJoin(users, eq(users.id, memberships.userId))
-		.where(eq(memberships.workspaceId, workspaceId))
-		.orderBy(asc(users.email));
+	// Name, e-mail and role only: the export names people, it does not carry their account ids.
+	const members = (await listMembers(workspaceId)).map(({ name, email, role }) => ({ name, email, role }));
 	const audit = await db
 		.select()
 		.from(auditEvents)
