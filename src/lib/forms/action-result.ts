@@ -16,3 +16,10 @@ function part(form: unknown, key: 'errors' | 'values'): Record<string, string> {
 	if (form === null || typeof form !== 'object' || !(key in form)) return {};
 	return ((form as Record<string, unknown>)[key] ?? {}) as Record<string, string>;
 }
+
+/**
+ * A form action's result as a component inside the page receives it: its messages and values by field
+ * name, plus what that action says on success (`{ invited: string }`); null before any post.
+ */
+export type ActionState<Success extends object = object> =
+	({ errors?: Record<string, string>; values?: Record<string, string> } & Success) | null;
