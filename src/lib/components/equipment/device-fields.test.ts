@@ -1,14 +1,5 @@
-import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import {
-	numberText,
-	parseNumber,
-	powerEcho,
-	powerForm,
-	switchPower,
-	toggleMonth,
-	typedWatts
-} from './device-fields';
+import { powerEcho, powerForm, switchPower, toggleMonth, typedWatts } from './device-fields';
 
 // Power figures follow P = V × I × PF (single phase) and P = √3 × V × I × PF (balanced three phase,
 // line-to-line volts), the usual handbook power formulas; the figures are invented examples.
@@ -58,43 +49,6 @@ describe('switching the power form', () => {
 			phases: 1
 		});
 		expect(switchPower({ amps: 3 }, 'watts')).toEqual({ watts: 0 });
-	});
-});
-
-describe('a number box', () => {
-	it('writes the number typed', () => {
-		expect(parseNumber(' 12.5 ')).toEqual({ value: 12.5, bad: false });
-		expect(parseNumber('.5')).toEqual({ value: 0.5, bad: false });
-		expect(parseNumber('-3')).toEqual({ value: -3, bad: false });
-	});
-
-	it('writes nothing for an empty box, so the schema says the field is required', () => {
-		expect(parseNumber('')).toEqual({ value: undefined, bad: false });
-		expect(parseNumber('  ')).toEqual({ value: undefined, bad: false });
-	});
-
-	it('writes nothing, and flags the box, for text that is not a number', () => {
-		expect(parseNumber('12abc')).toEqual({ value: undefined, bad: true });
-		expect(parseNumber('0,9')).toEqual({ value: undefined, bad: true });
-		expect(parseNumber('Infinity')).toEqual({ value: undefined, bad: true });
-		expect(parseNumber('1e999')).toEqual({ value: undefined, bad: true });
-	});
-
-	it('never writes NaN or an infinite number, whatever is typed', () => {
-		fc.assert(
-			fc.property(fc.string(), (text) => {
-				const { value } = parseNumber(text);
-				return value === undefined || Number.isFinite(value);
-			})
-		);
-		expect(parseNumber('NaN').value).toBeUndefined();
-	});
-
-	it('shows a stored number, and nothing for a missing one', () => {
-		expect(numberText(0.31)).toBe('0.31');
-		expect(numberText(undefined)).toBe('');
-		expect(numberText(null)).toBe('');
-		expect(numberText(Number.NaN)).toBe('');
 	});
 });
 

@@ -71,25 +71,6 @@ function round(value: number, digits: number): number {
 	return Math.round(value * scale) / scale;
 }
 
-const DECIMAL = /^[-+]?(\d+\.?\d*|\.\d+)(e[-+]?\d+)?$/i;
-
-/**
- * What a number box means: a finite number, nothing for an empty box (the schema then says "Watts is
- * required"), or `bad` for text that is not a number — which also writes nothing, never NaN.
- */
-export function parseNumber(text: string): { value: number | undefined; bad: boolean } {
-	const trimmed = text.trim();
-	if (trimmed === '') return { value: undefined, bad: false };
-	const parsed = Number(trimmed);
-	if (!DECIMAL.test(trimmed) || !Number.isFinite(parsed)) return { value: undefined, bad: true };
-	return { value: parsed, bad: false };
-}
-
-/** What a number box shows for a value it did not type itself. */
-export function numberText(value: unknown): string {
-	return typeof value === 'number' && Number.isFinite(value) ? String(value) : '';
-}
-
 /**
  * Writes a field of a device while it is being typed. The Equipment type says "number" because that
  * is the valid shape; an empty box holds nothing until the person fills it, which the schema reports.

@@ -11,9 +11,6 @@ import {
 	fieldId,
 	insertRow,
 	issuesByRow,
-	mergeIssues,
-	messagesAt,
-	messagesUnder,
 	moveRow,
 	removeRow,
 	rowDomId,
@@ -141,21 +138,6 @@ describe('issues across the table', () => {
 		const byRow = issuesByRow(allIssues(rows));
 		expect(byRow.get(2)).toEqual(rowIssues(rows[2]!.spec));
 		expect(byRow.has(0)).toBe(false);
-	});
-
-	it('shows a message said twice (by the browser and the server) once', () => {
-		const issue = { path: 'name', message: 'Name must not be empty' };
-		expect(mergeIssues([issue], [issue, { path: 'quantity', message: 'x' }])).toHaveLength(2);
-	});
-
-	it('finds messages at a path, or under it', () => {
-		const issues = [
-			{ path: 'months', message: 'a' },
-			{ path: 'months.2', message: 'b' },
-			{ path: 'monthsX', message: 'c' }
-		];
-		expect(messagesAt(issues, 'months')).toEqual(['a']);
-		expect(messagesUnder(issues, 'months')).toEqual(['a', 'b']);
 	});
 });
 

@@ -1,5 +1,6 @@
 import { equipmentSchema, powerSchema, type EquipmentInput } from '$lib/calc/equipment.schema';
-import { parseRequest, type RequestIssue } from '$lib/calc/parse';
+import { parseRequest } from '$lib/calc/parse';
+import type { FieldIssue } from '$lib/components/fields/field-issues';
 import { powerForm } from './device-fields';
 
 /** A stored device: the core's Equipment plus the safety flags and notes (as `devices.spec` holds it). */
@@ -12,7 +13,7 @@ export interface EquipmentRow {
 }
 
 /** A problem at a dotted path: relative to a device in a row, or "3.power.amps" across the table. */
-export type FieldIssue = RequestIssue;
+export type { FieldIssue };
 
 /** What "Add a device" puts in: one 100 W water pump, always on — valid before anything is typed. */
 export function blankDevice(): DeviceSpec {
@@ -76,29 +77,6 @@ export function issuesByRow(issues: readonly FieldIssue[]): Map<number, FieldIss
 		byRow.set(row, list);
 	}
 	return byRow;
-}
-
-/** Client and server issues together, each path and message once. */
-export function mergeIssues(...lists: ReadonlyArray<readonly FieldIssue[]>): FieldIssue[] {
-	const seen = new Set<string>();
-	return lists.flat().filter((issue) => {
-		const key = `${issue.path}\u0000${issue.message}`;
-		if (seen.has(key)) return false;
-		seen.add(key);
-		return true;
-	});
-}
-
-/** Messages for exactly this path. */
-export function messagesAt(issues: readonly FieldIssue[], path: string): string[] {
-	return issues.filter((issue) => issue.path === path).map((issue) => issue.message);
-}
-
-/** Messages for this path and everything inside it ("months" and "months.2"). */
-export function messagesUnder(issues: readonly FieldIssue[], path: string): string[] {
-	return issues
-		.filter((issue) => issue.path === path || issue.path.startsWith(`${path}.`))
-		.map((issue) => issue.message);
 }
 
 /** The rows with one moved by `delta` places (−1 up, +1 down); unchanged at either end. */

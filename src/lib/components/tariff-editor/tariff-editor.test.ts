@@ -1,18 +1,12 @@
-import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import type { TariffInput } from '$lib/calc/tariff.schema';
 import { blankEnergyCharge, blankSeason, blankTariff } from './tariff-blanks';
+import { numberDraft } from '$lib/components/fields/number-text';
 import {
 	describePath,
 	fieldId,
 	fieldIdsToward,
 	flaggedMonths,
-	mergeIssues,
-	messagesAt,
-	messagesUnder,
-	numberDraft,
-	numberText,
-	syncedText,
 	tariffIssues,
 	writeDraft
 } from './tariff-editor';
@@ -20,15 +14,7 @@ import {
 // Every tariff here is invented test data, no real utility's rates. Expected messages are the shared
 // schema's own (src/lib/calc/tariff.schema.ts and tariff.ts), so a change there shows up here.
 
-describe('a number box', () => {
-	it('writes the number a person typed', () => {
-		expect(numberDraft('0.12')).toBe(0.12);
-		expect(numberDraft(' 12 ')).toBe(12);
-		expect(numberDraft('.5')).toBe(0.5);
-		expect(numberDraft('-0.004')).toBe(-0.004);
-		expect(numberDraft('1e3')).toBe(1000);
-	});
-
+describe('a number box in the tariff', () => {
 	it('writes nothing when the box is empty, so the schema says the field is required', () => {
 		expect(numberDraft('')).toBeUndefined();
 		expect(numberDraft('   ')).toBeUndefined();
@@ -49,32 +35,6 @@ describe('a number box', () => {
 		const tariff: TariffInput = { ...blankTariff(), taxes: [{ label: 'Demo tax', percent: 0 }] };
 		writeDraft(tariff.taxes![0]!, 'percent', numberDraft('four'));
 		expect(tariffIssues(tariff)).toEqual([{ path: 'taxes.0.percent', message: 'Percent must be a number' }]);
-	});
-
-	it('never yields NaN or an infinite number, whatever is typed', () => {
-		fc.assert(
-			fc.property(fc.string(), (text) => {
-				const draft = numberDraft(text);
-				return typeof draft !== 'number' || Number.isFinite(draft);
-			})
-		);
-		expect(numberDraft('NaN')).toBe('NaN');
-	});
-
-	it('shows a loaded value, and nothing for an empty or broken one', () => {
-		expect(numberText(0.31)).toBe('0.31');
-		expect(numberText(undefined)).toBe('');
-		expect(numberText(null)).toBe('');
-		expect(numberText(Number.NaN)).toBe('');
-		expect(numberText('12abc')).toBe('12abc');
-	});
-
-	it('keeps its half-typed text while it means the same value, and follows a changed value', () => {
-		expect(syncedText(0, '0.')).toBe('0.');
-		expect(syncedText(undefined, '')).toBe('');
-		expect(syncedText(0.2, '0.1')).toBe('0.2');
-		expect(syncedText(undefined, '5')).toBe('');
-		expect(syncedText(null, '')).toBe('');
 	});
 });
 
@@ -165,19 +125,8 @@ describe('showing issues beside their fields', () => {
 		{ path: 'energyCharges.0.seasons.10.months', message: 'Another season' }
 	];
 
-	it('finds the messages of one field, or of a group and what is inside it', () => {
-		expect(messagesAt(issues, 'energyCharges.0.seasons.1.months')).toEqual(['Months must not be empty']);
-		expect(messagesUnder(issues, 'energyCharges.0.seasons.1.months')).toHaveLength(2);
-		expect(messagesUnder(issues, 'energyCharges.0.seasons.1')).toHaveLength(2);
-	});
-
 	it('names the months the issues point at by position', () => {
 		expect([...flaggedMonths(issues, 'energyCharges.0.seasons.1.months', [1, 2, 3])]).toEqual([3]);
-	});
-
-	it('lists a message the client and the server both give once', () => {
-		const server = [{ path: 'currency', message: 'Currency must be a three-letter code such as USD' }];
-		expect(mergeIssues(server, server, issues)).toHaveLength(4);
 	});
 
 	it('gives each path an element id, and the ids to fall back to', () => {

@@ -1,42 +1,10 @@
-import { parseRequest, type RequestIssue } from '$lib/calc/parse';
+import { parseRequest } from '$lib/calc/parse';
 import { tariffSchema, type TariffInput } from '$lib/calc/tariff.schema';
+import type { FieldIssue } from '$lib/components/fields/field-issues';
+import type { NumberDraft } from '$lib/components/fields/number-text';
 
 /** One problem at a dotted path relative to the tariff ("energyCharges.0.tiers.1.uptoKwh"). */
-export type EditorIssue = RequestIssue;
-
-/**
- * What a number box writes into the tariff: a number when the text is one, nothing when the box is
- * empty (the schema then says "Per kWh is required"), and the text itself when it is not a number (the
- * schema says "Per kWh must be a number"). Never NaN, so the JSON the page posts is what was typed.
- */
-export type NumberDraft = number | string | undefined;
-
-const DECIMAL = /^[-+]?(\d+\.?\d*|\.\d+)(e[-+]?\d+)?$/i;
-
-/** The draft for a box's text: "0.12" → 0.12, "" → undefined, "12abc" → "12abc". */
-export function numberDraft(text: string): NumberDraft {
-	const trimmed = text.trim();
-	if (trimmed === '') return undefined;
-	if (!DECIMAL.test(trimmed)) return trimmed;
-	const parsed = Number(trimmed);
-	return Number.isFinite(parsed) ? parsed : trimmed;
-}
-
-/** What a number box shows for a value it did not type itself (a loaded or replaced tariff). */
-export function numberText(value: unknown): string {
-	if (typeof value === 'number') return Number.isFinite(value) ? String(value) : '';
-	return typeof value === 'string' ? value : '';
-}
-
-/**
- * The text a box keeps when the tariff's value may have changed under it: its own text while that
- * still means the same value ("0." stays "0." while the value is 0), otherwise the value's text.
- */
-export function syncedText(value: unknown, text: string): string {
-	const draft = numberDraft(text);
-	if (draft === value || (draft === undefined && (value === undefined || value === null))) return text;
-	return numberText(value);
-}
+export type EditorIssue = FieldIssue;
 
 /**
  * Writes a draft into a charge. The tariff's type says "number" because that is the valid shape; while
@@ -69,29 +37,6 @@ export function tariffIssues(value: TariffInput): EditorIssue[] {
 			message: `${key === 'perMonth' ? 'Per month' : 'Per day'} is required`
 		};
 	});
-}
-
-/** Client and server issues together, each path and message once. */
-export function mergeIssues(...lists: ReadonlyArray<readonly EditorIssue[]>): EditorIssue[] {
-	const seen = new Set<string>();
-	return lists.flat().filter((issue) => {
-		const key = `${issue.path}\u0000${issue.message}`;
-		if (seen.has(key)) return false;
-		seen.add(key);
-		return true;
-	});
-}
-
-/** Messages for exactly this path. */
-export function messagesAt(issues: readonly EditorIssue[], path: string): string[] {
-	return issues.filter((issue) => issue.path === path).map((issue) => issue.message);
-}
-
-/** Messages for this path and everything inside it (a month row, a list of windows). */
-export function messagesUnder(issues: readonly EditorIssue[], path: string): string[] {
-	return issues
-		.filter((issue) => issue.path === path || issue.path.startsWith(`${path}.`))
-		.map((issue) => issue.message);
 }
 
 /** The element id of the control for a path: "energyCharges.0.perKwh" → "te-energyCharges-0-perKwh". */
