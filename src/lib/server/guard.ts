@@ -2,8 +2,9 @@ import { error, redirect, type RequestEvent } from '@sveltejs/kit';
 import { and, eq } from 'drizzle-orm';
 import { db } from './db';
 import { memberships, siteGrants, workspaces } from './db/schema';
-import { findTariff } from './services/tariff.service';
-import { findScenario, findSite, type SiteRow } from './services/site.service';
+import { findTariff } from '$lib/server/tariffs/tariff.service';
+import { findScenario } from '$lib/server/sites/scenario.service';
+import { findSite, type SiteRow } from '$lib/server/sites/site.service';
 
 export type Role = 'owner' | 'editor' | 'viewer';
 const RANK: Record<Role, number> = { viewer: 1, editor: 2, owner: 3 };

@@ -3,7 +3,7 @@ import type { BillInput } from '$lib/forms/bill.schema';
 import { db } from '../db';
 import { bills } from '../db/schema';
 import { audit, type Actor } from '../services/audit.service';
-import { StaleWrite, type SiteRow } from '../services/site.service';
+import { StaleWrite, type SiteRow } from '$lib/server/sites/site.service';
 
 export type BillRow = typeof bills.$inferSelect;
 

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { CUSTOMER_CLASSES } from '$lib/forms/tariff-meta.schema';
-import { searchTariffs, workspaceIdsOf } from '../services/tariff.service';
+import { searchTariffs, workspaceIdsOf } from '$lib/server/tariffs/tariff.service';
 import { features, typicalMonth } from './submission';
 
 export const libraryQuerySchema = z.object({

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { holidaysSchema, referenceMonthlyCost, tariffSchema, timezoneSchema } from '$lib/calc';
 import { tariffMetaSchema, versionMetaSchema } from '$lib/forms/tariff-meta.schema';
-import type { VersionRow, TariffRow } from '../services/tariff.service';
+import type { VersionRow, TariffRow } from '$lib/server/tariffs/tariff.service';
 import { MAX_REVISION } from '$lib/forms/storable';
 
 /**

@@ -6,14 +6,9 @@ import { z } from 'zod';
 import { requireSiteAccess } from '$lib/server/guard';
 import { siteTrail } from '$lib/server/services/audit.service';
 import { usableTariff } from '$lib/server/tariffs/usable';
-import {
-	changeScenario,
-	createScenario,
-	listDevices,
-	listScenarios,
-	UNDO_MS
-} from '$lib/server/services/site.service';
-import { priceScenario } from '$lib/server/services/results.service';
+import { changeScenario, createScenario, listScenarios, UNDO_MS } from '$lib/server/sites/scenario.service';
+import { listDevices } from '$lib/server/sites/equipment.service';
+import { priceScenario } from '$lib/server/sites/results.service';
 import { scenarioSchema } from '$lib/forms/site.schema';
 import { fieldErrors, keepValues } from '$lib/forms/errors';
 import { storableText } from '$lib/forms/storable';

@@ -1,8 +1,8 @@
 import { fail, redirect } from '@sveltejs/kit';
 import { z } from 'zod';
 import { can, requireRole, requireTariffRead } from '$lib/server/guard';
-import { copyTariff, workspaceIdsOf } from '$lib/server/services/tariff.service';
-import { tariffUsage } from '$lib/server/services/site.service';
+import { copyTariff, workspaceIdsOf } from '$lib/server/tariffs/tariff.service';
+import { tariffUsage } from '$lib/server/sites/site.service';
 import { listWorkspacesFor } from '$lib/server/services/workspace.service';
 import { features, typicalMonth } from '$lib/server/tariffs/submission';
 import type { Actions, PageServerLoad } from './$types';

@@ -1,6 +1,6 @@
 import { error, fail } from '@sveltejs/kit';
 import { requireAdmin, requireRole, requireUser } from '$lib/server/guard';
-import { importTariffs } from '$lib/server/services/tariff.service';
+import { importTariffs } from '$lib/server/tariffs/tariff.service';
 import { listWorkspacesFor } from '$lib/server/services/workspace.service';
 import { describeRowError, MAX_SHEET_BYTES, parseTariffSheet } from '$lib/server/tariffs/sheet-import';
 import { unstorableIn } from '$lib/forms/storable';

@@ -1,7 +1,7 @@
 import { fail, redirect } from '@sveltejs/kit';
 import { z } from 'zod';
 import { requireRole } from '$lib/server/guard';
-import { recentNotices } from '$lib/server/services/tariff-notice.service';
+import { recentNotices } from '$lib/server/tariffs/tariff-notice.service';
 import { inviteLimiter, TOO_MANY } from '$lib/server/rate-limit';
 import {
 	changeRole,

@@ -1,5 +1,5 @@
 import { calculate, calculateAcrossVersions, calculateRequestSchema } from '$lib/calc';
-import { calculationEndpoint } from '$lib/server/api';
+import { calculationEndpoint } from '$lib/server/http/calculation';
 import type { RequestHandler } from './$types';
 
 /** POST /api/v1/calculate — the calculation contract (see /rules). Anonymous requests are rate limited;

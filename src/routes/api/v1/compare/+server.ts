@@ -1,6 +1,6 @@
 import { json } from '@sveltejs/kit';
 import { compare, compareRequestSchema } from '$lib/calc';
-import { calculationEndpoint } from '$lib/server/api';
+import { calculationEndpoint } from '$lib/server/http/calculation';
 import { comparisonFromQuery } from '$lib/server/compare/request';
 import type { RequestHandler } from './$types';
 

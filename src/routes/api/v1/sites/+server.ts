@@ -1,11 +1,13 @@
 import { json } from '@sveltejs/kit';
 import { z } from 'zod';
 import { holidaysSchema, timezoneSchema } from '$lib/calc';
-import { apiError, readJsonBody } from '$lib/server/api';
+import { apiError } from '$lib/server/http/json';
+import { readJsonBody } from '$lib/server/http/body';
 import { requireRole } from '$lib/server/guard';
-import { createSite, listSites } from '$lib/server/services/site.service';
+import { createSite, listSites } from '$lib/server/sites/site.service';
 import { siteSchema } from '$lib/forms/site.schema';
-import { invalid, tariffChoiceIssue } from '../site-api.server';
+import { invalid } from '$lib/server/http/answers';
+import { tariffChoiceIssue } from '$lib/server/sites/tariff-choice';
 import type { RequestHandler } from './$types';
 
 const issuesOf = (error: z.ZodError) =>

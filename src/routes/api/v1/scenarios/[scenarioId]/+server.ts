@@ -1,12 +1,14 @@
 import { error, json, type RequestEvent } from '@sveltejs/kit';
 import { z } from 'zod';
 import { parseRequest } from '$lib/calc';
-import { apiError, readJsonBody } from '$lib/server/api';
+import { apiError } from '$lib/server/http/json';
+import { readJsonBody } from '$lib/server/http/body';
 import { requireScenarioAccess, requireSiteAccess, requireUser } from '$lib/server/guard';
-import { changeScenario, findScenario, UNDO_MS, type ScenarioRow } from '$lib/server/services/site.service';
+import { changeScenario, findScenario, UNDO_MS, type ScenarioRow } from '$lib/server/sites/scenario.service';
 import { scenarioSchema } from '$lib/forms/site.schema';
 import { chooserFor } from '$lib/server/tariffs/usable';
-import { invalid, methodNotAllowed, PRIVATE, tariffChoiceIssue } from '../../site-api.server';
+import { invalid, methodNotAllowed, PRIVATE } from '$lib/server/http/answers';
+import { tariffChoiceIssue } from '$lib/server/sites/tariff-choice';
 import type { RequestHandler } from './$types';
 
 const view = (s: ScenarioRow) => ({

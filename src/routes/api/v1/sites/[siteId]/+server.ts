@@ -1,12 +1,13 @@
 import { json } from '@sveltejs/kit';
 import { z } from 'zod';
 import { holidaysSchema, parseRequest, timezoneSchema } from '$lib/calc';
-import { readJsonBody } from '$lib/server/api';
+import { readJsonBody } from '$lib/server/http/body';
 import { requireSiteAccess } from '$lib/server/guard';
-import { findSite, StaleWrite, updateSite } from '$lib/server/services/site.service';
+import { findSite, StaleWrite, updateSite } from '$lib/server/sites/site.service';
 import { siteSchema } from '$lib/forms/site.schema';
 import { chooserFor } from '$lib/server/tariffs/usable';
-import { conflict, invalid, methodNotAllowed, PRIVATE, tariffChoiceIssue } from '../../site-api.server';
+import { conflict, invalid, methodNotAllowed, PRIVATE } from '$lib/server/http/answers';
+import { tariffChoiceIssue } from '$lib/server/sites/tariff-choice';
 import type { RequestHandler } from './$types';
 import { MAX_REVISION } from '$lib/forms/storable';
 

@@ -4,7 +4,7 @@ import { deleteBill, overlappingBills, updateBill } from '$lib/server/bills/bill
 import { reconcileBill } from '$lib/server/bills/bill-reconciliation';
 import { requireBillAccess } from '$lib/server/bills/attachments-access';
 import { attachmentKeys, discardObjects, listAttachments } from '$lib/server/bills/attachments';
-import { StaleWrite } from '$lib/server/services/site.service';
+import { StaleWrite } from '$lib/server/sites/site.service';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load = (async (event) => {

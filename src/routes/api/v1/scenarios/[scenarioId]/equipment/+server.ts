@@ -1,11 +1,12 @@
 import { json } from '@sveltejs/kit';
 import { parseRequest } from '$lib/calc';
-import { readJsonBody } from '$lib/server/api';
+import { readJsonBody } from '$lib/server/http/body';
 import { requireScenarioAccess } from '$lib/server/guard';
-import { listDevices, saveDevices, StaleWrite } from '$lib/server/services/site.service';
+import { listDevices, saveDevices } from '$lib/server/sites/equipment.service';
+import { StaleWrite } from '$lib/server/sites/site.service';
 import { equipmentListSchema, newDeviceRowSchema } from '$lib/server/sites/device-specs';
-import { conflict, invalid, methodNotAllowed } from '../../../site-api.server';
-import { writeList } from './rows.server';
+import { conflict, invalid, methodNotAllowed } from '$lib/server/http/answers';
+import { writeList } from '$lib/server/sites/equipment-rows';
 import type { RequestHandler } from './$types';
 
 /** GET — the scenario's equipment list, in order, with the revision to send back when saving. */

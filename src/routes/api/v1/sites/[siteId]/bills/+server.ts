@@ -1,9 +1,9 @@
 import { json } from '@sveltejs/kit';
-import { readJsonBody } from '$lib/server/api';
+import { readJsonBody } from '$lib/server/http/body';
 import { billJson, overlapAnswer, parseBillBody } from '$lib/server/bills/bill-api';
 import { createBills, findBill, listBills, overlappingBills } from '$lib/server/bills/bill.service';
 import { requireSiteAccess } from '$lib/server/guard';
-import { PRIVATE, invalid, methodNotAllowed } from '../../../site-api.server';
+import { PRIVATE, invalid, methodNotAllowed } from '$lib/server/http/answers';
 import type { RequestHandler } from './$types';
 
 /** GET — the site's bills, oldest first. */

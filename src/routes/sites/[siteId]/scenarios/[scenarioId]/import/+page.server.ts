@@ -1,7 +1,8 @@
 import { error, fail, redirect } from '@sveltejs/kit';
 import { requireScenarioAccess } from '$lib/server/guard';
 import { MAX_SHEET_BYTES, sheetKind } from '$lib/server/sheets/read-sheet';
-import { StaleWrite, listDevices, saveDevices } from '$lib/server/services/site.service';
+import { StaleWrite } from '$lib/server/sites/site.service';
+import { listDevices, saveDevices } from '$lib/server/sites/equipment.service';
 import { type ColumnMapping, EQUIPMENT_COLUMNS } from '$lib/server/sites/equipment-sheet/columns';
 import {
 	describeRowError,

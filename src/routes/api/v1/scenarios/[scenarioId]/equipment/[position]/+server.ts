@@ -1,12 +1,12 @@
 import { json } from '@sveltejs/kit';
 import { z } from 'zod';
 import { parseRequest } from '$lib/calc';
-import { readJsonBody } from '$lib/server/api';
+import { readJsonBody } from '$lib/server/http/body';
 import { requireScenarioAccess } from '$lib/server/guard';
-import { listDevices } from '$lib/server/services/site.service';
+import { listDevices } from '$lib/server/sites/equipment.service';
 import { deviceRowSchema } from '$lib/server/sites/device-specs';
-import { conflict, invalid, methodNotAllowed, notFound, PRIVATE } from '../../../../site-api.server';
-import { positionOf, writeList } from '../rows.server';
+import { conflict, invalid, methodNotAllowed, notFound, PRIVATE } from '$lib/server/http/answers';
+import { positionOf, writeList } from '$lib/server/sites/equipment-rows';
 import type { RequestHandler } from './$types';
 
 const NO_DEVICE = 'There is no device at this position.';

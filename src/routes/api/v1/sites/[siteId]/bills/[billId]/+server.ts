@@ -1,11 +1,11 @@
 import { json } from '@sveltejs/kit';
-import { readJsonBody } from '$lib/server/api';
+import { readJsonBody } from '$lib/server/http/body';
 import { requireBillAccess } from '$lib/server/bills/attachments-access';
 import { attachmentKeys, discardObjects } from '$lib/server/bills/attachments';
 import { billJson, overlapAnswer, parseBillBody } from '$lib/server/bills/bill-api';
 import { deleteBill, findBill, overlappingBills, updateBill } from '$lib/server/bills/bill.service';
-import { StaleWrite } from '$lib/server/services/site.service';
-import { PRIVATE, conflict, invalid, methodNotAllowed } from '../../../../site-api.server';
+import { StaleWrite } from '$lib/server/sites/site.service';
+import { PRIVATE, conflict, invalid, methodNotAllowed } from '$lib/server/http/answers';
 import type { RequestHandler } from './$types';
 
 export const GET: RequestHandler = async (event) => {

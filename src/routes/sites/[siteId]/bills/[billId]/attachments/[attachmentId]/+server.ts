@@ -7,9 +7,9 @@ import {
 	type AttachmentType
 } from '$lib/server/bills/attachments';
 import { safeFileName } from '$lib/server/exports/download';
-import { apiError } from '$lib/server/api';
+import { apiError } from '$lib/server/http/json';
 import { logger } from '$lib/server/log';
-import { methodNotAllowed } from '../../../../../../api/v1/site-api.server';
+import { methodNotAllowed } from '$lib/server/http/answers';
 import type { RequestHandler } from './$types';
 
 /** `filename` in ASCII for every browser, `filename*` (RFC 6266 / 5987) with the name as uploaded. */

@@ -4,9 +4,10 @@ import type { z } from 'zod';
 import type { RequestIssue } from '$lib/calc';
 import type { requireScenarioAccess } from '$lib/server/guard';
 import type { DeviceSpec } from '$lib/server/db/schema';
-import { saveDevices, StaleWrite } from '$lib/server/services/site.service';
+import { saveDevices } from '$lib/server/sites/equipment.service';
+import { StaleWrite } from '$lib/server/sites/site.service';
 import { equipmentListSchema } from '$lib/server/sites/device-specs';
-import { conflict, invalid } from '../../../site-api.server';
+import { conflict, invalid } from '$lib/server/http/answers';
 
 type ScenarioAccess = Awaited<ReturnType<typeof requireScenarioAccess>>;
 

@@ -8,9 +8,10 @@ import {
 	type VersionedResponse
 } from '$lib/calc';
 import type { DeviceSpec } from '../db/schema';
-import type { ScenarioRow, SiteRow } from './site.service';
+import type { ScenarioRow } from '$lib/server/sites/scenario.service';
+import type { SiteRow } from '$lib/server/sites/site.service';
 import { usableTariff, TARIFF_UNAVAILABLE } from '../tariffs/usable';
-import type { TariffRow } from './tariff.service';
+import type { TariffRow } from '../tariffs/tariff.service';
 
 export type Priced =
 	| { ok: true; result: VersionedResponse; tariff: { id: string; name: string; utility: string } }

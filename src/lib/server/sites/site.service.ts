@@ -1,0 +1,123 @@
+// Sites: listing, creating and editing a site, and where a tariff is used across sites.
+import { and, asc, eq, inArray, isNull, or } from 'drizzle-orm';
+import type { SiteInput } from '$lib/forms/site.schema';
+import { db } from '../db';
+import { scenarios, sites } from '../db/schema';
+import { audit, changedFields, type Actor } from '../services/audit.service';
+
+/** A site as stored. */
+export type SiteRow = typeof sites.$inferSelect;
+
+/** A write based on a stale copy: someone else saved first. */
+export class StaleWrite extends Error {
+	constructor(readonly currentRevision: number) {
+		super('Someone else saved a change here while you were editing.');
+	}
+}
+
+/** The workspace's live sites, by name. */
+export async function listSites(workspaceId: string) {
+	return db
+		.select()
+		.from(sites)
+		.where(and(eq(sites.workspaceId, workspaceId), isNull(sites.archivedAt)))
+		.orderBy(asc(sites.name));
+}
+
+/** One site by id, or null; the caller checks access (guard). */
+export async function findSite(siteId: string) {
+	const [site] = await db.select().from(sites).where(eq(sites.id, siteId));
+	return site ?? null;
+}
+
+/** A new site starts with an empty baseline scenario, so there is always one to compare against. */
+export async function createSite(workspaceId: string, input: SiteInput, actor: Actor): Promise<string> {
+	return db.transaction(async (tx) => {
+		const [site] = await tx
+			.insert(sites)
+			.values({ ...input, workspaceId })
+			.returning({ id: sites.id });
+		const [baseline] = await tx
+			.insert(scenarios)
+			.values({ siteId: site!.id, name: 'What is installed now', isBaseline: true })
+			.returning({ id: scenarios.id });
+		await audit(tx, actor, {
+			workspaceId,
+			siteId: site!.id,
+			entity: 'site',
+			entityId: site!.id,
+			action: 'created',
+			summary: `Created site ${input.name}`
+		});
+		await audit(tx, actor, {
+			workspaceId,
+			siteId: site!.id,
+			entity: 'scenario',
+			entityId: baseline!.id,
+			action: 'created',
+			summary: 'Created the baseline scenario'
+		});
+		return site!.id;
+	});
+}
+
+/** Saves a site's fields if nobody saved since `expectedRevision`; the trail records what changed. */
+export async function updateSite(site: SiteRow, expectedRevision: number, input: SiteInput, actor: Actor) {
+	await db.transaction(async (tx) => {
+		const [row] = await tx
+			.update(sites)
+			.set({ ...input, revision: site.revision + 1, updatedAt: new Date() })
+			.where(and(eq(sites.id, site.id), eq(sites.revision, expectedRevision)))
+			.returning({ id: sites.id });
+		if (!row) throw new StaleWrite(site.revision);
+		const changes = changedFields(site as unknown as Record<string, unknown>, input);
+		await audit(tx, actor, {
+			workspaceId: site.workspaceId,
+			siteId: site.id,
+			entity: 'site',
+			entityId: site.id,
+			action: 'updated',
+			summary: `Changed ${Object.keys(changes).join(', ') || 'nothing'}`,
+			changes
+		});
+	});
+}
+
+/** Where a tariff is used, among the workspaces given: sites on it, and scenarios that override to it. */
+export async function tariffUsage(tariffId: string, workspaceIds: string[]) {
+	if (workspaceIds.length === 0) return [];
+	const rows = await db
+		.select({
+			siteId: sites.id,
+			siteName: sites.name,
+			siteTariff: sites.tariffId,
+			scenarioId: scenarios.id,
+			scenarioName: scenarios.name,
+			scenarioTariff: scenarios.tariffId,
+			deletedAt: scenarios.deletedAt
+		})
+		.from(sites)
+		.leftJoin(scenarios, eq(scenarios.siteId, sites.id))
+		.where(
+			and(
+				inArray(sites.workspaceId, workspaceIds),
+				isNull(sites.archivedAt),
+				or(eq(sites.tariffId, tariffId), eq(scenarios.tariffId, tariffId))
+			)
+		);
+	const bySite = new Map<
+		string,
+		{ siteId: string; siteName: string; wholeSite: boolean; scenarios: string[] }
+	>();
+	for (const r of rows) {
+		const entry = bySite.get(r.siteId) ?? {
+			siteId: r.siteId,
+			siteName: r.siteName,
+			wholeSite: r.siteTariff === tariffId,
+			scenarios: []
+		};
+		if (r.scenarioTariff === tariffId && r.scenarioName && !r.deletedAt) entry.scenarios.push(r.scenarioName);
+		bySite.set(r.siteId, entry);
+	}
+	return [...bySite.values()];
+}
