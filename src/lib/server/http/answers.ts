@@ -31,3 +31,13 @@ export function methodNotAllowed(...methods: string[]) {
 	response.headers.set('Allow', methods.join(', '));
 	return response;
 }
+
+/** Why a service wrote nothing: a stale revision, field issues, or nothing at the place named. */
+export type Refusal = { conflict: number } | { issues: RequestIssue[] } | { missing: true };
+
+/** The answer to a refused write: 409 for a stale revision, 400 for issues, 404 (`missing`) for no such row. */
+export function refusal(refused: Refusal, missing = 'Not found') {
+	if ('conflict' in refused) return conflict(refused.conflict);
+	if ('issues' in refused) return invalid(refused.issues);
+	return notFound(missing);
+}

@@ -1,10 +1,15 @@
 // Scenarios of a site: listing, creating (blank or as a copy) and the one-step changes (rename, baseline,
 // archive, delete, restore, tariff).
 import { and, asc, eq } from 'drizzle-orm';
+import { z } from 'zod';
+import { parseRequest, type RequestIssue } from '$lib/calc';
+import { scenarioSchema } from '$lib/forms/site.schema';
 import { db } from '../db';
 import { devices, scenarios } from '../db/schema';
 import { audit, type Actor } from '../services/audit.service';
+import { chooserFor } from '../tariffs/usable';
 import type { SiteRow } from './site.service';
+import { tariffChoiceIssue } from './tariff-choice';
 
 /** A scenario as stored. */
 export type ScenarioRow = typeof scenarios.$inferSelect;
@@ -140,4 +145,85 @@ export async function changeScenario(
 			summary: `${WORDS[change.kind]} "${scenario.name}"${change.kind === 'rename' && change.name !== scenario.name ? ` → "${change.name}"` : ''}`
 		});
 	});
+}
+
+/** Whether a scenario deleted at `deletedAt` can still be restored (the undo window is open). */
+export const undoWindowOpen = (deletedAt: Date) => deletedAt.getTime() > Date.now() - UNDO_MS;
+
+/** Whether a PATCH body asks to undo a deletion: the one request that may reach a deleted scenario. */
+export const asksToRestore = (body: unknown) =>
+	!!body && typeof body === 'object' && (body as Record<string, unknown>).restored === true;
+
+const ONE_CHANGE =
+	'Send one change per request: name and description, archived, baseline, restored or tariff';
+
+/** The changes PATCH takes; the description also takes null (none). */
+const changeSchema = z.strictObject({
+	name: scenarioSchema.shape.name.optional(),
+	description: z.preprocess((v) => (v === null ? '' : v), scenarioSchema.shape.description),
+	archived: z.boolean({ error: 'archived is true or false' }).optional(),
+	baseline: z
+		.literal(true, { error: 'Send baseline: true; to move the baseline, make another scenario it' })
+		.optional(),
+	restored: z.literal(true, { error: 'Send restored: true to undo a deletion' }).optional(),
+	tariff: z
+		.object({
+			tariffId: z.uuid({ error: 'Pick a tariff from the library' }),
+			tariffVersion: z
+				.number({ error: 'Pinned version must be a whole number' })
+				.int('Pinned version must be a whole number')
+				.min(1, 'Pinned version must be a whole number from 1')
+				.nullable()
+				.optional()
+		})
+		.nullable()
+		.optional()
+});
+
+/** Why a PATCH was refused: field issues (400), or a restore of a scenario that is not deleted (409). */
+export type PatchRefusal = { issues: RequestIssue[] } | { notDeleted: true };
+
+/**
+ * Applies a PATCH body to a scenario: exactly one change (name and description together count as one),
+ * a baseline only of a live scenario, a restore only of a deleted one, a tariff the caller may choose.
+ * Answers null when the change is saved, else why it was refused.
+ */
+export async function patchScenario(
+	access: { site: SiteRow; scenario: ScenarioRow; user: Actor; viaGrant: boolean },
+	body: unknown
+): Promise<PatchRefusal | null> {
+	const { site, scenario, user } = access;
+	const parsed = parseRequest(changeSchema, body);
+	if (!parsed.success) return { issues: parsed.error.issues };
+	const change = parsed.data;
+	const has = (key: string) => Object.hasOwn(body as object, key);
+	const kinds = [
+		has('name') || has('description'),
+		...['archived', 'baseline', 'restored', 'tariff'].map(has)
+	];
+	if (kinds.filter(Boolean).length !== 1) return { issues: [{ path: '', message: ONE_CHANGE }] };
+
+	if (change.restored) {
+		if (!scenario.deletedAt) return { notDeleted: true };
+		await changeScenario(site, scenario, { kind: 'restore' }, user);
+	} else if (change.archived !== undefined) {
+		await changeScenario(site, scenario, { kind: change.archived ? 'archive' : 'unarchive' }, user);
+	} else if (change.baseline) {
+		if (scenario.archivedAt)
+			return { issues: [{ path: 'baseline', message: 'Bring the scenario back from the archive first' }] };
+		await changeScenario(site, scenario, { kind: 'baseline' }, user);
+	} else if (change.tariff !== undefined) {
+		const choice = {
+			tariffId: change.tariff?.tariffId ?? null,
+			tariffVersion: change.tariff?.tariffVersion ?? null
+		};
+		const issue = await tariffChoiceIssue(chooserFor(access, scenario), choice, 'tariff.');
+		if (issue) return { issues: [issue] };
+		await changeScenario(site, scenario, { kind: 'tariff', ...choice }, user);
+	} else {
+		const name = change.name ?? scenario.name;
+		const description = has('description') ? change.description : scenario.description;
+		await changeScenario(site, scenario, { kind: 'rename', name, description }, user);
+	}
+	return null;
 }

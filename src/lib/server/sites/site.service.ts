@@ -2,8 +2,11 @@
 import { and, asc, eq, inArray, isNull, or } from 'drizzle-orm';
 import type { SiteInput } from '$lib/forms/site.schema';
 import { db } from '../db';
-import { scenarios, sites } from '../db/schema';
+import { scenarios, sites, workspaces } from '../db/schema';
+import type { RequestIssue } from '$lib/calc';
 import { audit, changedFields, type Actor } from '../services/audit.service';
+import { chooserFor } from '../tariffs/usable';
+import { tariffChoiceIssue } from './tariff-choice';
 
 /** A site as stored. */
 export type SiteRow = typeof sites.$inferSelect;
@@ -28,6 +31,15 @@ export async function listSites(workspaceId: string) {
 export async function findSite(siteId: string) {
 	const [site] = await db.select().from(sites).where(eq(sites.id, siteId));
 	return site ?? null;
+}
+
+/** The workspace a site belongs to, as its pages name it (id and name). */
+export async function siteWorkspace(site: SiteRow) {
+	const [workspace] = await db
+		.select({ id: workspaces.id, name: workspaces.name })
+		.from(workspaces)
+		.where(eq(workspaces.id, site.workspaceId));
+	return workspace;
 }
 
 /** A new site starts with an empty baseline scenario, so there is always one to compare against. */
@@ -120,4 +132,30 @@ export async function tariffUsage(tariffId: string, workspaceIds: string[]) {
 		bySite.set(r.siteId, entry);
 	}
 	return [...bySite.values()];
+}
+
+/**
+ * Saves a site's fields for the API: a tariff the caller may choose, and `expectedRevision` the site's
+ * own (checked here as well as in the write, so the new revision is always the one after the caller's).
+ * Answers the new revision, or why nothing was written (a 409 names the revision now stored).
+ */
+export async function changeSite(
+	access: { site: SiteRow; user: Actor; viaGrant: boolean },
+	expectedRevision: number,
+	input: SiteInput
+): Promise<
+	{ ok: true; revision: number } | { ok: false; issues: RequestIssue[] } | { ok: false; conflict: number }
+> {
+	const { site, user } = access;
+	const tariffIssue = await tariffChoiceIssue(chooserFor(access), input);
+	if (tariffIssue) return { ok: false, issues: [tariffIssue] };
+	if (expectedRevision !== site.revision) return { ok: false, conflict: site.revision };
+	try {
+		await updateSite(site, expectedRevision, input, user);
+	} catch (e) {
+		if (e instanceof StaleWrite)
+			return { ok: false, conflict: (await findSite(site.id))?.revision ?? e.currentRevision };
+		throw e;
+	}
+	return { ok: true, revision: site.revision + 1 };
 }

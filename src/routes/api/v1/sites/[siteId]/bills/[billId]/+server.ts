@@ -1,10 +1,8 @@
 import { json } from '@sveltejs/kit';
 import { readJsonBody } from '$lib/server/http/body';
 import { requireBillAccess } from '$lib/server/bills/attachments-access';
-import { attachmentKeys, discardObjects } from '$lib/server/bills/attachments';
 import { billJson, overlapAnswer, parseBillBody } from '$lib/server/bills/bill-api';
-import { deleteBill, findBill, overlappingBills, updateBill } from '$lib/server/bills/bill.service';
-import { StaleWrite } from '$lib/server/sites/site.service';
+import { changeBill, findBill, removeBill } from '$lib/server/bills/bill.service';
 import { PRIVATE, conflict, invalid, methodNotAllowed } from '$lib/server/http/answers';
 import type { RequestHandler } from './$types';
 
@@ -31,14 +29,8 @@ export const PUT: RequestHandler = async (event) => {
 			{ path: 'expectedRevision', message: 'Send the revision you edited (expectedRevision)' }
 		]);
 	}
-	const overlaps = await overlappingBills(site.id, input.periodFrom, input.periodTo, bill.id);
-	if (overlaps.length && !confirmOverlap) return overlapAnswer(overlaps);
-	try {
-		await updateBill(site, bill, expectedRevision, input, user);
-	} catch (e) {
-		if (e instanceof StaleWrite) return conflict(e.currentRevision);
-		throw e;
-	}
+	const saved = await changeBill(site, bill, expectedRevision, input, !!confirmOverlap, user);
+	if (!saved.ok) return 'overlaps' in saved ? overlapAnswer(saved.overlaps) : conflict(saved.conflict);
 	return json(billJson((await findBill(bill.id))!), { headers: PRIVATE });
 };
 
@@ -50,9 +42,7 @@ export const DELETE: RequestHandler = async (event) => {
 		event.params.billId,
 		'editor'
 	);
-	const keys = await attachmentKeys(bill.id);
-	await deleteBill(site, bill, user);
-	await discardObjects(keys);
+	await removeBill(site, bill, user);
 	return new Response(null, { status: 204 });
 };
 
