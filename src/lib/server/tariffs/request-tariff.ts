@@ -1,0 +1,136 @@
+// The tariff of a calculation request: carried inline, or named from the library by id (with a session).
+import { error, type RequestEvent } from '@sveltejs/kit';
+import { z } from 'zod';
+import {
+	calculateRequestSchema,
+	compareRequestSchema,
+	holidaysSchema,
+	tariffSchema,
+	timezoneSchema,
+	versionInForce,
+	type DatedTariff,
+	type Tariff
+} from '$lib/calc';
+import { requireTariffRead } from '../guard';
+import { PICK_A_TARIFF } from './usable';
+
+/** The fields every request that carries a tariff shares (calculate and compare). */
+type TariffShape = { tariff: z.ZodType; timezone: z.ZodType; holidays: z.ZodType; period: z.ZodType };
+
+/** A body that names a library tariff carries `tariffId` and no inline `tariff`. */
+const namesLibraryTariff = (body: unknown) =>
+	!!body && typeof body === 'object' && !Array.isArray(body) && 'tariffId' in body && !('tariff' in body);
+
+/**
+ * The request schema, or its library variant: `tariffId` (and `tariffVersion` to pin one) instead of
+ * `tariff`, with the time zone and holidays defaulting to the tariff's own. One schema: the body's keys
+ * pick the variant, and its issues are reported exactly as the variant's own.
+ */
+function inlineOrLibrary<S extends z.ZodObject<TariffShape>>(schema: S) {
+	const library = schema.omit({ tariff: true }).extend({
+		timezone: timezoneSchema.optional(),
+		// Without the schema's default (none), so a body that leaves holidays out gets the tariff's.
+		holidays: holidaysSchema.unwrap().optional(),
+		tariffId: z.string({ error: PICK_A_TARIFF }).max(100, PICK_A_TARIFF),
+		tariffVersion: z
+			.number({ error: 'Pinned version must be a whole number' })
+			.int('Pinned version must be a whole number')
+			.min(1, 'Pinned version must be a whole number from 1')
+			.optional()
+	});
+	type Inline = z.output<S>;
+	type Library = Omit<Inline, 'tariff' | 'timezone' | 'holidays'> & {
+		timezone?: Inline['timezone'];
+		holidays?: Inline['holidays'];
+		tariffId: string;
+		tariffVersion?: number;
+	};
+	return z.unknown().transform((body, ctx): { inline: Inline } | { library: Library } | typeof z.NEVER => {
+		const variant = namesLibraryTariff(body) ? library : schema;
+		const parsed = variant.safeParse(body);
+		if (!parsed.success) {
+			for (const issue of parsed.error.issues) ctx.addIssue(issue as z.core.$ZodRawIssue);
+			return z.NEVER;
+		}
+		return variant === library ? { library: parsed.data as Library } : { inline: parsed.data as Inline };
+	});
+}
+
+/** The body of POST /api/v1/calculate: the core's request, with an inline tariff or a library one. */
+export const calculateBodySchema = inlineOrLibrary(calculateRequestSchema);
+
+/** The body of POST /api/v1/compare, with an inline tariff or a library one. */
+export const compareBodySchema = inlineOrLibrary(compareRequestSchema);
+
+/** An inline tariff as the one version there is: in force on every day. */
+const openEnded = (tariff: Tariff): DatedTariff => ({
+	id: 'inline',
+	number: 1,
+	effectiveFrom: '0000-01-01',
+	effectiveTo: null,
+	tariff
+});
+
+/** The first day a request's period covers. */
+const firstDayOf = (period: { start: string } | { billingPeriods: { from: string }[] }) =>
+	'start' in period ? `${period.start}-01` : (period.billingPeriods[0]?.from ?? '');
+
+/**
+ * The library versions a request names, read with the caller's access (401 without a session, 404 for
+ * a tariff the caller may not read or a version it does not have). A pinned version applies to every
+ * period, whatever its dates.
+ */
+async function libraryVersions(event: RequestEvent, tariffId: string, pinned: number | undefined) {
+	if (!event.locals.user)
+		error(401, 'Sign in to calculate with a library tariff by id, or send the tariff inline.');
+	const { tariff, versions } = await requireTariffRead(event, tariffId);
+	const chosen = pinned === undefined ? versions : versions.filter((v) => v.number === pinned);
+	if (chosen.length === 0) error(404, `This tariff has no version ${String(pinned)}.`);
+	const dated: DatedTariff[] = chosen.map((v) => ({
+		id: v.id,
+		number: v.number,
+		effectiveFrom: pinned === undefined ? v.effectiveFrom : '0000-01-01',
+		effectiveTo: pinned === undefined ? v.effectiveTo : null,
+		tariff: tariffSchema.parse(v.structure)
+	}));
+	return { tariff, versions: dated };
+}
+
+/**
+ * A validated body as the core's request and the tariff versions to calculate with. An inline tariff is
+ * one open-ended version; a library tariff brings its versions, its time zone and holidays (unless the
+ * body gives them), and the version in force on the period's first day as the request's own tariff.
+ */
+export async function requestWithVersions<
+	T extends {
+		period: { start: string } | { billingPeriods: { from: string }[] };
+		tariff: Tariff;
+		timezone: string;
+		holidays: unknown;
+	}
+>(
+	event: RequestEvent,
+	body:
+		| { inline: T }
+		| {
+				library: Omit<T, 'tariff' | 'timezone' | 'holidays'> & {
+					timezone?: T['timezone'];
+					holidays?: T['holidays'];
+					tariffId: string;
+					tariffVersion?: number;
+				};
+		  }
+): Promise<{ request: T; versions: DatedTariff[]; inline: boolean }> {
+	if ('inline' in body)
+		return { request: body.inline, versions: [openEnded(body.inline.tariff)], inline: true };
+	const { tariffId, tariffVersion, ...fields } = body.library;
+	const { tariff, versions } = await libraryVersions(event, tariffId, tariffVersion);
+	const inForce = versionInForce(versions, firstDayOf(fields.period)) ?? versions.at(-1)!;
+	const request = {
+		...fields,
+		timezone: fields.timezone === undefined ? timezoneSchema.parse(tariff.timezone) : fields.timezone,
+		holidays: fields.holidays === undefined ? holidaysSchema.parse(tariff.holidays) : fields.holidays,
+		tariff: inForce.tariff
+	} as unknown as T;
+	return { request, versions, inline: false };
+}
