@@ -23,6 +23,19 @@ export async function listScenarios(siteId: string) {
 		.orderBy(asc(scenarios.position), asc(scenarios.createdAt));
 }
 
+/** A scenario as the machine API answers it; `tariff` null means the site's tariff. */
+export const scenarioJson = (s: ScenarioRow) => ({
+	id: s.id,
+	siteId: s.siteId,
+	name: s.name,
+	description: s.description,
+	isBaseline: s.isBaseline,
+	archived: !!s.archivedAt,
+	tariff: s.tariffId ? { tariffId: s.tariffId, tariffVersion: s.tariffVersion } : null,
+	revision: s.revision,
+	updatedAt: s.updatedAt
+});
+
 /** One scenario by id, or null; the caller checks access (guard). */
 export async function findScenario(scenarioId: string) {
 	const [row] = await db.select().from(scenarios).where(eq(scenarios.id, scenarioId));

@@ -1,6 +1,7 @@
 import { calculateAcrossVersions } from '$lib/calc';
 import { calculationEndpoint } from '$lib/server/http/calculation';
-import { calculateBodySchema, requestWithVersions } from '$lib/server/tariffs/request-tariff';
+import { calculateBodySchema } from '$lib/server/tariffs/request-body';
+import { requestWithVersions } from '$lib/server/tariffs/request-tariff';
 import type { RequestHandler } from './$types';
 
 /** POST /api/v1/calculate — the calculation contract (see /rules). Anonymous requests are rate limited;

@@ -2,7 +2,8 @@ import { json } from '@sveltejs/kit';
 import { compare } from '$lib/calc';
 import { calculationEndpoint } from '$lib/server/http/calculation';
 import { comparisonFromQuery } from '$lib/server/compare/request';
-import { compareBodySchema, requestWithVersions } from '$lib/server/tariffs/request-tariff';
+import { compareBodySchema } from '$lib/server/tariffs/request-body';
+import { requestWithVersions } from '$lib/server/tariffs/request-tariff';
 import type { RequestHandler } from './$types';
 
 /** POST /api/v1/compare — scenarios over 12 calendar months, with finance and CO₂; a library tariff is

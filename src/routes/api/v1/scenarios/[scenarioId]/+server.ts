@@ -1,3 +1,5 @@
+// Over 60 lines: GET, PATCH (with the one door a deleted scenario keeps, for its undo), DELETE and the
+// fallback of one resource.
 import { error, json, type RequestEvent } from '@sveltejs/kit';
 import { z } from 'zod';
 import { apiError } from '$lib/server/http/json';
@@ -9,23 +11,11 @@ import {
 	findScenario,
 	patchScenario,
 	undoWindowOpen,
-	UNDO_MS,
-	type ScenarioRow
+	scenarioJson,
+	UNDO_MS
 } from '$lib/server/sites/scenario.service';
 import { invalid, methodNotAllowed, PRIVATE } from '$lib/server/http/answers';
 import type { RequestHandler } from './$types';
-
-const view = (s: ScenarioRow) => ({
-	id: s.id,
-	siteId: s.siteId,
-	name: s.name,
-	description: s.description,
-	isBaseline: s.isBaseline,
-	archived: !!s.archivedAt,
-	tariff: s.tariffId ? { tariffId: s.tariffId, tariffVersion: s.tariffVersion } : null,
-	revision: s.revision,
-	updatedAt: s.updatedAt
-});
 
 /**
  * A scenario deleted less than UNDO_MS ago, for the one request that may still reach it (the undo);
@@ -41,7 +31,7 @@ async function accessForUndo(event: RequestEvent, scenarioId: string) {
 /** GET /api/v1/scenarios/:id — the scenario, with its tariff override (null: the site's tariff). */
 export const GET: RequestHandler = async (event) => {
 	const { scenario } = await requireScenarioAccess(event, event.params.scenarioId, 'viewer');
-	return json(view(scenario), { headers: PRIVATE });
+	return json(scenarioJson(scenario), { headers: PRIVATE });
 };
 
 /**
@@ -61,7 +51,7 @@ export const PATCH: RequestHandler = async (event) => {
 		return apiError(409, 'not_deleted', 'This scenario is not deleted.');
 	if (refused) return invalid(refused.issues);
 	const now = await findScenario(access.scenario.id);
-	return json(view(now!), { status: 200 });
+	return json(scenarioJson(now!), { status: 200 });
 };
 
 /**
