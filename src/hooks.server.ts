@@ -1,7 +1,7 @@
 import type { Handle, HandleServerError, ServerInit } from '@sveltejs/kit';
 import { startJobs } from '$lib/server/jobs';
 import { sequence } from '@sveltejs/kit/hooks';
-import { apiJsonErrors } from '$lib/server/api-errors';
+import { apiJsonErrors } from '$lib/server/http/api-errors';
 import { authHandle } from '$lib/server/auth';
 import { onlyPublicAuthDoors } from '$lib/server/auth/public-doors';
 import {
@@ -15,7 +15,7 @@ import { finishReadingBody } from '$lib/server/http/unread-body';
 import { isDatabaseUnavailable } from '$lib/server/db/errors';
 import { logger } from '$lib/server/log';
 import { withSecurityHeaders } from '$lib/server/security-headers';
-import { unavailableResponse } from '$lib/server/unavailable';
+import { unavailableResponse } from '$lib/server/http/unavailable';
 
 /** Resolves the signed-in user once; every load, action and endpoint reads `locals.user`. The user row
  * and the session's own row (`auth/sessions.ts`) are read together on every request, so a deleted
@@ -77,7 +77,7 @@ export const handleError: HandleServerError = ({ error, event, status, message }
 
 /** Starts the job queue's workers with the server; the job modules register their jobs when imported. */
 export const init: ServerInit = async () => {
-	await import('$lib/server/services/tariff-notice.service');
+	await import('$lib/server/tariffs/tariff-notice.service');
 	await import('$lib/server/workspaces/deletion');
 	await startJobs();
 };

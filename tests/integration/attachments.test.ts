@@ -14,7 +14,7 @@ import {
 	removeAttachment
 } from '$lib/server/bills/attachments';
 import type { Actor } from '$lib/server/workspaces/audit';
-import type { SiteRow } from '$lib/server/services/site.service';
+import type { SiteRow } from '$lib/server/sites/site.service';
 import { createWorkspace } from '$lib/server/workspaces/workspace.service';
 import { deleteObject, getObject, putObject } from '$lib/server/storage/object-store';
 import { makeSite, makeUser } from './fixtures';

@@ -12,7 +12,7 @@ import {
 	users,
 	workspaces
 } from '$lib/server/db/schema';
-import { createSite } from '$lib/server/services/site.service';
+import { createSite } from '$lib/server/sites/site.service';
 import { createWorkspace } from '$lib/server/workspaces/workspace.service';
 import { exportWorkspace } from '$lib/server/workspaces/export';
 import {

@@ -7,7 +7,7 @@ import type { TariffMeta, VersionMeta } from '$lib/forms/tariff-meta.schema';
 import { db } from '$lib/server/db';
 import { users, type HolidayRule } from '$lib/server/db/schema';
 import type { Actor } from '$lib/server/workspaces/audit';
-import { createSite, findSite, type SiteRow } from '$lib/server/services/site.service';
+import { createSite, findSite, type SiteRow } from '$lib/server/sites/site.service';
 
 /** Stores a user with that email and name; `more` fills other columns (a password hash, a verified date). */
 export async function makeUser(

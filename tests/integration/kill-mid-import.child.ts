@@ -74,12 +74,12 @@ async function run(job: ChildJob) {
 		await createBills(job.site, bills, armed(bills, actor, job.trip));
 	} else if (job.kind === 'tariffs') {
 		const { parseTariffSheet } = await import('$lib/server/tariffs/sheet-import');
-		const { importTariffs } = await import('$lib/server/services/tariff.service');
+		const { importTariffs } = await import('$lib/server/tariffs/tariff.service');
 		const sheet = await parseTariffSheet(new TextEncoder().encode(tariffSheetCsv(job.utility)), 'csv');
 		if (sheet.sheetErrors.length || sheet.errors.length) throw new Error(JSON.stringify(sheet));
 		await importTariffs(sheet.rows, job.workspaceId, armed(sheet.rows, actor, job.trip));
 	} else {
-		const { saveDevices } = await import('$lib/server/services/site.service');
+		const { saveDevices } = await import('$lib/server/sites/equipment.service');
 		const specs = pumps('Replacement pump', 50);
 		const by = armed(specs, actor, job.trip);
 		await saveDevices(job.site, job.scenario, job.scenario.revision, specs, by);

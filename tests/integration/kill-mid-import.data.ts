@@ -2,7 +2,8 @@
 // it kills (kill-mid-import.child.ts). Every utility, bill and device here is made up.
 import type { DeviceSpec } from '$lib/server/db/schema';
 import type { Actor } from '$lib/server/workspaces/audit';
-import type { ScenarioRow, SiteRow } from '$lib/server/services/site.service';
+import type { ScenarioRow } from '$lib/server/sites/scenario.service';
+import type { SiteRow } from '$lib/server/sites/site.service';
 import type { Interval } from '$lib/server/usage/interval';
 
 export const TRIPPED = 'kill-mid-import: tripped';

@@ -17,8 +17,9 @@ import {
 import { parseBillSheet } from '$lib/server/bills/bill-sheet';
 import { createBills } from '$lib/server/bills/bill.service';
 import type { Actor } from '$lib/server/workspaces/audit';
-import { saveDevices, type SiteRow } from '$lib/server/services/site.service';
-import { importTariffs } from '$lib/server/services/tariff.service';
+import { saveDevices } from '$lib/server/sites/equipment.service';
+import type { SiteRow } from '$lib/server/sites/site.service';
+import { importTariffs } from '$lib/server/tariffs/tariff.service';
 import { createWorkspace } from '$lib/server/workspaces/workspace.service';
 import { parseTariffSheet } from '$lib/server/tariffs/sheet-import';
 import { importUsage, usageSummary } from '$lib/server/usage/usage.service';

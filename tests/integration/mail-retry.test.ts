@@ -7,8 +7,8 @@ import { env } from '$env/dynamic/private';
 import { client, db } from '$lib/server/db';
 import { notices, scenarios } from '$lib/server/db/schema';
 import { startJobs, stopJobs } from '$lib/server/jobs';
-import { saveDevices } from '$lib/server/services/site.service';
-import { createTariff, publishVersion } from '$lib/server/services/tariff.service';
+import { saveDevices } from '$lib/server/sites/equipment.service';
+import { createTariff, publishVersion } from '$lib/server/tariffs/tariff.service';
 import { flat, makeSite, makeUser, tariffMeta, versionMeta } from './fixtures';
 
 // Against the real PostgreSQL and job queue of `npm test`, with a mail server of the test's own that turns
@@ -85,7 +85,7 @@ beforeAll(async () => {
 	await new Promise<void>((resolve) => smtp.listen(0, '127.0.0.1', resolve));
 	// mail.ts builds its transport from SMTP_URL when first imported: point it here before anything does.
 	env.SMTP_URL = `smtp://127.0.0.1:${(smtp.server.address() as AddressInfo).port}`;
-	({ announceVersion } = await import('$lib/server/services/tariff-notice.service'));
+	({ announceVersion } = await import('$lib/server/tariffs/tariff-notice.service'));
 	const { createWorkspace } = await import('$lib/server/workspaces/workspace.service');
 
 	const owner = await makeUser(recipient, 'Retry test owner (invented)');

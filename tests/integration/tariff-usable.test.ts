@@ -4,10 +4,11 @@ import { eq } from 'drizzle-orm';
 import { client, db } from '$lib/server/db';
 import { scenarios, sites, type DeviceSpec } from '$lib/server/db/schema';
 import { buildComparison } from '$lib/server/compare/build';
-import { priceScenario } from '$lib/server/services/results.service';
-import { createScenario, listScenarios, type SiteRow } from '$lib/server/services/site.service';
-import { createTariff, publishVersion, searchTariffs } from '$lib/server/services/tariff.service';
-import { costChanges } from '$lib/server/services/tariff-notice.service';
+import { priceScenario } from '$lib/server/sites/results.service';
+import { createScenario, listScenarios } from '$lib/server/sites/scenario.service';
+import type { SiteRow } from '$lib/server/sites/site.service';
+import { createTariff, publishVersion, searchTariffs } from '$lib/server/tariffs/tariff.service';
+import { costChanges } from '$lib/server/tariffs/tariff-notice.service';
 import { createWorkspace } from '$lib/server/workspaces/workspace.service';
 import {
 	chooserFor,

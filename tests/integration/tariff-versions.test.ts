@@ -10,7 +10,7 @@ import {
 	publishVersion,
 	searchTariffs,
 	TariffConflict
-} from '$lib/server/services/tariff.service';
+} from '$lib/server/tariffs/tariff.service';
 import { createWorkspace } from '$lib/server/workspaces/workspace.service';
 import { flat, makeUser, tariffMeta, versionMeta } from './fixtures';
 

@@ -1,7 +1,8 @@
 import { error, redirect, type RequestEvent } from '@sveltejs/kit';
 import { roleAtLeast, type Role } from './db/schema';
-import { findTariff } from './services/tariff.service';
-import { findScenario, findSite, type SiteRow } from './services/site.service';
+import { findTariff } from './tariffs/tariff.service';
+import { findScenario } from './sites/scenario.service';
+import { findSite, type SiteRow } from './sites/site.service';
 import { findMembership, memberRole, siteGrantRole } from './workspaces/membership';
 
 /*

@@ -1,4 +1,6 @@
-import { listDevices, listScenarios, type SiteRow } from '../services/site.service';
+import { listDevices } from '$lib/server/sites/equipment.service';
+import { listScenarios } from '$lib/server/sites/scenario.service';
+import type { SiteRow } from '$lib/server/sites/site.service';
 import { meteredKwh } from '../usage/usage.service';
 import type { BillRow } from './bill.service';
 import { reconcile, type Reconciled } from './reconcile';

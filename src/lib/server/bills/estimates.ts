@@ -1,5 +1,7 @@
-import { listDevices, listScenarios, type SiteRow } from '../services/site.service';
-import { priceScenario } from '../services/results.service';
+import { listDevices } from '$lib/server/sites/equipment.service';
+import { listScenarios } from '$lib/server/sites/scenario.service';
+import type { SiteRow } from '$lib/server/sites/site.service';
+import { priceScenario } from '$lib/server/sites/results.service';
 import type { BillRow } from './bill.service';
 
 /**

@@ -1,7 +1,8 @@
 import type { ChargeLine } from '$lib/calc/types';
 import type { DeviceSpec } from '../db/schema';
-import { priceScenario } from '../services/results.service';
-import type { ScenarioRow, SiteRow } from '../services/site.service';
+import { priceScenario } from '$lib/server/sites/results.service';
+import type { ScenarioRow } from '$lib/server/sites/scenario.service';
+import type { SiteRow } from '$lib/server/sites/site.service';
 import type { BillRow } from './bill.service';
 import { scaledToBill } from './scale';
 import { suggestionsFor } from './suggestions';

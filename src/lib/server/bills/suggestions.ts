@@ -1,8 +1,9 @@
 import { equipmentSchema, unitWatts, type EquipmentInput } from '$lib/calc';
 import { periodDays } from '$lib/forms/bill.schema';
 import type { DeviceSpec } from '../db/schema';
-import { equipmentOf, priceScenario } from '../services/results.service';
-import type { ScenarioRow, SiteRow } from '../services/site.service';
+import { equipmentOf, priceScenario } from '$lib/server/sites/results.service';
+import type { ScenarioRow } from '$lib/server/sites/scenario.service';
+import type { SiteRow } from '$lib/server/sites/site.service';
 import type { BillRow } from './bill.service';
 import type { Reconciliation } from './reconcile';
 

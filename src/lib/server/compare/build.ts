@@ -12,9 +12,11 @@ import { needsElectricalCaution } from '$lib/cautions';
 import type { ComparedScenario, ComparisonQuery, ComparisonReport } from '$lib/compare/types';
 import type { DeviceSpec } from '$lib/server/db/schema';
 import { requireScenarioAccess } from '$lib/server/guard';
-import { equipmentOf, tariffFor } from '$lib/server/services/results.service';
+import { equipmentOf, tariffFor } from '$lib/server/sites/results.service';
 import { TARIFF_UNAVAILABLE, usableTariff } from '$lib/server/tariffs/usable';
-import { listDevices, type ScenarioRow, type SiteRow } from '$lib/server/services/site.service';
+import { listDevices } from '$lib/server/sites/equipment.service';
+import type { ScenarioRow } from '$lib/server/sites/scenario.service';
+import type { SiteRow } from '$lib/server/sites/site.service';
 import { assumptionsOf } from './assumptions';
 import { comparisonPlace } from './issue-place';
 

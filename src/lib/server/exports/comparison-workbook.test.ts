@@ -1,19 +1,16 @@
 import ExcelJS from 'exceljs';
-import { beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { comparisonWorkbook } from './comparison-workbook';
-import { formulaAt, readBack, sheet, texts } from './workbook-read';
+import { formulaAt, readBackOnce, sheet, texts } from './workbook-read';
 import { exportOf, largeExport } from './workbook-exports';
 import { gardenRequest, hatcheryRequest } from './workbook-fixtures';
 
 describe('a time-of-use comparison with demand charges, riders and two taxes', () => {
 	const input = exportOf(hatcheryRequest(), 'Alder Creek hatchery (invented)');
-	let workbook: ExcelJS.Workbook;
-	beforeAll(async () => {
-		workbook = await readBack(input);
-	});
+	const workbook = readBackOnce(input);
 
 	it('has a summary, a sheet per scenario, the months, the tariff, the cash flows and the sources', () => {
-		expect(workbook.worksheets.map((worksheet) => worksheet.name)).toEqual([
+		expect(workbook().worksheets.map((worksheet) => worksheet.name)).toEqual([
 			'Summary',
 			'1 Today one large blower',
 			'2 Two small air pumps and a tim',
@@ -25,17 +22,17 @@ describe('a time-of-use comparison with demand charges, riders and two taxes', (
 	});
 
 	it('names the main inputs so a reader can change one', () => {
-		const names = Object.fromEntries(workbook.definedNames.model.map(({ name, ranges }) => [name, ranges]));
+		const names = Object.fromEntries(workbook().definedNames.model.map(({ name, ranges }) => [name, ranges]));
 		expect(names.DiscountRate).toEqual(['Summary!$B$16']);
 		expect(names.EscalationRate).toEqual(['Summary!$B$17']);
 		expect(names.HorizonYears).toEqual(['Summary!$B$18']);
 		expect(names.EmissionFactor).toEqual(['Summary!$B$19']);
 		expect(names.Scenario2_Quantity).toEqual(["'2 Two small air pumps and a tim'!$C$5:$C$9"]);
-		expect(sheet(workbook, 'Summary').getCell('B16').value).toBe(0.045);
+		expect(sheet(workbook(), 'Summary').getCell('B16').value).toBe(0.045);
 	});
 
 	it('caches on the Summary exactly what compare() returned', () => {
-		const summary = sheet(workbook, 'Summary');
+		const summary = sheet(workbook(), 'Summary');
 		input.response.scenarios.forEach((expected, s) => {
 			const row = 5 + s;
 			const result = (col: string) => formulaAt(summary, `${col}${row}`).result;
@@ -50,17 +47,17 @@ describe('a time-of-use comparison with demand charges, riders and two taxes', (
 	});
 
 	it('computes the Summary from the Monthly charge lines and the cash flows', () => {
-		const summary = sheet(workbook, 'Summary');
+		const summary = sheet(workbook(), 'Summary');
 		expect(formulaAt(summary, 'E6').formula).toBe("'Monthly'!$AE$17");
 		expect(formulaAt(summary, 'J6').formula).toBe("'Cash flows'!$L$16");
 		expect(formulaAt(summary, 'K6').formula).toBe('D6*EmissionFactor');
-		const monthly = sheet(workbook, 'Monthly');
+		const monthly = sheet(workbook(), 'Monthly');
 		expect(formulaAt(monthly, 'AE17').formula).toBe('ROUND(SUM(AE5:AE16),2)');
-		expect(formulaAt(sheet(workbook, 'Cash flows'), 'L16').formula).toBe('L5+NPV(DiscountRate,L6:L15)');
+		expect(formulaAt(sheet(workbook(), 'Cash flows'), 'L16').formula).toBe('L5+NPV(DiscountRate,L6:L15)');
 	});
 
 	it('keeps each device’s kWh and cost a live formula over its inputs', () => {
-		const scenario = sheet(workbook, '2 Two small air pumps and a tim');
+		const scenario = sheet(workbook(), '2 Two small air pumps and a tim');
 		expect(formulaAt(scenario, 'O5').formula).toBe('I5*C5*K5/100/1000');
 		expect(formulaAt(scenario, 'Z7').formula).toMatch(/^\$P7\*INDEX\(F\$\d+:F\$\d+,\$N7\)/);
 		expect(formulaAt(scenario, 'AL7').formula).toMatch(/^ROUND\(\(Z7\*AL\$\d+\+/);
@@ -70,27 +67,27 @@ describe('a time-of-use comparison with demand charges, riders and two taxes', (
 	});
 
 	it('holds what no formula can express as values, and says so', () => {
-		const scenario = sheet(workbook, '1 Today one large blower');
+		const scenario = sheet(workbook(), '1 Today one large blower');
 		expect(texts(scenario)).toContain('Schedules as Runrate computed them (values)');
 		expect(scenario.getCell('E22').value).toBe(744);
 		expect(scenario.getCell('G22').value).toBe(743);
 	});
 
 	it('neutralises a device name that a spreadsheet would run as a formula', () => {
-		const cell = sheet(workbook, '2 Two small air pumps and a tim').getCell('A6');
+		const cell = sheet(workbook(), '2 Two small air pumps and a tim').getCell('A6');
 		expect(cell.type).toBe(ExcelJS.ValueType.String);
 		expect(cell.value).toBe('\'=HYPERLINK("http://example.org")');
 	});
 
 	it('freezes the header rows and formats money in the tariff’s currency', () => {
-		const summary = sheet(workbook, 'Summary');
+		const summary = sheet(workbook(), 'Summary');
 		expect(summary.views[0]).toMatchObject({ state: 'frozen', ySplit: 4, xSplit: 1 });
 		expect(summary.getCell('E5').numFmt).toBe('"$"#,##0.00');
 		expect(summary.getCell('B16').numFmt).toBe('0.00%');
 	});
 
 	it('prints the emission factor’s source, the cautions and that these are estimates', () => {
-		const words = texts(sheet(workbook, 'Assumptions & sources')).join('\n');
+		const words = texts(sheet(workbook(), 'Assumptions & sources')).join('\n');
 		expect(words).toContain('These are estimates, not a bill.');
 		expect(words).toContain('Example value, not a published factor');
 		expect(words).toContain(input.cautions[0]);
@@ -99,13 +96,10 @@ describe('a time-of-use comparison with demand charges, riders and two taxes', (
 
 describe('a tiered comparison with a minimum bill, on two tariffs', () => {
 	const input = exportOf(gardenRequest(), 'Birchway school garden (invented)');
-	let workbook: ExcelJS.Workbook;
-	beforeAll(async () => {
-		workbook = await readBack(input);
-	});
+	const workbook = readBackOnce(input);
 
 	it('caches every scenario’s annual cost and lifecycle cost', () => {
-		const summary = sheet(workbook, 'Summary');
+		const summary = sheet(workbook(), 'Summary');
 		input.response.scenarios.forEach((expected, s) => {
 			expect(formulaAt(summary, `E${5 + s}`).result).toBe(expected.annualCost);
 			expect(formulaAt(summary, `J${5 + s}`).result).toBe(expected.lifecycleCost);

@@ -1,5 +1,6 @@
 /** Reading an exported workbook back in the workbook's tests. */
 import ExcelJS from 'exceljs';
+import { beforeAll } from 'vitest';
 import { type ComparisonExport, comparisonWorkbook } from './comparison-workbook';
 
 /** Builds the workbook of an export and reads it back with exceljs, as a reader's program would open it. */
@@ -11,6 +12,19 @@ export async function readBack(input: ComparisonExport): Promise<ExcelJS.Workboo
 	return workbook;
 }
 
+/**
+ * The workbook of `input`, built and read back once before a describe's tests (a workbook takes a
+ * while): call the returned function in a test to get it.
+ */
+export function readBackOnce(input: ComparisonExport): () => ExcelJS.Workbook {
+	let workbook: ExcelJS.Workbook | undefined;
+	beforeAll(async () => {
+		workbook = await readBack(input);
+	});
+	return () => workbook!;
+}
+
+/** A sheet of the workbook by name; a missing one fails the test. */
 export function sheet(workbook: ExcelJS.Workbook, name: string): ExcelJS.Worksheet {
 	const found = workbook.getWorksheet(name);
 	if (!found) throw new Error(`No sheet ${name}`);

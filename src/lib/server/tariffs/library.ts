@@ -1,7 +1,8 @@
 import { z } from 'zod';
 import { CUSTOMER_CLASSES } from '$lib/forms/tariff-meta.schema';
-import { searchTariffs, workspaceIdsOf } from '../services/tariff.service';
+import { searchTariffs, workspaceIdsOf } from '$lib/server/tariffs/tariff.service';
 import { features, typicalMonth } from './submission';
+import { tariffListing, tariffScope } from './tariff-view';
 
 export const libraryQuerySchema = z.object({
 	q: z.string().trim().max(100, 'Search text must be at most 100 characters').optional(),
@@ -37,16 +38,8 @@ export async function libraryPage(userId: string | undefined, query: LibraryQuer
 		const latest = versions.at(-1);
 		return {
 			id: tariff.id,
-			utility: tariff.utility,
-			name: tariff.name,
-			code: tariff.code,
-			country: tariff.country,
-			region: tariff.region,
-			area: tariff.area,
-			customerClass: tariff.customerClass,
-			currency: tariff.currency,
-			scope: tariff.workspaceId ? ('private' as const) : ('public' as const),
-			workspaceId: tariff.workspaceId,
+			...tariffListing(tariff),
+			...tariffScope(tariff),
 			revision: tariff.revision,
 			latestVersion: latest
 				? { number: latest.number, effectiveFrom: latest.effectiveFrom, checkedOn: latest.checkedOn }

@@ -1,9 +1,9 @@
 import type { RequestEvent } from '@sveltejs/kit';
 import { parseRequest, type InvalidRequest } from '$lib/calc';
 import { requireAdmin, requireRole, requireTariffWrite } from '../guard';
-import { createTariff, publishVersion, TariffConflict } from '../services/tariff.service';
+import { createTariff, publishVersion, TariffConflict } from '$lib/server/tariffs/tariff.service';
 import { tariffSubmissionSchema } from './submission';
-import { announceVersion } from '../services/tariff-notice.service';
+import { announceVersion } from '$lib/server/tariffs/tariff-notice.service';
 
 export type PublishOutcome =
 	| { ok: true; tariffId: string; number: number }

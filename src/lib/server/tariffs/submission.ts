@@ -1,8 +1,9 @@
 import { z } from 'zod';
 import { holidaysSchema, referenceMonthlyCost, tariffSchema, timezoneSchema } from '$lib/calc';
 import { tariffMetaSchema, versionMetaSchema } from '$lib/forms/tariff-meta.schema';
-import type { VersionRow, TariffRow } from '../services/tariff.service';
+import type { VersionRow, TariffRow } from '$lib/server/tariffs/tariff.service';
 import { MAX_REVISION } from '$lib/forms/storable';
+import { tariffMeta } from './tariff-view';
 
 /**
  * What the editor, the JSON upload and the API submit. The browser checks the same shapes; the server
@@ -30,19 +31,7 @@ export function exportVersion(tariff: TariffRow, version: VersionRow) {
 	return {
 		format: 'runrate-tariff-version',
 		formatVersion: 1,
-		meta: {
-			utility: tariff.utility,
-			name: tariff.name,
-			code: tariff.code,
-			country: tariff.country,
-			region: tariff.region,
-			area: tariff.area,
-			customerClass: tariff.customerClass,
-			currency: tariff.currency,
-			timezone: tariff.timezone,
-			holidays: tariff.holidays,
-			description: tariff.description
-		},
+		meta: tariffMeta(tariff),
 		version: {
 			number: version.number,
 			effectiveFrom: version.effectiveFrom,

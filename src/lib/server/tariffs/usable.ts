@@ -1,5 +1,5 @@
 // The one rule for which tariff a site may use, asked where a tariff is chosen and again where it is used.
-import { findTariff, searchTariffs, type TariffRow } from '../services/tariff.service';
+import { findTariff, searchTariffs, type TariffRow } from '$lib/server/tariffs/tariff.service';
 
 /** What pricing, comparisons and exports say instead of anything about a tariff the site may not use. */
 export const TARIFF_UNAVAILABLE = "This site's tariff is not available to this workspace";

@@ -3,7 +3,7 @@ import { DateTime } from 'luxon';
 import { db } from '../db';
 import { usageIntervals } from '../db/schema';
 import { audit, type Actor } from '../workspaces/audit';
-import type { SiteRow } from '../services/site.service';
+import type { SiteRow } from '$lib/server/sites/site.service';
 import type { Interval } from './interval';
 
 /**

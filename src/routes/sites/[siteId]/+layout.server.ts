@@ -1,15 +1,10 @@
 import { requireSiteAccess } from '$lib/server/guard';
-import { db } from '$lib/server/db';
-import { workspaces } from '$lib/server/db/schema';
-import { eq } from 'drizzle-orm';
+import { siteWorkspace } from '$lib/server/sites/site.service';
 import type { LayoutServerLoad } from './$types';
 
 export const load = (async (event) => {
 	const { site, role, viaGrant } = await requireSiteAccess(event, event.params.siteId, 'viewer');
-	const [ws] = await db
-		.select({ id: workspaces.id, name: workspaces.name })
-		.from(workspaces)
-		.where(eq(workspaces.id, site.workspaceId));
+	const ws = await siteWorkspace(site);
 	return {
 		// A guest of one site sees the site, not the workspace around it.
 		workspace: viaGrant ? undefined : ws,

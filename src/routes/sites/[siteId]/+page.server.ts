@@ -1,3 +1,5 @@
+// Over 60 lines: the site page's six form actions (share, unshare, create, baseline, archive, delete), each
+// parsing its form and calling one service.
 import { error, fail, redirect } from '@sveltejs/kit';
 import { inviteLimiter, TOO_MANY } from '$lib/server/rate-limit';
 import { inviteToSite } from '$lib/server/workspaces/invitation';
@@ -7,52 +9,17 @@ import { z } from 'zod';
 import { requireSiteAccess } from '$lib/server/guard';
 import { siteTrail } from '$lib/server/workspaces/audit';
 import { usableTariff } from '$lib/server/tariffs/usable';
-import {
-	changeScenario,
-	createScenario,
-	listDevices,
-	listScenarios,
-	UNDO_MS
-} from '$lib/server/services/site.service';
-import { priceScenario } from '$lib/server/services/results.service';
+import { changeScenario, createScenario, listScenarios } from '$lib/server/sites/scenario.service';
+import { priceScenarios } from '$lib/server/sites/results.service';
 import { scenarioSchema } from '$lib/forms/site.schema';
 import { fieldErrors, keepValues } from '$lib/forms/errors';
 import { storableText } from '$lib/forms/storable';
-import { needsElectricalCaution } from '$lib/cautions';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load = (async (event) => {
 	const { site, role, viaGrant } = await requireSiteAccess(event, event.params.siteId, 'viewer');
 	const year = new Date().getUTCFullYear();
-	const all = await listScenarios(site.id);
-	const undoAfter = Date.now() - UNDO_MS;
-	const rows = await Promise.all(
-		all
-			.filter((s) => !s.deletedAt || s.deletedAt.getTime() > undoAfter)
-			.map(async (s) => {
-				const devices = await listDevices(s.id);
-				const priced = s.deletedAt
-					? null
-					: await priceScenario(
-							site,
-							s,
-							devices.map((d) => d.spec),
-							{ start: `${year}-01`, months: 12 }
-						);
-				return {
-					id: s.id,
-					name: s.name,
-					description: s.description,
-					isBaseline: s.isBaseline,
-					archived: !!s.archivedAt,
-					deleted: !!s.deletedAt,
-					deviceCount: devices.length,
-					caution: needsElectricalCaution(devices.map((d) => d.spec)),
-					annual: priced?.ok ? { cost: priced.result.totals.cost, kwh: priced.result.totals.kwh } : null,
-					problem: priced && !priced.ok ? priced.message : null
-				};
-			})
-	);
+	const rows = await priceScenarios(site, await listScenarios(site.id), year);
 	// A tariff the site's workspace may not use is not shown at all, only said to be unavailable.
 	const tariff = site.tariffId ? await usableTariff(site.workspaceId, site.tariffId) : null;
 	return {

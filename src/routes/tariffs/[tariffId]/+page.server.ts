@@ -1,11 +1,12 @@
 import { fail, redirect } from '@sveltejs/kit';
 import { z } from 'zod';
 import { can, requireRole, requireTariffRead } from '$lib/server/guard';
-import { copyTariff, workspaceIdsOf } from '$lib/server/services/tariff.service';
-import { tariffUsage } from '$lib/server/services/site.service';
+import { copyTariff, workspaceIdsOf } from '$lib/server/tariffs/tariff.service';
+import { tariffUsage } from '$lib/server/sites/site.service';
 import { listWorkspacesFor } from '$lib/server/workspaces/workspace.service';
 import { features, typicalMonth } from '$lib/server/tariffs/submission';
 import type { Actions, PageServerLoad } from './$types';
+import { tariffMeta, tariffScope } from '$lib/server/tariffs/tariff-view';
 
 export const load = (async (event) => {
 	const { tariff, versions, role } = await requireTariffRead(event, event.params.tariffId);
@@ -14,22 +15,7 @@ export const load = (async (event) => {
 	const copyTargets = user ? (await listWorkspacesFor(user.id)).filter((w) => w.role !== 'viewer') : [];
 	const latest = versions.at(-1);
 	return {
-		tariff: {
-			id: tariff.id,
-			utility: tariff.utility,
-			name: tariff.name,
-			code: tariff.code,
-			country: tariff.country,
-			region: tariff.region,
-			area: tariff.area,
-			customerClass: tariff.customerClass,
-			currency: tariff.currency,
-			timezone: tariff.timezone,
-			holidays: tariff.holidays,
-			description: tariff.description,
-			scope: tariff.workspaceId ? ('private' as const) : ('public' as const),
-			workspaceId: tariff.workspaceId
-		},
+		tariff: { id: tariff.id, ...tariffMeta(tariff), ...tariffScope(tariff) },
 		versions: versions
 			.map((v) => ({
 				id: v.id,

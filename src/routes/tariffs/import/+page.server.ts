@@ -1,9 +1,8 @@
 import { error, fail } from '@sveltejs/kit';
 import { requireAdmin, requireRole, requireUser } from '$lib/server/guard';
-import { importTariffs } from '$lib/server/services/tariff.service';
 import { listWorkspacesFor } from '$lib/server/workspaces/workspace.service';
-import { describeRowError, MAX_SHEET_BYTES, parseTariffSheet } from '$lib/server/tariffs/sheet-import';
-import { unstorableIn } from '$lib/forms/storable';
+import { MAX_SHEET_BYTES } from '$lib/server/tariffs/sheet-import';
+import { importTariffSheet } from '$lib/server/tariffs/sheet-intake';
 import { uploadForm } from '$lib/server/http/upload-form';
 import type { Actions, PageServerLoad } from './$types';
 
@@ -42,38 +41,9 @@ export const actions = {
 		const kind = /\.xlsx$/i.test(file.name) ? 'xlsx' : /\.csv$/i.test(file.name) ? 'csv' : null;
 		if (!kind) return fail(400, { owner, errors: { sheet: 'The file must end in .csv or .xlsx.' } });
 
-		const result = await parseTariffSheet(new Uint8Array(await file.arrayBuffer()), kind);
-		const refused = result.errors.map((e) => ({
-			line: e.line,
-			field: e.field,
-			message: describeRowError(e)
-		}));
-		if (result.sheetErrors.length)
-			return fail(400, { owner, sheetErrors: result.sheetErrors, refused, imported: [] });
-		// A spreadsheet cell can carry U+0000 (written _x0000_), which a rider or tax label cannot store.
-		const unstorable = result.rows.find((r) => unstorableIn(r.structure));
-		if (unstorable)
-			return fail(400, {
-				owner,
-				sheetErrors: [`Row ${unstorable.line}: ${unstorableIn(unstorable.structure)?.message}`],
-				refused,
-				imported: []
-			});
-		const summary = result.rows.map((r) => ({
-			line: r.line,
-			name: r.meta.name,
-			utility: r.meta.utility,
-			effectiveFrom: r.version.effectiveFrom
-		}));
-		if (dryRun || result.rows.length === 0)
-			return { owner, checked: true, accepted: summary, refused, imported: [] };
-		const ids = await importTariffs(result.rows, owner === 'public' ? null : owner, user);
-		return {
-			owner,
-			checked: false,
-			accepted: [],
-			refused,
-			imported: summary.map((s, i) => ({ ...s, id: ids[i]! }))
-		};
+		const bytes = new Uint8Array(await file.arrayBuffer());
+		const workspaceId = owner === 'public' ? null : owner;
+		const { ok, ...done } = await importTariffSheet(bytes, kind, { workspaceId, dryRun, author: user });
+		return ok ? { owner, ...done } : fail(400, { owner, ...done, imported: [] });
 	}
 } satisfies Actions;

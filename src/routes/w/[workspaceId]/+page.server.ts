@@ -1,7 +1,7 @@
 // Over 60 lines: eight named actions of one page; each only parses, calls a workspaces/ service and shapes the answer.
 import { fail, redirect } from '@sveltejs/kit';
 import { requireRole } from '$lib/server/guard';
-import { recentNotices } from '$lib/server/services/tariff-notice.service';
+import { recentNotices } from '$lib/server/tariffs/tariff-notice.service';
 import { inviteLimiter, TOO_MANY } from '$lib/server/rate-limit';
 import { confirmsWorkspaceName, renameWorkspace } from '$lib/server/workspaces/workspace.service';
 import { invite, listPendingInvitations, revokeInvitation } from '$lib/server/workspaces/invitation';

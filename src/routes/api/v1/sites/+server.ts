@@ -1,11 +1,12 @@
 import { json } from '@sveltejs/kit';
 import { z } from 'zod';
-import { holidaysSchema, timezoneSchema } from '$lib/calc';
-import { apiError, readJsonBody } from '$lib/server/api';
+import { apiError } from '$lib/server/http/json';
+import { readJsonBody } from '$lib/server/http/body';
 import { requireRole } from '$lib/server/guard';
-import { createSite, listSites } from '$lib/server/services/site.service';
-import { siteSchema } from '$lib/forms/site.schema';
-import { invalid, tariffChoiceIssue } from '../site-api.server';
+import { createSite, listSites } from '$lib/server/sites/site.service';
+import { siteCreateSchema } from '$lib/server/sites/site-body';
+import { invalid } from '$lib/server/http/answers';
+import { tariffChoiceIssue } from '$lib/server/sites/tariff-choice';
 import type { RequestHandler } from './$types';
 
 const issuesOf = (error: z.ZodError) =>
@@ -28,19 +29,7 @@ export const POST: RequestHandler = async (event) => {
 	if (!read.ok) return read.response;
 	const body = read.body as Record<string, unknown>;
 	const { workspace, user } = await requireRole(event, String(body?.workspaceId ?? ''), 'editor');
-	const parsed = siteSchema
-		.extend({ timezone: timezoneSchema })
-		.superRefine((s, ctx) => {
-			if (
-				!holidaysSchema.safeParse({ country: s.country, ...(s.region ? { region: s.region } : {}) }).success
-			)
-				ctx.addIssue({
-					code: 'custom',
-					path: [s.region ? 'region' : 'country'],
-					message: 'No public-holiday calendar for this country or region'
-				});
-		})
-		.safeParse(body);
+	const parsed = siteCreateSchema.safeParse(body);
 	if (!parsed.success)
 		return apiError(400, 'invalid_request', 'Some fields need attention.', issuesOf(parsed.error));
 	// The creator is a member (editor or owner) of the workspace the site goes into.

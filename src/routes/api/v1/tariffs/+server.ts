@@ -1,6 +1,7 @@
 import { json } from '@sveltejs/kit';
 import { z } from 'zod';
-import { apiError, readJsonBody } from '$lib/server/api';
+import { apiError } from '$lib/server/http/json';
+import { readJsonBody } from '$lib/server/http/body';
 import { libraryPage, libraryQuerySchema, queryObject } from '$lib/server/tariffs/library';
 import { submitTariff } from '$lib/server/tariffs/publish';
 import type { RequestHandler } from './$types';

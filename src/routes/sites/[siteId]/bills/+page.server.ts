@@ -1,7 +1,7 @@
 import { fail, redirect } from '@sveltejs/kit';
 import { readBillForm } from '$lib/server/bills/bill-form';
-import { createBills, listBills, overlappingBills } from '$lib/server/bills/bill.service';
-import { BILL_COLUMNS, parseBillSheet } from '$lib/server/bills/bill-sheet';
+import { addBill, importBillSheet, listBills } from '$lib/server/bills/bill.service';
+import { BILL_COLUMNS } from '$lib/server/bills/bill-sheet';
 import { billEstimates } from '$lib/server/bills/estimates';
 import { requireSiteAccess } from '$lib/server/guard';
 import { MAX_SHEET_BYTES, sheetKind } from '$lib/server/sheets/read-sheet';
@@ -31,16 +31,12 @@ export const actions = {
 		const { site, user } = await requireSiteAccess(event, event.params.siteId, 'editor');
 		const read = readBillForm(await event.request.formData());
 		if (!read.ok) return fail(400, { form: 'add', values: read.values, errors: read.errors });
-		const overlaps = await overlappingBills(site.id, read.bill.periodFrom, read.bill.periodTo);
-		if (overlaps.length && !read.confirmOverlap) {
-			return fail(409, {
-				form: 'add',
-				values: read.values,
-				errors: {},
-				overlaps: overlaps.map((o) => `${o.periodFrom} to ${o.periodTo}`)
-			});
+		const added = await addBill(site, read.bill, read.confirmOverlap, user);
+		if (!added.ok) {
+			const overlaps = added.overlaps.map((o) => `${o.periodFrom} to ${o.periodTo}`);
+			return fail(409, { form: 'add', values: read.values, errors: {}, overlaps });
 		}
-		const [id] = await createBills(site, [read.bill], user);
+		const id = added.id;
 		redirect(303, `/sites/${site.id}/bills/${id}`);
 	},
 
@@ -56,24 +52,8 @@ export const actions = {
 		if (file.size > MAX_SHEET_BYTES) return refuse(tooLarge, 413);
 		const kind = sheetKind(file.name);
 		if (!kind) return refuse('The file must end in .csv or .xlsx.');
-		const stored = await listBills(site.id);
-		const sheet = await parseBillSheet(new Uint8Array(await file.arrayBuffer()), kind, stored);
-		if ('error' in sheet) return refuse(sheet.error);
-		const refused = sheet.errors.map((e) => `Row ${e.line}, ${e.field}: ${e.message}`);
-		if (refused.length || sheet.rows.length === 0) {
-			return fail(400, {
-				form: 'import',
-				sheetError: refused.length
-					? 'Nothing was imported: fix these rows and import the sheet again.'
-					: 'No bill rows.',
-				refused
-			});
-		}
-		await createBills(
-			site,
-			sheet.rows.map((r) => r.bill),
-			user
-		);
-		return { form: 'import', imported: sheet.rows.length };
+		const done = await importBillSheet(site, new Uint8Array(await file.arrayBuffer()), kind, user);
+		if (!done.ok) return fail(400, { form: 'import', sheetError: done.sheetError, refused: done.refused });
+		return { form: 'import', imported: done.imported };
 	}
 } satisfies Actions;

@@ -1,6 +1,6 @@
 import { fail, redirect } from '@sveltejs/kit';
 import { requireSiteAccess } from '$lib/server/guard';
-import { StaleWrite, updateSite } from '$lib/server/services/site.service';
+import { StaleWrite, updateSite } from '$lib/server/sites/site.service';
 import { readSiteForm, tariffChoices } from '$lib/server/sites/site-form';
 import { chooserFor } from '$lib/server/tariffs/usable';
 import type { Actions, PageServerLoad } from './$types';

@@ -3,25 +3,14 @@ import { requireTariffWrite } from '$lib/server/guard';
 import { tariffFormAction } from '$lib/server/tariffs/form-action';
 import { jsonField, MAX_REVISION, unstorableIn } from '$lib/forms/storable';
 import type { Actions, PageServerLoad } from './$types';
+import { tariffMeta } from '$lib/server/tariffs/tariff-view';
 
 export const load = (async (event) => {
 	const { tariff, versions } = await requireTariffWrite(event, event.params.tariffId);
 	const latest = versions.at(-1)!;
 	return {
 		tariff: { id: tariff.id, name: tariff.name, utility: tariff.utility, revision: tariff.revision },
-		meta: {
-			utility: tariff.utility,
-			name: tariff.name,
-			code: tariff.code,
-			country: tariff.country,
-			region: tariff.region,
-			area: tariff.area,
-			customerClass: tariff.customerClass,
-			currency: tariff.currency,
-			timezone: tariff.timezone,
-			holidays: tariff.holidays,
-			description: tariff.description
-		},
+		meta: tariffMeta(tariff),
 		latest: {
 			number: latest.number,
 			effectiveFrom: latest.effectiveFrom,

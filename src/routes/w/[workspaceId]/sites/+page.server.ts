@@ -1,6 +1,8 @@
 import { requireRole } from '$lib/server/guard';
-import { listDevices, listScenarios, listSites } from '$lib/server/services/site.service';
-import { priceScenario } from '$lib/server/services/results.service';
+import { listDevices } from '$lib/server/sites/equipment.service';
+import { listScenarios } from '$lib/server/sites/scenario.service';
+import { listSites } from '$lib/server/sites/site.service';
+import { priceScenario } from '$lib/server/sites/results.service';
 import type { PageServerLoad } from './$types';
 
 export const load = (async (event) => {

@@ -1,4 +1,4 @@
-import { apiError } from '$lib/server/api';
+import { apiError } from '$lib/server/http/json';
 import { comparisonFromQuery } from '$lib/server/compare/request';
 import { comparisonCsv, monthlyCsv } from '$lib/server/compare/csv';
 import { exportFileName } from '$lib/server/compare/file-name';

@@ -1,5 +1,5 @@
 import { json } from '@sveltejs/kit';
-import { readJsonBody } from '$lib/server/api';
+import { readJsonBody } from '$lib/server/http/body';
 import { requireTariffRead } from '$lib/server/guard';
 import { exportVersion } from '$lib/server/tariffs/submission';
 import { submitTariff } from '$lib/server/tariffs/publish';

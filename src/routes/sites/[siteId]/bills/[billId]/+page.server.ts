@@ -1,19 +1,17 @@
 import { fail, redirect } from '@sveltejs/kit';
 import { readBillForm } from '$lib/server/bills/bill-form';
-import { deleteBill, overlappingBills, updateBill } from '$lib/server/bills/bill.service';
+import { changeBill, removeBill } from '$lib/server/bills/bill.service';
 import { reconcileBill } from '$lib/server/bills/bill-reconciliation';
 import { requireBillAccess } from '$lib/server/bills/attachments-access';
-import { attachmentKeys, discardObjects, listAttachments } from '$lib/server/bills/attachments';
-import { StaleWrite } from '$lib/server/services/site.service';
-import type { Actions, PageServerLoad } from './$types';
+import { listAttachments } from '$lib/server/bills/attachments';
+import type { Actions, PageServerLoad, RequestEvent } from './$types';
+
+/** The bill of this page's address, with the caller's access to its site. */
+const billAccess = (event: RequestEvent, role: 'viewer' | 'editor') =>
+	requireBillAccess(event, event.params.siteId, event.params.billId, role);
 
 export const load = (async (event) => {
-	const { site, bill, role } = await requireBillAccess(
-		event,
-		event.params.siteId,
-		event.params.billId,
-		'viewer'
-	);
+	const { site, bill, role } = await billAccess(event, 'viewer');
 	const checked = await reconcileBill(site, bill, event.url.searchParams.get('scenario'));
 	return {
 		bill: {
@@ -38,45 +36,26 @@ export const load = (async (event) => {
 
 export const actions = {
 	update: async (event) => {
-		const { site, bill, user } = await requireBillAccess(
-			event,
-			event.params.siteId,
-			event.params.billId,
-			'editor'
-		);
+		const { site, bill, user } = await billAccess(event, 'editor');
 		const read = readBillForm(await event.request.formData());
 		if (!read.ok) return fail(400, { values: read.values, errors: read.errors });
-		const overlaps = await overlappingBills(site.id, read.bill.periodFrom, read.bill.periodTo, bill.id);
-		if (overlaps.length && !read.confirmOverlap) {
-			return fail(409, {
-				values: read.values,
-				errors: {},
-				overlaps: overlaps.map((o) => `${o.periodFrom} to ${o.periodTo}`)
-			});
+		const saved = await changeBill(site, bill, read.revision, read.bill, read.confirmOverlap, user);
+		if (!saved.ok && 'overlaps' in saved) {
+			const overlaps = saved.overlaps.map((o) => `${o.periodFrom} to ${o.periodTo}`);
+			return fail(409, { values: read.values, errors: {}, overlaps });
 		}
-		try {
-			await updateBill(site, bill, read.revision, read.bill, user);
-		} catch (e) {
-			if (!(e instanceof StaleWrite)) throw e;
+		if (!saved.ok)
 			return fail(409, {
 				values: read.values,
 				errors: {
 					form: 'Someone saved this bill while you were editing. Your changes are kept below; reload to see theirs.'
 				}
 			});
-		}
 		return { saved: true };
 	},
 	delete: async (event) => {
-		const { site, bill, user } = await requireBillAccess(
-			event,
-			event.params.siteId,
-			event.params.billId,
-			'editor'
-		);
-		const keys = await attachmentKeys(bill.id);
-		await deleteBill(site, bill, user);
-		await discardObjects(keys);
+		const { site, bill, user } = await billAccess(event, 'editor');
+		await removeBill(site, bill, user);
 		redirect(303, `/sites/${site.id}/bills`);
 	}
 } satisfies Actions;

@@ -1,6 +1,6 @@
 import { error } from '@sveltejs/kit';
 import { requireScenarioAccess } from '$lib/server/guard';
-import { listDevices } from '$lib/server/services/site.service';
+import { listDevices } from '$lib/server/sites/equipment.service';
 import { needsElectricalCaution } from '$lib/cautions';
 import type { PageServerLoad } from './$types';
 

@@ -1,7 +1,7 @@
 import { error, type RequestEvent } from '@sveltejs/kit';
 import { download, safeFileName } from '$lib/server/exports/download';
 import { requireScenarioAccess } from '$lib/server/guard';
-import { listDevices } from '$lib/server/services/site.service';
+import { listDevices } from '$lib/server/sites/equipment.service';
 import { equipmentCsv, equipmentXlsx } from '$lib/server/sites/equipment-sheet/write';
 
 /** The scenario's equipment list as the import sheet's columns; anyone who may read the site may download it. */

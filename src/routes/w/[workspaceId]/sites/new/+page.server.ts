@@ -1,6 +1,6 @@
 import { redirect } from '@sveltejs/kit';
 import { requireRole } from '$lib/server/guard';
-import { createSite } from '$lib/server/services/site.service';
+import { createSite } from '$lib/server/sites/site.service';
 import { readSiteForm, tariffChoices } from '$lib/server/sites/site-form';
 import type { Actions, PageServerLoad } from './$types';
 

@@ -1,11 +1,11 @@
 import { json } from '@sveltejs/kit';
 import { parseRequest } from '$lib/calc';
-import { readJsonBody } from '$lib/server/api';
+import { readJsonBody } from '$lib/server/http/body';
 import { requireScenarioAccess } from '$lib/server/guard';
-import { listDevices, saveDevices, StaleWrite } from '$lib/server/services/site.service';
+import { listDevices } from '$lib/server/sites/equipment.service';
 import { equipmentListSchema, newDeviceRowSchema } from '$lib/server/sites/device-specs';
-import { conflict, invalid, methodNotAllowed } from '../../../site-api.server';
-import { writeList } from './rows.server';
+import { invalid, methodNotAllowed, refusal } from '$lib/server/http/answers';
+import { editEquipmentRow, saveEquipment } from '$lib/server/sites/equipment-edits';
 import type { RequestHandler } from './$types';
 
 /** GET — the scenario's equipment list, in order, with the revision to send back when saving. */
@@ -20,29 +20,15 @@ export const GET: RequestHandler = async (event) => {
 
 /** PUT — replace the whole list (order included). A stale `expectedRevision` gets 409 and nothing is written. */
 export const PUT: RequestHandler = async (event) => {
-	const { site, scenario, user } = await requireScenarioAccess(event, event.params.scenarioId, 'editor');
+	const access = await requireScenarioAccess(event, event.params.scenarioId, 'editor');
 	const read = await readJsonBody(event);
 	if (!read.ok) return read.response;
 	const parsed = parseRequest(equipmentListSchema, read.body);
 	if (!parsed.success)
 		return json({ ...parsed.error, message: 'Some fields need attention.' }, { status: 400 });
-	try {
-		const revision = await saveDevices(
-			site,
-			scenario,
-			parsed.data.expectedRevision,
-			parsed.data.devices,
-			user
-		);
-		return json({ revision }, { status: 200 });
-	} catch (e) {
-		if (e instanceof StaleWrite)
-			return json(
-				{ error: 'conflict', message: e.message, currentRevision: e.currentRevision },
-				{ status: 409 }
-			);
-		throw e;
-	}
+	const saved = await saveEquipment(access, parsed.data.expectedRevision, parsed.data.devices);
+	if (!saved.ok) return refusal(saved);
+	return json({ revision: saved.revision }, { status: 200 });
 };
 
 /**
@@ -55,20 +41,14 @@ export const POST: RequestHandler = async (event) => {
 	if (!read.ok) return read.response;
 	const parsed = parseRequest(newDeviceRowSchema, read.body);
 	if (!parsed.success) return invalid(parsed.error.issues);
-	const { expectedRevision, device } = parsed.data;
-	if (expectedRevision !== access.scenario.revision) return conflict(access.scenario.revision);
-	const list = (await listDevices(access.scenario.id)).map((d) => d.spec);
-	const position = parsed.data.position ?? list.length;
-	if (position > list.length)
-		return invalid([{ path: 'position', message: `Position must be from 0 to ${list.length}` }]);
-	list.splice(position, 0, device);
-	const written = await writeList(access, expectedRevision, list, position);
-	if (!written.ok) return written.response;
+	const { expectedRevision, device, position } = parsed.data;
+	const written = await editEquipmentRow(access, expectedRevision, { kind: 'add', device, position });
+	if (!written.ok) return refusal(written);
 	return json(
-		{ revision: written.revision, position },
+		{ revision: written.revision, position: written.position },
 		{
 			status: 201,
-			headers: { Location: `/api/v1/scenarios/${access.scenario.id}/equipment/${position}` }
+			headers: { Location: `/api/v1/scenarios/${access.scenario.id}/equipment/${written.position}` }
 		}
 	);
 };

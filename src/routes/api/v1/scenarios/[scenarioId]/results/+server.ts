@@ -1,9 +1,10 @@
 import { json } from '@sveltejs/kit';
 import { parseRequest } from '$lib/calc';
-import { apiError, readJsonBody } from '$lib/server/api';
+import { apiError } from '$lib/server/http/json';
+import { readJsonBody } from '$lib/server/http/body';
 import { requireScenarioAccess } from '$lib/server/guard';
-import { listDevices } from '$lib/server/services/site.service';
-import { priceScenario } from '$lib/server/services/results.service';
+import { listDevices } from '$lib/server/sites/equipment.service';
+import { priceScenario } from '$lib/server/sites/results.service';
 import { previewSchema } from '$lib/server/sites/device-specs';
 import type { RequestHandler } from './$types';
 

@@ -1,9 +1,9 @@
 import { json } from '@sveltejs/kit';
-import { readJsonBody } from '$lib/server/api';
+import { readJsonBody } from '$lib/server/http/body';
 import { billJson, overlapAnswer, parseBillBody } from '$lib/server/bills/bill-api';
-import { createBills, findBill, listBills, overlappingBills } from '$lib/server/bills/bill.service';
+import { addBill, findBill, listBills } from '$lib/server/bills/bill.service';
 import { requireSiteAccess } from '$lib/server/guard';
-import { PRIVATE, invalid, methodNotAllowed } from '../../../site-api.server';
+import { PRIVATE, invalid, methodNotAllowed } from '$lib/server/http/answers';
 import type { RequestHandler } from './$types';
 
 /** GET — the site's bills, oldest first. */
@@ -20,10 +20,10 @@ export const POST: RequestHandler = async (event) => {
 	const parsed = parseBillBody(read.body);
 	if (!parsed.success) return invalid(parsed.error.issues);
 	const { confirmOverlap, expectedRevision: _, ...bill } = parsed.data;
-	const overlaps = await overlappingBills(site.id, bill.periodFrom, bill.periodTo);
-	if (overlaps.length && !confirmOverlap) return overlapAnswer(overlaps);
-	const [id] = await createBills(site, [bill], user);
-	const created = await findBill(id!);
+	const added = await addBill(site, bill, !!confirmOverlap, user);
+	if (!added.ok) return overlapAnswer(added.overlaps);
+	const id = added.id;
+	const created = await findBill(id);
 	return json(billJson(created!), {
 		status: 201,
 		headers: { Location: `/api/v1/sites/${site.id}/bills/${id}` }

@@ -1,8 +1,9 @@
 import { json } from '@sveltejs/kit';
 import { z } from 'zod';
-import { apiError, readJsonBody } from '$lib/server/api';
+import { apiError } from '$lib/server/http/json';
+import { readJsonBody } from '$lib/server/http/body';
 import { requireSiteAccess } from '$lib/server/guard';
-import { createScenario, listScenarios } from '$lib/server/services/site.service';
+import { createScenario, listScenarios } from '$lib/server/sites/scenario.service';
 import { scenarioSchema } from '$lib/forms/site.schema';
 import type { RequestHandler } from './$types';
 

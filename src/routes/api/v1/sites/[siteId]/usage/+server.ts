@@ -1,11 +1,11 @@
 import { json } from '@sveltejs/kit';
-import { apiError } from '$lib/server/api';
+import { apiError } from '$lib/server/http/json';
 import { requireSiteAccess } from '$lib/server/guard';
 import { rowIssueText } from '$lib/server/usage/interval';
 import { readUsageFile } from '$lib/server/usage/read-usage';
 import { readUsageUpload } from '$lib/server/usage/upload';
 import { dailyShape, importUsage, usageSummary } from '$lib/server/usage/usage.service';
-import { methodNotAllowed, PRIVATE } from '../../../site-api.server';
+import { methodNotAllowed, PRIVATE } from '$lib/server/http/answers';
 import type { RequestHandler } from './$types';
 
 /** GET /api/v1/sites/:id/usage — what metered use is stored, and the daily load shape it gives. */

@@ -1,12 +1,12 @@
 import { json } from '@sveltejs/kit';
 import { z } from 'zod';
 import { parseRequest } from '$lib/calc';
-import { readJsonBody } from '$lib/server/api';
+import { readJsonBody } from '$lib/server/http/body';
 import { requireScenarioAccess } from '$lib/server/guard';
-import { listDevices } from '$lib/server/services/site.service';
+import { listDevices } from '$lib/server/sites/equipment.service';
 import { deviceRowSchema } from '$lib/server/sites/device-specs';
-import { conflict, invalid, methodNotAllowed, notFound, PRIVATE } from '../../../../site-api.server';
-import { positionOf, writeList } from '../rows.server';
+import { invalid, methodNotAllowed, notFound, PRIVATE, refusal } from '$lib/server/http/answers';
+import { editEquipmentRow, positionOf } from '$lib/server/sites/equipment-edits';
 import type { RequestHandler } from './$types';
 
 const NO_DEVICE = 'There is no device at this position.';
@@ -38,13 +38,8 @@ export const PUT: RequestHandler = async (event) => {
 	const parsed = parseRequest(deviceRowSchema, read.body);
 	if (!parsed.success) return invalid(parsed.error.issues);
 	const { expectedRevision, device } = parsed.data;
-	// A stale caller hears of the conflict first: their idea of what sits at this position is out of date.
-	if (expectedRevision !== access.scenario.revision) return conflict(access.scenario.revision);
-	const list = (await listDevices(access.scenario.id)).map((d) => d.spec);
-	if (position >= list.length) return notFound(NO_DEVICE);
-	list[position] = device;
-	const written = await writeList(access, expectedRevision, list, position);
-	if (!written.ok) return written.response;
+	const written = await editEquipmentRow(access, expectedRevision, { kind: 'replace', device, position });
+	if (!written.ok) return refusal(written, NO_DEVICE);
 	return json({ revision: written.revision, position }, { status: 200 });
 };
 
@@ -55,13 +50,8 @@ export const DELETE: RequestHandler = async (event) => {
 	if (position === null) return notFound(NO_DEVICE);
 	const query = parseRequest(revisionQuery, Object.fromEntries(event.url.searchParams));
 	if (!query.success) return invalid(query.error.issues);
-	const { expectedRevision } = query.data;
-	if (expectedRevision !== access.scenario.revision) return conflict(access.scenario.revision);
-	const list = (await listDevices(access.scenario.id)).map((d) => d.spec);
-	if (position >= list.length) return notFound(NO_DEVICE);
-	list.splice(position, 1);
-	const written = await writeList(access, expectedRevision, list, null);
-	if (!written.ok) return written.response;
+	const removed = await editEquipmentRow(access, query.data.expectedRevision, { kind: 'remove', position });
+	if (!removed.ok) return refusal(removed, NO_DEVICE);
 	return new Response(null, { status: 204 });
 };
 

@@ -1,26 +1,23 @@
 import { json } from '@sveltejs/kit';
-import { readJsonBody } from '$lib/server/api';
+import { readJsonBody } from '$lib/server/http/body';
 import { requireBillAccess } from '$lib/server/bills/attachments-access';
-import { attachmentKeys, discardObjects } from '$lib/server/bills/attachments';
 import { billJson, overlapAnswer, parseBillBody } from '$lib/server/bills/bill-api';
-import { deleteBill, findBill, overlappingBills, updateBill } from '$lib/server/bills/bill.service';
-import { StaleWrite } from '$lib/server/services/site.service';
-import { PRIVATE, conflict, invalid, methodNotAllowed } from '../../../../site-api.server';
-import type { RequestHandler } from './$types';
+import { changeBill, findBill, removeBill } from '$lib/server/bills/bill.service';
+import { PRIVATE, conflict, invalid, methodNotAllowed } from '$lib/server/http/answers';
+import type { RequestEvent, RequestHandler } from './$types';
+
+/** The bill of this address, with the caller's access to its site. */
+const billAccess = (event: RequestEvent, role: 'viewer' | 'editor') =>
+	requireBillAccess(event, event.params.siteId, event.params.billId, role);
 
 export const GET: RequestHandler = async (event) => {
-	const { bill } = await requireBillAccess(event, event.params.siteId, event.params.billId, 'viewer');
+	const { bill } = await billAccess(event, 'viewer');
 	return json(billJson(bill), { headers: PRIVATE });
 };
 
 /** PUT — the whole bill with `expectedRevision`; 409 when stale or (without confirmOverlap) overlapping. */
 export const PUT: RequestHandler = async (event) => {
-	const { site, bill, user } = await requireBillAccess(
-		event,
-		event.params.siteId,
-		event.params.billId,
-		'editor'
-	);
+	const { site, bill, user } = await billAccess(event, 'editor');
 	const read = await readJsonBody(event);
 	if (!read.ok) return read.response;
 	const parsed = parseBillBody(read.body);
@@ -31,28 +28,15 @@ export const PUT: RequestHandler = async (event) => {
 			{ path: 'expectedRevision', message: 'Send the revision you edited (expectedRevision)' }
 		]);
 	}
-	const overlaps = await overlappingBills(site.id, input.periodFrom, input.periodTo, bill.id);
-	if (overlaps.length && !confirmOverlap) return overlapAnswer(overlaps);
-	try {
-		await updateBill(site, bill, expectedRevision, input, user);
-	} catch (e) {
-		if (e instanceof StaleWrite) return conflict(e.currentRevision);
-		throw e;
-	}
+	const saved = await changeBill(site, bill, expectedRevision, input, !!confirmOverlap, user);
+	if (!saved.ok) return 'overlaps' in saved ? overlapAnswer(saved.overlaps) : conflict(saved.conflict);
 	return json(billJson((await findBill(bill.id))!), { headers: PRIVATE });
 };
 
 /** DELETE — the bill and its files. */
 export const DELETE: RequestHandler = async (event) => {
-	const { site, bill, user } = await requireBillAccess(
-		event,
-		event.params.siteId,
-		event.params.billId,
-		'editor'
-	);
-	const keys = await attachmentKeys(bill.id);
-	await deleteBill(site, bill, user);
-	await discardObjects(keys);
+	const { site, bill, user } = await billAccess(event, 'editor');
+	await removeBill(site, bill, user);
 	return new Response(null, { status: 204 });
 };
 

@@ -1,27 +1,11 @@
 import { error, redirect } from '@sveltejs/kit';
 import { requireAttachmentAccess } from '$lib/server/bills/attachments-access';
-import {
-	ATTACHMENT_EXTENSIONS,
-	readAttachment,
-	removeAttachment,
-	type AttachmentType
-} from '$lib/server/bills/attachments';
-import { safeFileName } from '$lib/server/exports/download';
-import { apiError } from '$lib/server/api';
+import { readAttachment, removeAttachment } from '$lib/server/bills/attachments';
+import { attachmentResponse } from '$lib/server/bills/attachment-response';
+import { apiError } from '$lib/server/http/json';
 import { logger } from '$lib/server/log';
-import { methodNotAllowed } from '../../../../../../api/v1/site-api.server';
+import { methodNotAllowed } from '$lib/server/http/answers';
 import type { RequestHandler } from './$types';
-
-/** `filename` in ASCII for every browser, `filename*` (RFC 6266 / 5987) with the name as uploaded. */
-function disposition(kind: 'inline' | 'attachment', fileName: string, type: AttachmentType) {
-	const ext = ATTACHMENT_EXTENSIONS[type];
-	const stem = fileName.replace(/\.[^.]*$/, '');
-	const utf8 = encodeURIComponent(`${stem}.${ext}`).replace(
-		/['()*]/g,
-		(c) => `%${c.charCodeAt(0).toString(16).toUpperCase()}`
-	);
-	return `${kind}; filename="${safeFileName(stem)}.${ext}"; filename*=UTF-8''${utf8}`;
-}
 
 /**
  * GET — the checked proxy: only someone who may read the site gets the bytes, typed as they were
@@ -35,18 +19,8 @@ export const GET: RequestHandler = async (event) => {
 		logger.error({ attachmentId: attachment.id }, 'a bill attachment has a row but no stored object');
 		error(404, 'Not found');
 	}
-	const type = read.attachment.contentType;
 	const kind = event.url.searchParams.get('download') === '1' ? 'attachment' : 'inline';
-	return new Response(read.object.body, {
-		headers: {
-			'Content-Type': type,
-			'Content-Length': String(read.object.bytes),
-			'Content-Disposition': disposition(kind, read.attachment.fileName, type),
-			'Cache-Control': 'private, no-store',
-			'X-Content-Type-Options': 'nosniff',
-			'Content-Security-Policy': 'sandbox'
-		}
-	});
+	return attachmentResponse(read, kind);
 };
 
 /** DELETE — removes the attachment (row and stored object): 204. */

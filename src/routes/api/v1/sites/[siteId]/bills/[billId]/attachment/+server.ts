@@ -1,8 +1,8 @@
 import { json } from '@sveltejs/kit';
-import { apiError } from '$lib/server/api';
+import { apiError } from '$lib/server/http/json';
 import { requireBillAccess } from '$lib/server/bills/attachments-access';
 import { receiveUpload } from '$lib/server/bills/attachments-upload';
-import { methodNotAllowed, PRIVATE } from '../../../../../site-api.server';
+import { methodNotAllowed, PRIVATE } from '$lib/server/http/answers';
 import type { RequestHandler } from './$types';
 
 /**

@@ -1,8 +1,8 @@
 import { json } from '@sveltejs/kit';
-import { apiError } from '$lib/server/api';
+import { apiError } from '$lib/server/http/json';
 import { requireBillAccess } from '$lib/server/bills/attachments-access';
 import { reconcileBill } from '$lib/server/bills/bill-reconciliation';
-import { PRIVATE } from '../../../../../site-api.server';
+import { PRIVATE } from '$lib/server/http/answers';
 import type { RequestHandler } from './$types';
 
 /** GET …/reconciliation?scenario=id — the bill against the chosen scenario (the baseline by default). */

@@ -1,15 +1,16 @@
-// Answers shared by the site, scenario and equipment routes of the machine API.
+// Answers shared by the site, scenario, equipment, bill and tariff routes of the machine API.
 import { json } from '@sveltejs/kit';
 import type { RequestIssue } from '$lib/calc';
-import { apiError } from '$lib/server/api';
-import { tariffChoiceProblem, type TariffChooser } from '$lib/server/tariffs/usable';
+import { apiError } from './json';
 
 /** Readings of one person's workspace data: never kept by a shared cache. */
 export const PRIVATE = { 'Cache-Control': 'private, no-store' } as const;
 
+/** 400 with the field issues of a request that failed validation. */
 export const invalid = (issues: RequestIssue[]) =>
 	apiError(400, 'invalid_request', 'Some fields need attention.', issues);
 
+/** 404; unknown ids and ids the caller may not see get the same answer. */
 export const notFound = (message = 'Not found') => apiError(404, 'not_found', message);
 
 /** The answer to a write based on a stale copy; the caller reloads from `currentRevision`. */
@@ -31,16 +32,12 @@ export function methodNotAllowed(...methods: string[]) {
 	return response;
 }
 
-/**
- * A tariff chosen for a site or scenario, checked by the one rule (`tariffChoiceProblem`): the public
- * library or the site's own workspace, a guest only public ones and those already chosen, and a pinned
- * version that exists. Unknown and foreign ids get the same answer.
- */
-export async function tariffChoiceIssue(
-	chooser: TariffChooser,
-	choice: { tariffId: string | null; tariffVersion: number | null },
-	prefix = ''
-): Promise<RequestIssue | null> {
-	const problem = await tariffChoiceProblem(chooser, choice);
-	return problem && { path: `${prefix}${problem.field}`, message: problem.message };
+/** Why a service wrote nothing: a stale revision, field issues, or nothing at the place named. */
+export type Refusal = { conflict: number } | { issues: RequestIssue[] } | { missing: true };
+
+/** The answer to a refused write: 409 for a stale revision, 400 for issues, 404 (`missing`) for no such row. */
+export function refusal(refused: Refusal, missing = 'Not found') {
+	if ('conflict' in refused) return conflict(refused.conflict);
+	if ('issues' in refused) return invalid(refused.issues);
+	return notFound(missing);
 }

@@ -14,8 +14,9 @@ import {
 import { defineJob } from '../jobs';
 import { deliverMail } from '../mail';
 import { tariffUsableBy } from '../tariffs/usable';
-import { priceScenario } from './results.service';
-import { listDevices, listScenarios } from './site.service';
+import { priceScenario } from '../sites/results.service';
+import { listDevices } from '$lib/server/sites/equipment.service';
+import { listScenarios } from '$lib/server/sites/scenario.service';
 
 type Published = { tariffId: string; versionNumber: number };
 type ForWorkspace = Published & { workspaceId: string };

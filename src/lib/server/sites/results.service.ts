@@ -7,11 +7,15 @@ import {
 	type InvalidRequest,
 	type VersionedResponse
 } from '$lib/calc';
+import { needsElectricalCaution } from '$lib/cautions';
 import type { DeviceSpec } from '../db/schema';
-import type { ScenarioRow, SiteRow } from './site.service';
+import { listDevices } from './equipment.service';
+import { UNDO_MS, type ScenarioRow } from './scenario.service';
+import type { SiteRow } from './site.service';
 import { usableTariff, TARIFF_UNAVAILABLE } from '../tariffs/usable';
-import type { TariffRow } from './tariff.service';
+import type { TariffRow } from '../tariffs/tariff.service';
 
+/** A scenario's priced year, or why it cannot be priced. */
 export type Priced =
 	| { ok: true; result: VersionedResponse; tariff: { id: string; name: string; utility: string } }
 	| {
@@ -21,6 +25,7 @@ export type Priced =
 			invalid?: InvalidRequest;
 	  };
 
+/** The tariff versions a scenario is priced on, or why there are none. */
 export type PricingTariff =
 	| { ok: true; tariff: TariffRow; versions: DatedTariff[] }
 	| { ok: false; reason: 'no-tariff' | 'unavailable' };
@@ -102,4 +107,39 @@ export async function priceScenario(
 	} catch (error) {
 		return { ok: false, reason: 'invalid', message: (error as Error).message };
 	}
+}
+
+/**
+ * The site page's scenario list: every scenario still shown (a deleted one while it can be restored),
+ * each with its device count, the in-water caution and its cost over the calendar `year`.
+ */
+export async function priceScenarios(site: SiteRow, scenarios: ScenarioRow[], year: number) {
+	const undoAfter = Date.now() - UNDO_MS;
+	return Promise.all(
+		scenarios
+			.filter((s) => !s.deletedAt || s.deletedAt.getTime() > undoAfter)
+			.map(async (s) => {
+				const devices = await listDevices(s.id);
+				const priced = s.deletedAt
+					? null
+					: await priceScenario(
+							site,
+							s,
+							devices.map((d) => d.spec),
+							{ start: `${year}-01`, months: 12 }
+						);
+				return {
+					id: s.id,
+					name: s.name,
+					description: s.description,
+					isBaseline: s.isBaseline,
+					archived: !!s.archivedAt,
+					deleted: !!s.deletedAt,
+					deviceCount: devices.length,
+					caution: needsElectricalCaution(devices.map((d) => d.spec)),
+					annual: priced?.ok ? { cost: priced.result.totals.cost, kwh: priced.result.totals.kwh } : null,
+					problem: priced && !priced.ok ? priced.message : null
+				};
+			})
+	);
 }

@@ -1,0 +1,21 @@
+// The calculation endpoints' request budgets.
+import { json, type RequestEvent } from '@sveltejs/kit';
+import { RateLimiter } from 'sveltekit-rate-limiter/server';
+import { env } from '$env/dynamic/private';
+import { PerClient } from '../rate-limit-client';
+
+// Anonymous callers (the public quick estimate, outside tools) share a per-client budget; signed-in
+// users get a larger one.
+const anonymousLimiter = new RateLimiter({ IP: [120, 'm'], plugins: [new PerClient([60, 'm'])] });
+// MEMBER_REQUESTS_PER_MINUTE lifts the members' budget for a load test on loopback (npm run load).
+const memberLimiter = new RateLimiter({ IP: [Number(env.MEMBER_REQUESTS_PER_MINUTE ?? 600), 'm'] });
+
+/** The 429 to send when the caller is over its budget (members' budget if signed in), else null. */
+export async function overCalculationBudget(event: RequestEvent): Promise<Response | null> {
+	const limiter = event.locals.user ? memberLimiter : anonymousLimiter;
+	if (!(await limiter.isLimited(event))) return null;
+	return json(
+		{ error: 'rate_limited', message: 'Too many requests. Wait a minute and try again.' },
+		{ status: 429, headers: { 'Retry-After': '60' } }
+	);
+}
