@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import type { ScenarioResult } from '$lib/calc/types';
+import type { ScenarioResult } from '$lib/calc';
 import { summarySentences } from './summary';
 import type { ComparisonReport } from './types';
 

@@ -1,5 +1,4 @@
-import type { DutyRedundancy } from '$lib/calc/redundancy';
-import type { CompareResponse } from '$lib/calc/types';
+import type { CompareResponse, DutyRedundancy } from '$lib/calc';
 
 /**
  * A comparison of stored scenarios as GET /api/v1/compare answers it: the core's `compare()`

@@ -1,7 +1,7 @@
 // Values JavaScript holds that PostgreSQL cannot store: U+0000 or a lone surrogate in text or jsonb, and
 // whole numbers past its integer columns. Forms refuse them at the boundary, beside the field, instead
 // of failing at the database with a 500.
-import { NUL_MESSAGE, storableText, unstorableMessage } from '$lib/calc/storable-text';
+import { NUL_MESSAGE, storableText, unstorableMessage } from '$lib/calc';
 
 export {
 	NUL_MESSAGE,
@@ -9,7 +9,7 @@ export {
 	storableText,
 	UNSTORABLE,
 	unstorableMessage
-} from '$lib/calc/storable-text';
+} from '$lib/calc';
 
 /**
  * The dotted path of the first string or key in a value (parsed JSON, a device list) that cannot be

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import type { CalculateResponse, ChargeLine, PeriodResult } from '$lib/calc/types';
+import type { CalculateResponse, ChargeLine, PeriodResult } from '$lib/calc';
 import {
 	deviceBars,
 	deviceCosts,

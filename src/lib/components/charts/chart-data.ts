@@ -1,4 +1,4 @@
-import type { CalculateResponse, ChargeKind, PeriodResult } from '$lib/calc/types';
+import type { CalculateResponse, ChargeKind, PeriodResult } from '$lib/calc';
 import { CHARGE_KINDS } from './chart-style';
 
 /**

@@ -1,5 +1,4 @@
-import type { ChargeKind } from '$lib/calc/types';
-import type { EQUIPMENT_CATEGORIES } from '$lib/calc';
+import type { ChargeKind, EQUIPMENT_CATEGORIES } from '$lib/calc';
 
 /**
  * How the scenario charts look: names, colours and number formats. Runrate's categorical colours for the scenario charts, drawn from the app's palette (reed, ink,

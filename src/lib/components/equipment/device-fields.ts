@@ -1,5 +1,4 @@
-import { MONTH_NAMES } from '$lib/calc/months';
-import type { EQUIPMENT_CATEGORIES, EquipmentInput } from '$lib/calc/equipment.schema';
+import { type EQUIPMENT_CATEGORIES, type EquipmentInput, MONTH_NAMES } from '$lib/calc';
 import { figure } from '$lib/text/numbers';
 
 export type PowerInput = EquipmentInput['power'];

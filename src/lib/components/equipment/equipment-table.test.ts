@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { equipmentSchema } from '$lib/calc/equipment.schema';
+import { equipmentSchema } from '$lib/calc';
 import {
 	type DeviceSpec,
 	type EquipmentRow,

@@ -1,5 +1,4 @@
-import { equipmentSchema, powerSchema, type EquipmentInput } from '$lib/calc/equipment.schema';
-import { parseRequest } from '$lib/calc/parse';
+import { type EquipmentInput, equipmentSchema, parseRequest, powerSchema } from '$lib/calc';
 import type { FieldIssue } from '$lib/components/fields/field-issues';
 import { powerForm } from './device-fields';
 

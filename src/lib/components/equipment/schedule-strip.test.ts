@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { equipmentSchema } from '$lib/calc/equipment.schema';
+import { equipmentSchema } from '$lib/calc';
 import { blankDevice } from './equipment-table';
 import {
 	type ScheduleInput,

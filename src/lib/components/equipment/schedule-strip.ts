@@ -1,5 +1,4 @@
-import { SLOTS_PER_DAY, nominalWindowMinutes, slotMask } from '$lib/calc/clock';
-import type { EquipmentInput } from '$lib/calc/equipment.schema';
+import { type EquipmentInput, nominalWindowMinutes, slotMask, SLOTS_PER_DAY } from '$lib/calc';
 
 export type ScheduleInput = EquipmentInput['schedule'];
 export type ScheduleKind = ScheduleInput['type'];

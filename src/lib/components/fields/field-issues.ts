@@ -1,4 +1,4 @@
-import type { RequestIssue } from '$lib/calc/parse';
+import type { RequestIssue } from '$lib/calc';
 
 /** One problem at a dotted path ("energyCharges.0.perKwh", "power.amps"), from the client's check or the server's. */
 export type FieldIssue = RequestIssue;

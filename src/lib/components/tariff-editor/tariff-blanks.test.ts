@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { tariffSchema } from '$lib/calc/tariff.schema';
+import { tariffSchema } from '$lib/calc';
 import {
 	type FixedChargeInput,
 	type TierInput,

@@ -1,4 +1,4 @@
-import type { TariffInput } from '$lib/calc/tariff.schema';
+import type { TariffInput } from '$lib/calc';
 
 // What the editor adds when a person presses "Add …": each blank is valid on its own, with zero rates
 // and round-number hours, so adding a row never shows an error before anything was typed.

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import type { TariffInput } from '$lib/calc/tariff.schema';
+import type { TariffInput } from '$lib/calc';
 import { blankEnergyCharge, blankSeason, blankTariff } from './tariff-blanks';
 import { numberDraft } from '$lib/components/fields/number-text';
 import {

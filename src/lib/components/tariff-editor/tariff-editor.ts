@@ -1,5 +1,4 @@
-import { parseRequest } from '$lib/calc/parse';
-import { tariffSchema, type TariffInput } from '$lib/calc/tariff.schema';
+import { parseRequest, type TariffInput, tariffSchema } from '$lib/calc';
 import type { FieldIssue } from '$lib/components/fields/field-issues';
 import type { NumberDraft } from '$lib/components/fields/number-text';
 

@@ -1,4 +1,4 @@
-import { type DaySelector, SLOTS_PER_DAY, daysMatch, slotMask } from '$lib/calc/clock';
+import { type DaySelector, daysMatch, slotMask, SLOTS_PER_DAY } from '$lib/calc';
 
 interface PeriodShape {
 	days?: DaySelector;

@@ -1,4 +1,4 @@
-import type { TariffInput } from '$lib/calc/tariff.schema';
+import type { TariffInput } from '$lib/calc';
 
 export type MetaDraft = {
 	utility: string;

@@ -1,4 +1,4 @@
-import type { ChargeLine } from '$lib/calc/types';
+import type { ChargeLine } from '$lib/calc';
 import type { DeviceSpec } from '../db/schema';
 import { priceScenario } from '$lib/server/sites/results.service';
 import type { ScenarioRow } from '$lib/server/sites/scenario.service';

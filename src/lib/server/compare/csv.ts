@@ -1,5 +1,5 @@
 import Papa from 'papaparse';
-import { MONTH_NAMES } from '$lib/calc/months';
+import { MONTH_NAMES } from '$lib/calc';
 import type { ComparisonReport } from '$lib/compare/types';
 import { neutraliseFormula } from '$lib/server/exports/safe-text';
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import type { Schedule } from '$lib/calc/equipment.schema';
+import type { Schedule } from '$lib/calc';
 import { holidaysText, scheduleText } from './device-words';
 
 describe('schedules in words', () => {

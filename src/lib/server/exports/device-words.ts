@@ -1,5 +1,4 @@
-import type { Schedule } from '$lib/calc/equipment.schema';
-import type { HolidaySpec } from '$lib/calc/holidays';
+import type { HolidaySpec, Schedule } from '$lib/calc';
 import { daysText, monthsText, windowsText } from '$lib/text/tariff';
 
 // The same figures as the tariff words' figureText, with one formatter kept: a workbook of thousands

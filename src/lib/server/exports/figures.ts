@@ -1,12 +1,4 @@
-import { buildCalendar } from '$lib/calc/calendar';
-import { DemandMeter } from '$lib/calc/demand';
-import { UsageMeter } from '$lib/calc/energy';
-import type { Equipment, Schedule } from '$lib/calc/equipment.schema';
-import { ProfileBook, groupLoads } from '$lib/calc/loads';
-import { billingSpans } from '$lib/calc/periods';
-import { RateBook } from '$lib/calc/rates';
-import type { CompareRequest } from '$lib/calc/request.schema';
-import type { Tariff } from '$lib/calc/tariff.schema';
+import { billingSpans, buildCalendar, type CompareRequest, DemandMeter, type Equipment, groupLoads, ProfileBook, RateBook, type Schedule, type Tariff, UsageMeter } from '$lib/calc';
 
 /**
  * What the workbook cannot express as a simple formula, computed with the core's own modules: the

@@ -1,4 +1,4 @@
-import { MONTH_ABBREVIATIONS } from '$lib/calc/months';
+import { MONTH_ABBREVIATIONS } from '$lib/calc';
 import type { MonthFigures } from './figures';
 
 /** Number formats of the workbook, with money in one currency. */

@@ -1,6 +1,4 @@
-import { tieredAmount } from '$lib/calc/bill';
-import { roundMoney } from '$lib/calc/rounding';
-import type { PeriodResult } from '$lib/calc';
+import { type PeriodResult, roundMoney, tieredAmount } from '$lib/calc';
 import { a1 } from './cells';
 import type { ScenarioFigures } from './figures';
 import type { Formats } from './formats';

@@ -1,4 +1,4 @@
-import type { Tariff } from '$lib/calc/tariff.schema';
+import type { Tariff } from '$lib/calc';
 import { a1, on } from './cells';
 
 export const MONTHLY_SHEET = 'Monthly';

@@ -1,5 +1,4 @@
-import type { Tariff } from '$lib/calc/tariff.schema';
-import type { ScenarioResult } from '$lib/calc';
+import type { ScenarioResult, Tariff } from '$lib/calc';
 import { type SheetWriter, a1 } from './cells';
 import type { ScenarioFigures } from './figures';
 import { type Formats, monthHeading } from './formats';

@@ -1,6 +1,4 @@
-import type { Equipment } from '$lib/calc/equipment.schema';
-import { unitWatts } from '$lib/calc/power';
-import type { Scenario, ScenarioResult } from '$lib/calc';
+import { type Equipment, type Scenario, type ScenarioResult, unitWatts } from '$lib/calc';
 import { type SheetWriter, a1, columnName } from './cells';
 import { activeMonthsText, scheduleText } from './device-words';
 import type { ScenarioFigures } from './figures';

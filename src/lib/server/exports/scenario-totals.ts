@@ -1,5 +1,4 @@
-import { tieredAmount } from '$lib/calc/bill';
-import { roundMoney } from '$lib/calc/rounding';
+import { roundMoney, tieredAmount } from '$lib/calc';
 import { a1 } from './cells';
 import { MONTHLY_SHEET, monthlyCell } from './monthly-plan';
 import type { ScenarioSheetInput } from './scenario-devices';

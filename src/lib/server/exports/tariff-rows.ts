@@ -1,4 +1,4 @@
-import type { EnergyCharge } from '$lib/calc/tariff.schema';
+import type { EnergyCharge } from '$lib/calc';
 import { limitsMonths, monthsText, whenText } from '$lib/text/tariff';
 import { type SheetWriter, a1, on } from './cells';
 import type { Formats } from './formats';

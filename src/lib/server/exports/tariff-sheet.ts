@@ -1,4 +1,4 @@
-import type { Tariff } from '$lib/calc/tariff.schema';
+import type { Tariff } from '$lib/calc';
 import { demandText, riderText, taxText } from '$lib/text/tariff';
 import type { SheetWriter } from './cells';
 import { formatsFor } from './formats';

@@ -1,4 +1,4 @@
-import type { Tariff } from '$lib/calc/tariff.schema';
+import type { Tariff } from '$lib/calc';
 import type { TariffUse } from './tariff-sheet';
 
 /**

@@ -1,6 +1,5 @@
 /** The export inputs the tests build from the invented comparisons, as the export route would. */
-import { type CompareRequestInput, compare, compareRequestSchema } from '$lib/calc';
-import type { EquipmentInput } from '$lib/calc/equipment.schema';
+import { compare, type CompareRequestInput, compareRequestSchema, type EquipmentInput } from '$lib/calc';
 import type { ComparisonExport } from './comparison-workbook';
 import { hatcheryRequest } from './workbook-fixtures';
 import { pump } from './workbook-tariffs';

@@ -1,6 +1,5 @@
 /** Invented tariffs of the fictional "Demo Valley Power", and an invented pump, for the workbook's tests. */
-import type { EquipmentInput } from '$lib/calc/equipment.schema';
-import type { TariffInput } from '$lib/calc/tariff.schema';
+import type { EquipmentInput, TariffInput } from '$lib/calc';
 
 /** Time-of-use with seasons, a flat delivery charge, two demand charges, riders (one a credit), two taxes. */
 export const TOU_DEMAND_TARIFF: TariffInput = {

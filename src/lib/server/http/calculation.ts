@@ -1,11 +1,12 @@
 // The shape every calculation endpoint shares.
-import { isHttpError, json, type RequestEvent } from '@sveltejs/kit';
+import { isHttpError, type RequestEvent } from '@sveltejs/kit';
 import type { z } from 'zod';
 import { NoVersionInForce, parseRequest } from '$lib/calc';
 import { logger } from '../log';
 import { readJsonBody } from './body';
 import { apiError, jsonBody, NO_STORE } from './json';
 import { overCalculationBudget } from './rate-limits';
+import { invalid } from './answers';
 
 /**
  * The shape every calculation endpoint shares: rate limit, bounded JSON body, zod validation with
@@ -22,11 +23,7 @@ export async function calculationEndpoint<S extends z.ZodType, R>(
 	const read = await readJsonBody(event);
 	if (!read.ok) return read.response;
 	const parsed = parseRequest(schema, read.body);
-	if (!parsed.success)
-		return json(
-			{ ...parsed.error, message: 'Some fields need attention.' },
-			{ status: 400, headers: NO_STORE }
-		);
+	if (!parsed.success) return invalid(parsed.error.issues);
 	try {
 		return jsonBody(await run(parsed.data), { headers: NO_STORE });
 	} catch (error) {

@@ -1,6 +1,5 @@
 import { z } from 'zod';
-import { equipmentSchema } from '$lib/calc';
-import { list } from '$lib/calc/fields';
+import { equipmentSchema, list } from '$lib/calc';
 import { MAX_REVISION, storableText, UNSTORABLE } from '$lib/forms/storable';
 
 /** A stored device: the core's equipment plus the safety flags; names must be unique within a scenario (the trail and charts name them). */

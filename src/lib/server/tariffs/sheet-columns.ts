@@ -1,4 +1,4 @@
-import type { Bounds } from '$lib/calc/fields';
+import type { Bounds } from '$lib/calc';
 import { CUSTOMER_CLASSES } from '$lib/forms/tariff-meta.schema';
 
 /** The columns of the tariff batch import sheet: one row per version of a flat or tiered tariff. */

@@ -1,12 +1,4 @@
-import {
-	type Tariff,
-	distinctBy,
-	holidaysSchema,
-	parseRequest,
-	tariffSchema,
-	timezoneSchema
-} from '$lib/calc';
-import { amount } from '$lib/calc/fields';
+import { amount, distinctBy, holidaysSchema, parseRequest, type Tariff, tariffSchema, timezoneSchema } from '$lib/calc';
 import {
 	CUSTOMER_CLASSES,
 	type TariffMeta,

@@ -1,5 +1,5 @@
 /** The words for each kind of charge, without the label; `describeTariff` and the diff build on them. */
-import type { TariffInput } from '$lib/calc/tariff.schema';
+import type { TariffInput } from '$lib/calc';
 import {
 	type EnergyInput,
 	type TierInput,

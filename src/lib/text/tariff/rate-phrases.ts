@@ -1,6 +1,5 @@
 /** The small phrases a rate is written with: money in the tariff's currency, months, clock windows, days. */
-import { MONTH_NAMES } from '$lib/calc/months';
-import type { Tariff, TariffInput } from '$lib/calc/tariff.schema';
+import { MONTH_NAMES, type Tariff, type TariffInput } from '$lib/calc';
 
 /**
  * The small phrases the tariff's plain-words description is built from: money in the tariff's

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { tariffSchema, type TariffInput } from '$lib/calc/tariff.schema';
+import { type TariffInput, tariffSchema } from '$lib/calc';
 import { tiered, touPeriod, twoTierDelivery, usdTariff } from '$lib/calc/tariffs.fixture';
 import { describeTariff } from './tariff-summary';
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import type { TariffInput } from '$lib/calc/tariff.schema';
+import type { TariffInput } from '$lib/calc';
 import { tiered, tou, touPeriod } from '$lib/calc/tariffs.fixture';
 import { describeTariffDiff } from './version-diff';
 

@@ -1,5 +1,4 @@
-import { EQUIPMENT_CATEGORIES } from '$lib/calc/equipment.schema';
-import type { ChargeKind } from '$lib/calc/types';
+import { type ChargeKind, EQUIPMENT_CATEGORIES } from '$lib/calc';
 import type { ComparisonReport } from '$lib/compare/types';
 import { scenarioName, type ScenarioKey } from './compare-chart-style';
 import { periodNames } from '$lib/components/charts/chart-data';

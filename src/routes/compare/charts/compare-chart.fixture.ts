@@ -1,4 +1,4 @@
-import type { ChargeLine, PeriodResult, ScenarioResult } from '$lib/calc/types';
+import type { ChargeLine, PeriodResult, ScenarioResult } from '$lib/calc';
 import type { ComparedScenario, ComparisonReport } from '$lib/compare/types';
 
 /**

@@ -1,4 +1,4 @@
-import { MONTH_NAMES } from '$lib/calc/months';
+import { MONTH_NAMES } from '$lib/calc';
 
 /** The text forms of the equipment sheet's compound cells: months, windows and yes/no. */
 

@@ -1,6 +1,5 @@
 import { json } from '@sveltejs/kit';
 import { z } from 'zod';
-import { apiError } from '$lib/server/http/json';
 import { readJsonBody } from '$lib/server/http/body';
 import { requireRole } from '$lib/server/guard';
 import { createSite, listSites } from '$lib/server/sites/site.service';
@@ -30,8 +29,7 @@ export const POST: RequestHandler = async (event) => {
 	const body = read.body as Record<string, unknown>;
 	const { workspace, user } = await requireRole(event, String(body?.workspaceId ?? ''), 'editor');
 	const parsed = siteCreateSchema.safeParse(body);
-	if (!parsed.success)
-		return apiError(400, 'invalid_request', 'Some fields need attention.', issuesOf(parsed.error));
+	if (!parsed.success) return invalid(issuesOf(parsed.error));
 	// The creator is a member (editor or owner) of the workspace the site goes into.
 	const tariffIssue = await tariffChoiceIssue({ workspaceId: workspace.id }, parsed.data);
 	if (tariffIssue) return invalid([tariffIssue]);

@@ -5,6 +5,7 @@ import { readJsonBody } from '$lib/server/http/body';
 import { libraryPage, libraryQuerySchema, queryObject } from '$lib/server/tariffs/library';
 import { submitTariff } from '$lib/server/tariffs/publish';
 import type { RequestHandler } from './$types';
+import { invalid } from '$lib/server/http/answers';
 
 /** GET /api/v1/tariffs — search and filter the library (public tariffs and the caller's private ones). */
 export const GET: RequestHandler = async ({ url, locals }) => {
@@ -40,7 +41,6 @@ export const POST: RequestHandler = async (event) => {
 			{ id: outcome.tariffId, version: outcome.number },
 			{ status: 201, headers: { Location: `/api/v1/tariffs/${outcome.tariffId}` } }
 		);
-	if (outcome.status === 400)
-		return json({ ...outcome.invalid, message: 'Some fields need attention.' }, { status: 400 });
+	if (outcome.status === 400) return invalid(outcome.invalid.issues);
 	return apiError(409, 'conflict', outcome.message);
 };

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import type { TariffInput } from '$lib/calc/tariff.schema';
+import type { TariffInput } from '$lib/calc';
 import { tierCharts, tierSteps } from './tier-steps';
 
 // Invented tiers for these tests only; no real utility or rate.

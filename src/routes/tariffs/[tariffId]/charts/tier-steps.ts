@@ -1,4 +1,4 @@
-import type { TariffInput } from '$lib/calc/tariff.schema';
+import type { TariffInput } from '$lib/calc';
 
 type EnergyInput = NonNullable<TariffInput['energyCharges']>[number];
 type TieredInput = Extract<EnergyInput, { type: 'tiered' }>;

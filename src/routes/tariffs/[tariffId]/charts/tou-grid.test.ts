@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import type { TariffInput } from '$lib/calc/tariff.schema';
+import type { TariffInput } from '$lib/calc';
 import { OTHER_TIMES, priceRuns, rateRange, seasonGrid, seasonPrices, touGrids } from './tou-grid';
 
 // Invented tariffs for these tests only; no real utility or rate. Slot n is the quarter hour that

@@ -1,5 +1,4 @@
-import { INTERVAL_MINUTES, SLOTS_PER_DAY, daysMatch, slotMask } from '$lib/calc/clock';
-import type { TariffInput } from '$lib/calc/tariff.schema';
+import { daysMatch, INTERVAL_MINUTES, slotMask, SLOTS_PER_DAY, type TariffInput } from '$lib/calc';
 
 /**
  * The data of the time-of-use chart: for each season of each time-of-use charge, what every quarter

@@ -4,6 +4,7 @@ import { requireTariffRead } from '$lib/server/guard';
 import { exportVersion } from '$lib/server/tariffs/submission';
 import { submitTariff } from '$lib/server/tariffs/publish';
 import type { RequestHandler } from './$types';
+import { invalid } from '$lib/server/http/answers';
 
 /** GET /api/v1/tariffs/:id — the tariff with every version, newest last, plus its revision for PUT. */
 export const GET: RequestHandler = async (event) => {
@@ -29,8 +30,7 @@ export const PUT: RequestHandler = async (event) => {
 	if (!read.ok) return read.response;
 	const outcome = await submitTariff(event, { tariffId: event.params.tariffId }, read.body);
 	if (outcome.ok) return json({ id: outcome.tariffId, version: outcome.number }, { status: 201 });
-	if (outcome.status === 400)
-		return json({ ...outcome.invalid, message: 'Some fields need attention.' }, { status: 400 });
+	if (outcome.status === 400) return invalid(outcome.invalid.issues);
 	return json(
 		{ error: 'conflict', message: outcome.message, currentRevision: outcome.currentRevision },
 		{ status: 409 }

@@ -1,4 +1,4 @@
-import type { CalculateResponse } from '$lib/calc/types';
+import type { CalculateResponse } from '$lib/calc';
 import type { DeviceSpec } from '$lib/components/equipment/equipment-table';
 import { LatestRequest, RequestFailed } from '$lib/client/latest-request.svelte';
 

@@ -24,8 +24,7 @@ export const PUT: RequestHandler = async (event) => {
 	const read = await readJsonBody(event);
 	if (!read.ok) return read.response;
 	const parsed = parseRequest(equipmentListSchema, read.body);
-	if (!parsed.success)
-		return json({ ...parsed.error, message: 'Some fields need attention.' }, { status: 400 });
+	if (!parsed.success) return invalid(parsed.error.issues);
 	const saved = await saveEquipment(access, parsed.data.expectedRevision, parsed.data.devices);
 	if (!saved.ok) return refusal(saved);
 	return json({ revision: saved.revision }, { status: 200 });

@@ -7,6 +7,7 @@ import { listDevices } from '$lib/server/sites/equipment.service';
 import { priceScenario } from '$lib/server/sites/results.service';
 import { previewSchema } from '$lib/server/sites/device-specs';
 import type { RequestHandler } from './$types';
+import { invalid } from '$lib/server/http/answers';
 
 const yearPeriod = () => ({ start: `${new Date().getUTCFullYear()}-01`, months: 12 });
 
@@ -41,7 +42,6 @@ export const POST: RequestHandler = async (event) => {
 	const read = await readJsonBody(event);
 	if (!read.ok) return read.response;
 	const parsed = parseRequest(previewSchema, read.body);
-	if (!parsed.success)
-		return json({ ...parsed.error, message: 'Some fields need attention.' }, { status: 400 });
+	if (!parsed.success) return invalid(parsed.error.issues);
 	return answer(await priceScenario(site, scenario, parsed.data.devices, yearPeriod()));
 };

@@ -1,11 +1,11 @@
 import { json } from '@sveltejs/kit';
 import { z } from 'zod';
-import { apiError } from '$lib/server/http/json';
 import { readJsonBody } from '$lib/server/http/body';
 import { requireSiteAccess } from '$lib/server/guard';
 import { createScenario, listScenarios } from '$lib/server/sites/scenario.service';
 import { scenarioSchema } from '$lib/forms/site.schema';
 import type { RequestHandler } from './$types';
+import { invalid } from '$lib/server/http/answers';
 
 /** GET — the site's live and archived scenarios (deleted ones are gone from the API at once). */
 export const GET: RequestHandler = async (event) => {
@@ -33,17 +33,10 @@ export const POST: RequestHandler = async (event) => {
 	if (!read.ok) return read.response;
 	const parsed = scenarioSchema.extend({ fromScenarioId: z.uuid().optional() }).safeParse(read.body);
 	if (!parsed.success)
-		return apiError(
-			400,
-			'invalid_request',
-			'Some fields need attention.',
-			parsed.error.issues.map((i) => ({ path: i.path.join('.'), message: i.message }))
-		);
+		return invalid(parsed.error.issues.map((i) => ({ path: i.path.join('.'), message: i.message })));
 	const from = parsed.data.fromScenarioId;
 	if (from && !(await listScenarios(site.id)).some((s) => s.id === from))
-		return apiError(400, 'invalid_request', 'Some fields need attention.', [
-			{ path: 'fromScenarioId', message: 'Not a scenario of this site' }
-		]);
+		return invalid([{ path: 'fromScenarioId', message: 'Not a scenario of this site' }]);
 	const id = await createScenario(
 		site,
 		{ name: parsed.data.name, description: parsed.data.description },

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import type { EquipmentInput } from '$lib/calc/equipment.schema';
+import type { EquipmentInput } from '$lib/calc';
 import {
 	type ProfileOptions,
 	dailyProfile,

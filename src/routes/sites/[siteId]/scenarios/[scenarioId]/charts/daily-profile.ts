@@ -1,8 +1,4 @@
-import { INTERVAL_HOURS, SLOTS_PER_DAY } from '$lib/calc/clock';
-import { STANDARD_DAY } from '$lib/calc/day-shapes';
-import { EQUIPMENT_CATEGORIES, equipmentSchema, type EquipmentInput } from '$lib/calc/equipment.schema';
-import { unitWatts } from '$lib/calc/power';
-import { dayProfile } from '$lib/calc/schedule';
+import { dayProfile, EQUIPMENT_CATEGORIES, type EquipmentInput, equipmentSchema, INTERVAL_HOURS, SLOTS_PER_DAY, STANDARD_DAY, unitWatts } from '$lib/calc';
 import type { Category } from '$lib/components/charts/chart-style';
 
 /**

@@ -1,6 +1,4 @@
-import type { RequestIssue } from '$lib/calc/parse';
-import type { PumpingResponse } from '$lib/calc/pumping';
-import { type FlowUnit, type Fluid, METERS_PER_FOOT } from '$lib/calc/units';
+import { type FlowUnit, type Fluid, METERS_PER_FOOT, type PumpingResponse, type RequestIssue } from '$lib/calc';
 
 /**
  * The pumping helper's form as typed, the request it posts to /api/v1/pumping, and the answer read
