@@ -16,15 +16,29 @@ export type MoneyDigits =
 	/** Up to four decimals, for a price per kWh: "$0.1234". */
 	| 'perKwh'
 	/** Compact, for a chart axis: "$1.2K". */
-	| 'compact';
+	| 'compact'
+	/**
+	 * The currency's own minor digits and up to five, for a tariff's rates: a per-kWh rate such as
+	 * 0.03125 must not be rounded away on the page that explains it ("$0.03125", "$12.50").
+	 */
+	| 'rate';
 
 const MONEY_DIGITS: Record<MoneyDigits, Intl.NumberFormatOptions> = {
 	minor: {},
 	cents: { minimumFractionDigits: 2, maximumFractionDigits: 2 },
 	whole: { maximumFractionDigits: 0 },
 	perKwh: { maximumFractionDigits: 4 },
-	compact: { notation: 'compact', maximumFractionDigits: 1 }
+	compact: { notation: 'compact', maximumFractionDigits: 1 },
+	rate: {}
 };
+
+/** The currency's own minor digits (2 for USD, 0 for JPY); throws for a code the browser does not know. */
+function minorDigits(currency: string): number {
+	return (
+		new Intl.NumberFormat('en-US', { style: 'currency', currency }).resolvedOptions().minimumFractionDigits ??
+		2
+	);
+}
 
 const moneyFormats = new Map<string, Intl.NumberFormat | null>();
 const figureFormats = new Map<number, Intl.NumberFormat>();
@@ -38,7 +52,14 @@ export function moneyFormat(currency: string, digits: MoneyDigits = 'minor'): In
 	if (!moneyFormats.has(key)) {
 		let format: Intl.NumberFormat | null;
 		try {
-			format = new Intl.NumberFormat('en-US', { style: 'currency', currency, ...MONEY_DIGITS[digits] });
+			const options =
+				digits === 'rate'
+					? {
+							minimumFractionDigits: minorDigits(currency),
+							maximumFractionDigits: Math.max(minorDigits(currency), 5)
+						}
+					: MONEY_DIGITS[digits];
+			format = new Intl.NumberFormat('en-US', { style: 'currency', currency, ...options });
 		} catch {
 			format = null;
 		}

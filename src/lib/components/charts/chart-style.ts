@@ -1,4 +1,5 @@
 import type { ChargeKind, EQUIPMENT_CATEGORIES } from '$lib/calc';
+import { figure, moneyFormat } from '$lib/text/numbers';
 
 /**
  * How the scenario charts look: names, colours and number formats. Runrate's categorical colours for the scenario charts, drawn from the app's palette (reed, ink,
@@ -60,34 +61,13 @@ export const CATEGORY_COLOURS: Record<Category, string> = {
 /** The one colour of the cost-by-device bars. */
 export const DEVICE_BAR_COLOUR = '#2f7a62';
 
-const formatters = new Map<string, Intl.NumberFormat>();
-
-function formatter(currency: string, compact: boolean): Intl.NumberFormat | null {
-	const key = `${currency}|${compact}`;
-	let format = formatters.get(key);
-	if (!format) {
-		try {
-			format = new Intl.NumberFormat('en-US', {
-				style: 'currency',
-				currency: currency.trim().toUpperCase(),
-				...(compact ? { notation: 'compact', maximumFractionDigits: 1 } : {})
-			});
-		} catch {
-			return null;
-		}
-		formatters.set(key, format);
-	}
-	return format;
-}
-
 /**
  * Money as a bill shows it, in the currency's own minor digits ("$12.50"), or compact for an axis
  * ("$1.2K"). A malformed code (an unsaved draft) shows as typed before the figure.
  */
 export function moneyLabel(amount: number, currency: string, compact = false): string {
-	const format = formatter(currency, compact);
-	if (format) return format.format(amount);
-	return `${currency} ${amount.toLocaleString('en-US', { maximumFractionDigits: 2 })}`;
+	const format = moneyFormat(currency.trim().toUpperCase(), compact ? 'compact' : 'minor');
+	return format ? format.format(amount) : `${currency} ${figure(amount, 2)}`;
 }
 
 /** A figure with at most `digits` decimals: 1234.5 is "1,234.5". */

@@ -1,5 +1,6 @@
 import { equipmentSchema, unitWatts, type EquipmentInput } from '$lib/calc';
 import { periodDays } from '$lib/forms/bill.schema';
+import { figure, money } from '$lib/text/numbers';
 import type { DeviceSpec } from '../db/schema';
 import { equipmentOf, priceScenario } from '$lib/server/sites/results.service';
 import type { ScenarioRow } from '$lib/server/sites/scenario.service';
@@ -15,13 +16,10 @@ const MIN_WATTS = 20;
 const NIGHT_START = 22 * 60;
 const DAYS_PER_MONTH = 365.25 / 12;
 
-const money = (amount: number, currency: string) =>
-	new Intl.NumberFormat('en-US', {
-		style: 'currency',
-		currency,
-		maximumFractionDigits: amount < 10 ? 2 : 0
-	}).format(amount);
-const whole = (n: number) => new Intl.NumberFormat('en-US', { maximumFractionDigits: 0 }).format(n);
+/** Small amounts keep their cents ("$4.20"); larger ones round to whole units ("$37"). */
+const moneyAbout = (amount: number, currency: string) =>
+	money(amount, currency, amount < 10 ? 'minor' : 'whole');
+const whole = (n: number) => figure(n, 0);
 const clock = (minutes: number) => {
 	const m = ((minutes % 1440) + 1440) % 1440;
 	return `${String(Math.floor(m / 60)).padStart(2, '0')}:${String(m % 60).padStart(2, '0')}`;
@@ -115,7 +113,7 @@ export async function suggestionsFor(
 	}
 	for (const move of await nightMoves(site, scenario, specs, bill, r.estimated.cost)) {
 		lines.push(
-			`Running “${move.name}” for its ${whole(move.hours)} hours from ${clock(NIGHT_START)} instead would save about ${money(move.perMonth, site.currency)} a month (the list priced again with that change for this bill’s period).`
+			`Running “${move.name}” for its ${whole(move.hours)} hours from ${clock(NIGHT_START)} instead would save about ${moneyAbout(move.perMonth, site.currency)} a month (the list priced again with that change for this bill’s period).`
 		);
 	}
 	return lines;

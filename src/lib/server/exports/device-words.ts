@@ -1,10 +1,10 @@
 import type { HolidaySpec, Schedule } from '$lib/calc';
 import { daysText, monthsText, windowsText } from '$lib/text/tariff';
+import { figure } from '$lib/text/numbers';
 
 // The same figures as the tariff words' figureText, with one formatter kept: a workbook of thousands
 // of devices would otherwise build a new one per number.
-const FIGURE = new Intl.NumberFormat('en-US', { maximumFractionDigits: 5 });
-const figureText = (value: number) => FIGURE.format(value);
+const figureText = (value: number) => figure(value, 5);
 
 /** Only the days that are not every day are worth saying. */
 function onDays(days: 'all' | 'weekdays' | 'weekends'): string {

@@ -1,4 +1,16 @@
-import { billingSpans, buildCalendar, type CompareRequest, DemandMeter, type Equipment, groupLoads, ProfileBook, RateBook, type Schedule, type Tariff, UsageMeter } from '$lib/calc';
+import {
+	billingSpans,
+	buildCalendar,
+	type CompareRequest,
+	DemandMeter,
+	type Equipment,
+	groupLoads,
+	ProfileBook,
+	RateBook,
+	type Schedule,
+	type Tariff,
+	UsageMeter
+} from '$lib/calc';
 
 /**
  * What the workbook cannot express as a simple formula, computed with the core's own modules: the

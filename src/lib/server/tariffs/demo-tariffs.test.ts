@@ -1,7 +1,14 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { z } from 'zod';
-import { calculate, calculateRequestSchema, holidaysSchema, type Tariff, tariffSchema, timezoneSchema } from '$lib/calc';
+import {
+	calculate,
+	calculateRequestSchema,
+	holidaysSchema,
+	type Tariff,
+	tariffSchema,
+	timezoneSchema
+} from '$lib/calc';
 import { type TariffMeta, tariffMetaSchema, versionMetaSchema } from '$lib/forms/tariff-meta.schema';
 
 // The invented demo library that the seed script loads (data/demo-tariffs.json).

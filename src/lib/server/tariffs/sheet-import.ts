@@ -1,4 +1,12 @@
-import { amount, distinctBy, holidaysSchema, parseRequest, type Tariff, tariffSchema, timezoneSchema } from '$lib/calc';
+import {
+	amount,
+	distinctBy,
+	holidaysSchema,
+	parseRequest,
+	type Tariff,
+	tariffSchema,
+	timezoneSchema
+} from '$lib/calc';
 import {
 	CUSTOMER_CLASSES,
 	type TariffMeta,

@@ -1,5 +1,6 @@
 import { and, desc, eq, isNull, or } from 'drizzle-orm';
 import { env } from '$env/dynamic/private';
+import { money } from '$lib/text/numbers';
 import { db } from '../db';
 import {
 	memberships,
@@ -74,8 +75,6 @@ export async function costChanges(job: ForWorkspace) {
 	}
 	return { tariff, now, before, year, lines };
 }
-
-const money = (n: number, currency: string) => n.toLocaleString('en-US', { style: 'currency', currency });
 
 const perWorkspace = defineJob<ForWorkspace>('tariff-version-notice', async (job) => {
 	const changes = await costChanges(job);

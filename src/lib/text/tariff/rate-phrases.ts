@@ -12,41 +12,18 @@ export type EnergyInput = NonNullable<TariffInput['energyCharges']>[number];
 export type TouSeasonInput = Extract<EnergyInput, { type: 'tou' }>['seasons'][number];
 export type TierInput = Extract<EnergyInput, { type: 'tiered' }>['tiers'][number];
 export type DaysInput = 'all' | 'weekdays' | 'weekends' | undefined;
+import { figure, moneyFormat } from '../numbers';
+
 export interface WindowInput {
 	start: string;
 	end: string;
 }
 
-const formatters = new Map<string, Intl.NumberFormat>();
-
-function moneyFormatter(currency: string): Intl.NumberFormat {
-	const code = currency.trim().toUpperCase();
-	let formatter = formatters.get(code);
-	if (!formatter) {
-		// Keep the currency's own minor digits (2 for USD, 0 for JPY) and show up to 5, because a
-		// per-kWh rate such as 0.03125 must not be rounded away on the page that explains it.
-		const minor =
-			new Intl.NumberFormat('en-US', { style: 'currency', currency: code }).resolvedOptions()
-				.minimumFractionDigits ?? 2;
-		formatter = new Intl.NumberFormat('en-US', {
-			style: 'currency',
-			currency: code,
-			minimumFractionDigits: minor,
-			maximumFractionDigits: Math.max(minor, 5)
-		});
-		formatters.set(code, formatter);
-	}
-	return formatter;
-}
-
 /** An amount in the tariff's currency: `moneyText(0.031, 'USD')` is "$0.031", 12.5 is "$12.50". */
 export function moneyText(amount: number, currency: string): string {
-	try {
-		return moneyFormatter(currency).format(amount);
-	} catch {
-		// A malformed code (the schema refuses these, an unsaved draft may not): show it as typed.
-		return `${currency} ${amount.toLocaleString('en-US', { maximumFractionDigits: 5 })}`;
-	}
+	const format = moneyFormat(currency.trim().toUpperCase(), 'rate');
+	// A malformed code (the schema refuses these, an unsaved draft may not): show it as typed.
+	return format ? format.format(amount) : `${currency} ${figure(amount, 5)}`;
 }
 
 /** A plain figure: 4 is "4", 1000 is "1,000", 4.125 is "4.125". */
