@@ -5,6 +5,16 @@ import globals from 'globals';
 import ts from 'typescript-eslint';
 import svelteConfig from './svelte.config.js';
 
+/** Modules of the calculation core that code outside it may not import: it uses `$lib/calc`. */
+const CORE_MODULES = [
+	'$lib/calc/*',
+	'!$lib/calc/*.fixture',
+	'**/lib/calc/*',
+	'!**/lib/calc/*.fixture',
+	'!**/lib/calc/index'
+];
+const CORE_MESSAGE = 'Import the calculation core from $lib/calc (its index), not its modules.';
+
 export default ts.config(
 	js.configs.recommended,
 	...ts.configs.recommended,
@@ -29,6 +39,63 @@ export default ts.config(
 				parser: ts.parser,
 				svelteConfig
 			}
+		}
+	},
+	// Fences (issue 16). The calculation core is pure and runs anywhere; only server code reaches the
+	// server; everything outside the core enters it through `$lib/calc` (its index), so the core may
+	// rearrange its modules freely. Test support (`*.fixture.ts`) is the one named exception.
+	{
+		files: ['src/lib/calc/**/*.ts'],
+		rules: {
+			'no-restricted-imports': [
+				'error',
+				{
+					patterns: [
+						{
+							group: ['$app', '$app/*', '@sveltejs/kit', '@sveltejs/kit/*', 'svelte', 'svelte/*', '$env/*'],
+							message: 'The calculation core runs anywhere: no SvelteKit, Svelte or environment imports.'
+						},
+						{
+							group: ['drizzle-orm', 'drizzle-orm/*', 'postgres'],
+							message: 'The calculation core never touches the database.'
+						},
+						{
+							group: ['$lib', '$lib/*', '../*'],
+							message: 'The calculation core imports only its own modules (./name) and plain libraries.'
+						}
+					]
+				}
+			]
+		}
+	},
+	{
+		files: ['src/**/*.ts', 'src/**/*.svelte'],
+		ignores: ['src/lib/calc/**', 'src/lib/server/**', 'src/**/*.server.ts', 'src/**/+server.ts'],
+		rules: {
+			'no-restricted-imports': [
+				'error',
+				{
+					patterns: [
+						{ group: CORE_MODULES, message: CORE_MESSAGE },
+						{
+							group: ['$lib/server', '$lib/server/*', '**/lib/server/*', '**/server/*'],
+							message: 'Only server code (src/lib/server, *.server.ts, +server.ts) imports $lib/server.'
+						}
+					]
+				}
+			]
+		}
+	},
+	{
+		files: [
+			'src/lib/server/**/*.ts',
+			'src/**/*.server.ts',
+			'src/**/+server.ts',
+			'tests/**/*.ts',
+			'scripts/**/*.ts'
+		],
+		rules: {
+			'no-restricted-imports': ['error', { patterns: [{ group: CORE_MODULES, message: CORE_MESSAGE }] }]
 		}
 	},
 	{
