@@ -1,3 +1,5 @@
+// Over 60 lines: the two doors of one sign-in page (password and e-mailed link), each rate limited, checked
+// by an accounts service and handed to Auth.js in process.
 import { fail, redirect } from '@sveltejs/kit';
 import { handOver } from '$lib/server/auth/hand-over';
 import { checkPassword } from '$lib/server/accounts/sign-in';

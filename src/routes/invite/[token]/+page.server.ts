@@ -1,3 +1,4 @@
+// A little over 60 lines: the load and two actions (accept as the signed-in person, or join with a new account).
 import { error, fail, redirect } from '@sveltejs/kit';
 import { handOver } from '$lib/server/auth/hand-over';
 import { requireUser } from '$lib/server/guard';

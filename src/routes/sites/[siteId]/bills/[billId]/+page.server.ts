@@ -1,3 +1,4 @@
+// A little over 60 lines: the bill page's load (with its reconciliation) and its two actions, update and delete.
 import { fail, redirect } from '@sveltejs/kit';
 import { readBillForm } from '$lib/server/bills/bill-form';
 import { changeBill, removeBill } from '$lib/server/bills/bill.service';

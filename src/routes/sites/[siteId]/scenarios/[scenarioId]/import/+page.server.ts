@@ -1,3 +1,4 @@
+// A little over 60 lines: the import page's load and its one action, which reads the sheet or saves the mapped rows.
 import { error, fail, redirect } from '@sveltejs/kit';
 import { requireScenarioAccess } from '$lib/server/guard';
 import { MAX_SHEET_BYTES, sheetKind } from '$lib/server/sheets/read-sheet';
