@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { countryCode } from './place.schema';
 import { storableText, UNSTORABLE } from './storable';
 
 const optionalText = (label: string, max: number) =>
@@ -30,11 +31,7 @@ export const siteSchema = z.object({
 		.refine(storableText, UNSTORABLE),
 	address: optionalText('Address or area', 300),
 	timezone: z.string({ error: 'Time zone is required' }).trim().min(1, 'Time zone is required').max(64),
-	country: z
-		.string({ error: 'Country is required' })
-		.trim()
-		.toUpperCase()
-		.regex(/^[A-Z]{2}$/, 'Country must be a two-letter code such as US'),
+	country: countryCode,
 	region: optionalText('State or province', 10).transform((s) => (s ? s.toUpperCase() : null)),
 	supplyVolts: optionalInt('Supply voltage', 1, 100_000),
 	supplyPhases: optionalInt('Phases', 1, 3).refine(

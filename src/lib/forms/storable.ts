@@ -3,13 +3,7 @@
 // of failing at the database with a 500.
 import { NUL_MESSAGE, storableText, unstorableMessage } from '$lib/calc';
 
-export {
-	NUL_MESSAGE,
-	SURROGATE_MESSAGE,
-	storableText,
-	UNSTORABLE,
-	unstorableMessage
-} from '$lib/calc';
+export { NUL_MESSAGE, SURROGATE_MESSAGE, storableText, UNSTORABLE, unstorableMessage } from '$lib/calc';
 
 /**
  * The dotted path of the first string or key in a value (parsed JSON, a device list) that cannot be

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { countryCode } from './place.schema';
 import { storableText, UNSTORABLE } from './storable';
 
 // What the library knows about a tariff besides its charges (those follow the core's tariffSchema),
@@ -61,11 +62,7 @@ export const tariffMetaSchema = z.object({
 	utility: shortText('Utility'),
 	name: shortText('Tariff name'),
 	code: optionalText('Tariff code', 40),
-	country: z
-		.string({ error: 'Country is required' })
-		.trim()
-		.toUpperCase()
-		.regex(/^[A-Z]{2}$/, 'Country must be a two-letter code such as US'),
+	country: countryCode,
 	region: optionalText('State or province', 10).transform((s) => (s ? s.toUpperCase() : null)),
 	area: optionalText('Area', 200),
 	customerClass: z.enum(CUSTOMER_CLASSES, { error: 'Pick a customer class' }),

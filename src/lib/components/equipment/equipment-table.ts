@@ -1,6 +1,6 @@
 import { type EquipmentInput, equipmentSchema, parseRequest, powerSchema } from '$lib/calc';
-import type { FieldIssue } from '$lib/components/fields/field-issues';
-import { powerForm } from './device-fields';
+import { type FieldIssue, messagesAt } from '$lib/components/fields/field-issues';
+import { powerForm, writeField } from './device-fields';
 
 /** A stored device: the core's Equipment plus the safety flags and notes (as `devices.spec` holds it). */
 export type DeviceSpec = EquipmentInput & { inWater?: boolean; outdoor?: boolean; notes?: string };
@@ -130,4 +130,23 @@ export function rowDomId(key: string): string {
 /** The id of the control for a path inside a row: ("eq-7", "power.amps") → "eq-7-power-amps". */
 export function fieldId(rowId: string, path: string): string {
 	return path ? `${rowId}-${path.replaceAll('.', '-')}` : rowId;
+}
+
+/**
+ * What a figure box of a device's power or schedule (`path` "power" or "schedule") needs: its id, value,
+ * writer and messages, all following from the part and the key, so both editors build their boxes alike.
+ */
+export function partNumber(
+	part: object,
+	path: string,
+	rowId: string,
+	issues: readonly FieldIssue[],
+	key: string
+) {
+	return {
+		id: fieldId(rowId, `${path}.${key}`),
+		value: (part as Record<string, number | undefined>)[key],
+		onvalue: (next: number | undefined) => writeField(part, key, next),
+		messages: messagesAt(issues, `${path}.${key}`)
+	};
 }
