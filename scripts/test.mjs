@@ -7,11 +7,11 @@ import {
 	ensureDependencies,
 	freePort,
 	log,
+	migrateSeedAndStartStandIns,
 	run,
 	runOrThrow,
-	startService,
-	stopGroup,
-	tsNode
+	standInEnv,
+	stopGroup
 } from './lib.mjs';
 
 const ALL = ['types', 'lint', 'format', 'unit', 'integration', 'e2e'];
@@ -102,39 +102,22 @@ async function ensureLibreOffice() {
 }
 
 async function startServices() {
-	const [pgPort, smtpPort, mailViewPort, s3Port, appPort] = await Promise.all([
-		freePort(),
-		freePort(),
-		freePort(),
-		freePort(),
-		freePort()
-	]);
+	const [pgPort, smtpPort, mailViewPort, s3Port, appPort] = await Promise.all(
+		Array.from({ length: 5 }, freePort)
+	);
 	pgEnv = { PGDATA: join(work, 'pg'), PGPORT: String(pgPort) };
 	await runOrThrow('bash', ['scripts/pg.sh', 'start'], { env: pgEnv });
 	const env = {
 		DATABASE_URL: `postgres://postgres@127.0.0.1:${pgPort}/runrate`,
 		AUTH_SECRET: 'test-only-secret-not-for-production-0123456789',
-		SMTP_URL: `smtp://127.0.0.1:${smtpPort}`,
-		MAIL_VIEW_URL: `http://127.0.0.1:${mailViewPort}`,
-		SMTP_PORT: String(smtpPort),
-		MAIL_VIEW_PORT: String(mailViewPort),
-		S3_PORT: String(s3Port),
-		S3_DIR: join(work, 's3'),
-		S3_ENDPOINT: `http://127.0.0.1:${s3Port}`,
-		S3_BUCKET: 'runrate-uploads',
-		S3_ACCESS_KEY_ID: 'S3RVER',
-		S3_SECRET_ACCESS_KEY: 'S3RVER',
+		...standInEnv({ smtpPort, mailViewPort, s3Port, s3Dir: join(work, 's3') }),
 		APP_PORT: String(appPort),
 		PGPORT: String(pgPort),
 		PGDATA: pgEnv.PGDATA,
 		// Inside the project (so the bundle finds node_modules), one folder per run.
 		RUNRATE_BUILD_DIR: join('.test-build', basename(work))
 	};
-	await runOrThrow(...tsNode('scripts/migrate.ts'), { env });
-	await runOrThrow(...tsNode('scripts/seed.ts'), { env });
-	children.push(
-		await startService('stand-ins', ...tsNode('scripts/stand-ins.ts'), { env, ready: /\[stand-ins\]/ })
-	);
+	children.push(await migrateSeedAndStartStandIns(env));
 	return env;
 }
 
