@@ -93,39 +93,37 @@ describe('importing intervals', () => {
 });
 
 describe('metered kWh in a billing period', () => {
-	it('sums the intervals that start on the period’s local dates, inclusive', async () => {
-		const site = await freshSite('Bill period');
-		// 1 kWh an hour from 00:00 CST on 1 January to 00:00 CST on 1 February 2026 (744 hours).
-		await importUsage(site, hourly('2026-01-01T06:00:00Z', 744), owner);
-		expect(await meteredKwh(site.id, '2026-01-05', '2026-01-11', site.timezone)).toEqual({
-			kwh: 168,
-			intervals: 168,
-			hoursCovered: 168,
-			hoursInPeriod: 168
-		});
-	});
-
-	it('reports how much of a period the readings cover', async () => {
-		const site = await freshSite('Partial');
-		await importUsage(site, hourly('2026-01-01T06:00:00Z', 36), owner);
-		expect(await meteredKwh(site.id, '2026-01-01', '2026-01-03', site.timezone)).toEqual({
-			kwh: 36,
-			intervals: 36,
-			hoursCovered: 36,
-			hoursInPeriod: 72
-		});
-	});
-
-	it('counts 23 hours in the day clocks spring forward (8 March 2026 in Chicago)', async () => {
-		const site = await freshSite('Spring');
-		// From 00:00 CST on 8 March (06:00Z) to 00:00 CDT on 9 March (05:00Z): 23 hours, US rules.
-		await importUsage(site, hourly('2026-03-08T06:00:00Z', 24), owner);
-		expect(await meteredKwh(site.id, '2026-03-08', '2026-03-08', site.timezone)).toEqual({
-			kwh: 23,
-			intervals: 23,
-			hoursCovered: 23,
-			hoursInPeriod: 23
-		});
+	it.each([
+		{
+			// From 00:00 CST on 1 January to 00:00 CST on 1 February 2026 (744 hours).
+			what: 'sums the intervals that start on the period’s local dates, inclusive',
+			name: 'Bill period',
+			from: '2026-01-01T06:00:00Z',
+			hours: 744,
+			period: ['2026-01-05', '2026-01-11'] as const,
+			expected: { kwh: 168, intervals: 168, hoursCovered: 168, hoursInPeriod: 168 }
+		},
+		{
+			what: 'reports how much of a period the readings cover',
+			name: 'Partial',
+			from: '2026-01-01T06:00:00Z',
+			hours: 36,
+			period: ['2026-01-01', '2026-01-03'] as const,
+			expected: { kwh: 36, intervals: 36, hoursCovered: 36, hoursInPeriod: 72 }
+		},
+		{
+			// From 00:00 CST on 8 March (06:00Z) to 00:00 CDT on 9 March (05:00Z): 23 hours, US rules.
+			what: 'counts 23 hours in the day clocks spring forward (8 March 2026 in Chicago)',
+			name: 'Spring',
+			from: '2026-03-08T06:00:00Z',
+			hours: 24,
+			period: ['2026-03-08', '2026-03-08'] as const,
+			expected: { kwh: 23, intervals: 23, hoursCovered: 23, hoursInPeriod: 23 }
+		}
+	])('$what', async ({ name, from, hours, period, expected }) => {
+		const site = await freshSite(name);
+		await importUsage(site, hourly(from, hours), owner);
+		expect(await meteredKwh(site.id, ...period, site.timezone)).toEqual(expected);
 	});
 
 	it('stops the hours covered at the period’s end for a reading that runs past it', async () => {
