@@ -7,16 +7,8 @@ import autocannon from 'autocannon';
 import { chmodSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { availableParallelism, tmpdir } from 'node:os';
 import { basename, join } from 'node:path';
-import {
-	freePort,
-	log,
-	migrateSeedAndStartStandIns,
-	run,
-	runOrThrow,
-	standInEnv,
-	startService,
-	stopGroup
-} from './lib.mjs';
+import { freePort, log, run, runOrThrow, startService, stopGroup } from './lib.mjs';
+import { migrateSeedAndStartStandIns, standInEnv } from './local-services.mjs';
 
 const SECONDS = Number(process.env.LOAD_SECONDS ?? 30);
 const CONNECTIONS = Number(process.env.LOAD_CONNECTIONS ?? 50);

@@ -5,14 +5,13 @@ import {
 	ensureDependencies,
 	localSecret,
 	log,
-	migrateSeedAndStartStandIns,
 	root,
 	run,
 	runOrThrow,
-	standInEnv,
 	startService,
 	stopGroup
 } from './lib.mjs';
+import { migrateSeedAndStartStandIns, standInEnv } from './local-services.mjs';
 
 const port = Number(process.env.PORT ?? 3000);
 const pgPort = Number(process.env.PGPORT ?? 5544);

@@ -3,16 +3,8 @@
 import { chmodSync, existsSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { basename, join } from 'node:path';
-import {
-	ensureDependencies,
-	freePort,
-	log,
-	migrateSeedAndStartStandIns,
-	run,
-	runOrThrow,
-	standInEnv,
-	stopGroup
-} from './lib.mjs';
+import { ensureDependencies, freePort, log, run, runOrThrow, stopGroup } from './lib.mjs';
+import { migrateSeedAndStartStandIns, standInEnv } from './local-services.mjs';
 
 const ALL = ['types', 'lint', 'format', 'unit', 'integration', 'e2e'];
 const wanted = process.argv.slice(2).filter((a) => ALL.includes(a));
