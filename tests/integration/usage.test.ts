@@ -18,13 +18,17 @@ let workspaceId = '';
 /** A new site in this file's workspace, its name tagged with this run. */
 const freshSite = (name: string) => makeSite(workspaceId, owner, `${name} ${tag}`);
 
-/** `hours` hourly readings of `kwh` each from `startIso`. */
-const hourly = (startIso: string, hours: number, kwh = 1): Interval[] =>
-	Array.from({ length: hours }, (_, i) => ({
-		start: new Date(new Date(startIso).getTime() + i * 3_600_000),
-		seconds: 3600,
+/** `count` back-to-back readings of `seconds` each and `kwh` each, from `startIso`. */
+const readingsFrom = (startIso: string, count: number, seconds: number, kwh: number): Interval[] =>
+	Array.from({ length: count }, (_, i) => ({
+		start: new Date(new Date(startIso).getTime() + i * seconds * 1000),
+		seconds,
 		kwh
 	}));
+
+/** `hours` hourly readings of `kwh` each from `startIso`. */
+const hourly = (startIso: string, hours: number, kwh = 1): Interval[] =>
+	readingsFrom(startIso, hours, 3600, kwh);
 
 beforeAll(async () => {
 	owner = await makeUser(`owner-${tag}@example.org`, 'Usage owner');
@@ -75,11 +79,7 @@ describe('importing intervals', () => {
 
 	it('stores more intervals than one batch holds, in one go', async () => {
 		const site = await freshSite('Big');
-		const year = Array.from({ length: 12_000 }, (_, i) => ({
-			start: new Date(Date.UTC(2026, 0, 1, 6) + i * 900_000),
-			seconds: 900,
-			kwh: 0.25
-		}));
+		const year = readingsFrom('2026-01-01T06:00:00Z', 12_000, 900, 0.25);
 		expect((await importUsage(site, year, owner)).imported).toBe(12_000);
 		expect(await usageSummary(site.id)).toMatchObject({ intervals: 12_000, kwh: 3000 });
 	});
@@ -93,37 +93,22 @@ describe('importing intervals', () => {
 });
 
 describe('metered kWh in a billing period', () => {
-	it.each([
-		{
-			// From 00:00 CST on 1 January to 00:00 CST on 1 February 2026 (744 hours).
-			what: 'sums the intervals that start on the period’s local dates, inclusive',
-			name: 'Bill period',
-			from: '2026-01-01T06:00:00Z',
-			hours: 744,
-			period: ['2026-01-05', '2026-01-11'] as const,
-			expected: { kwh: 168, intervals: 168, hoursCovered: 168, hoursInPeriod: 168 }
-		},
-		{
-			what: 'reports how much of a period the readings cover',
-			name: 'Partial',
-			from: '2026-01-01T06:00:00Z',
-			hours: 36,
-			period: ['2026-01-01', '2026-01-03'] as const,
-			expected: { kwh: 36, intervals: 36, hoursCovered: 36, hoursInPeriod: 72 }
-		},
-		{
-			// From 00:00 CST on 8 March (06:00Z) to 00:00 CDT on 9 March (05:00Z): 23 hours, US rules.
-			what: 'counts 23 hours in the day clocks spring forward (8 March 2026 in Chicago)',
-			name: 'Spring',
-			from: '2026-03-08T06:00:00Z',
-			hours: 24,
-			period: ['2026-03-08', '2026-03-08'] as const,
-			expected: { kwh: 23, intervals: 23, hoursCovered: 23, hoursInPeriod: 23 }
-		}
-	])('$what', async ({ name, from, hours, period, expected }) => {
+	// One kWh an hour from 00:00 Chicago time, so kWh, intervals and hours covered are one number. Spring: from
+	// 00:00 CST on 8 March (06:00Z) to 00:00 CDT on 9 March (05:00Z) is 23 hours, US rules.
+	it.each`
+		site             | from                      | hours  | first           | last            | kwh    | hoursInPeriod | what
+		${'Bill period'} | ${'2026-01-01T06:00:00Z'} | ${744} | ${'2026-01-05'} | ${'2026-01-11'} | ${168} | ${168}        | ${'sums the intervals that start on the period’s local dates, inclusive'}
+		${'Partial'}     | ${'2026-01-01T06:00:00Z'} | ${36}  | ${'2026-01-01'} | ${'2026-01-03'} | ${36}  | ${72}         | ${'reports how much of a period the readings cover'}
+		${'Spring'}      | ${'2026-03-08T06:00:00Z'} | ${24}  | ${'2026-03-08'} | ${'2026-03-08'} | ${23}  | ${23}         | ${'counts 23 hours in the day clocks spring forward (8 March 2026 in Chicago)'}
+	`('$what', async ({ site: name, from, hours, first, last, kwh, hoursInPeriod }) => {
 		const site = await freshSite(name);
 		await importUsage(site, hourly(from, hours), owner);
-		expect(await meteredKwh(site.id, ...period, site.timezone)).toEqual(expected);
+		expect(await meteredKwh(site.id, first, last, site.timezone)).toEqual({
+			kwh,
+			intervals: kwh,
+			hoursCovered: kwh,
+			hoursInPeriod
+		});
 	});
 
 	it('stops the hours covered at the period’s end for a reading that runs past it', async () => {
@@ -164,11 +149,7 @@ describe('the daily load shape', () => {
 
 	it('reads 15-minute readings as kWh per hour, and leaves out daily readings', async () => {
 		const site = await freshSite('Quarter');
-		const quarters = Array.from({ length: 4 }, (_, i) => ({
-			start: new Date(Date.UTC(2026, 0, 12, 6) + i * 900_000),
-			seconds: 900,
-			kwh: 0.25
-		}));
+		const quarters = readingsFrom('2026-01-12T06:00:00Z', 4, 900, 0.25);
 		await importUsage(
 			site,
 			[...quarters, { start: new Date('2026-01-13T06:00:00Z'), seconds: 86_400, kwh: 50 }],
