@@ -74,24 +74,20 @@ async function vitest(project, env) {
 	);
 }
 
-async function ensureChromium() {
-	if (existsSync('/usr/bin/chromium')) return;
-	log('test', "installing Debian's chromium for the end-to-end tests");
+/** Installs a Debian package with apt-get when its `binary` is missing; `purpose` says in the log what needs it. */
+async function ensureDebianPackage(binary, pkg, purpose) {
+	if (existsSync(binary)) return;
+	log('test', `installing Debian's ${pkg} for ${purpose}`);
 	await runOrThrow('apt-get', ['update', '-qq']);
-	await runOrThrow('apt-get', ['install', '-y', '-qq', 'chromium'], {
-		env: { DEBIAN_FRONTEND: 'noninteractive' }
-	});
+	await runOrThrow('apt-get', ['install', '-y', '-qq', pkg], { env: { DEBIAN_FRONTEND: 'noninteractive' } });
 }
 
+/** Chromium runs the end-to-end tests. */
+const ensureChromium = () => ensureDebianPackage('/usr/bin/chromium', 'chromium', 'the end-to-end tests');
+
 /** LibreOffice Calc recalculates the exported workbook in the integration tests (headless, no GUI). */
-async function ensureLibreOffice() {
-	if (existsSync('/usr/bin/soffice')) return;
-	log('test', "installing Debian's libreoffice-calc-nogui for the workbook recalculation test");
-	await runOrThrow('apt-get', ['update', '-qq']);
-	await runOrThrow('apt-get', ['install', '-y', '-qq', 'libreoffice-calc-nogui'], {
-		env: { DEBIAN_FRONTEND: 'noninteractive' }
-	});
-}
+const ensureLibreOffice = () =>
+	ensureDebianPackage('/usr/bin/soffice', 'libreoffice-calc-nogui', 'the workbook recalculation test');
 
 async function startServices() {
 	const [pgPort, smtpPort, mailViewPort, s3Port, appPort] = await Promise.all(
