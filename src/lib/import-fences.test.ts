@@ -8,6 +8,7 @@ const eslint = new ESLint({ cwd: process.cwd() });
 /** The restricted-import messages ESLint gives a snippet placed at `filePath`. */
 async function fenceMessages(code: string, filePath: string): Promise<string[]> {
 	const [result] = await eslint.lintText(code, { filePath });
+	if (!result) throw new Error(`ESLint gave no result for ${filePath}`);
 	return result.messages.filter((m) => m.ruleId === 'no-restricted-imports').map((m) => m.message);
 }
 
