@@ -7,7 +7,8 @@ import autocannon from 'autocannon';
 import { chmodSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { availableParallelism, tmpdir } from 'node:os';
 import { basename, join } from 'node:path';
-import { freePort, log, run, runOrThrow, startService, stopGroup, tsNode } from './lib.mjs';
+import { freePort, log, run, runOrThrow, startService, stopGroup } from './lib.mjs';
+import { migrateSeedAndStartStandIns, standInEnv } from './local-services.mjs';
 
 const SECONDS = Number(process.env.LOAD_SECONDS ?? 30);
 const CONNECTIONS = Number(process.env.LOAD_CONNECTIONS ?? 50);
@@ -125,24 +126,11 @@ async function main() {
 	const env = {
 		DATABASE_URL: `postgres://postgres@127.0.0.1:${pgPort}/runrate`,
 		AUTH_SECRET: 'load-test-only-secret-0123456789abcdef',
-		SMTP_URL: `smtp://127.0.0.1:${smtpPort}`,
-		SMTP_PORT: String(smtpPort),
-		MAIL_VIEW_PORT: String(viewPort),
-		MAIL_VIEW_URL: `http://127.0.0.1:${viewPort}`,
-		S3_PORT: String(s3Port),
-		S3_DIR: join(work, 's3'),
-		S3_ENDPOINT: `http://127.0.0.1:${s3Port}`,
-		S3_BUCKET: 'runrate-uploads',
-		S3_ACCESS_KEY_ID: 'S3RVER',
-		S3_SECRET_ACCESS_KEY: 'S3RVER',
+		...standInEnv({ smtpPort, mailViewPort: viewPort, s3Port, s3Dir: join(work, 's3') }),
 		RUNRATE_BUILD_DIR: buildDir
 	};
 	await runOrThrow('bash', ['scripts/pg.sh', 'start'], { env: pgEnv });
-	await runOrThrow(...tsNode('scripts/migrate.ts'), { env });
-	await runOrThrow(...tsNode('scripts/seed.ts'), { env });
-	children.push(
-		await startService('stand-ins', ...tsNode('scripts/stand-ins.ts'), { env, ready: /\[stand-ins\]/ })
-	);
+	children.push(await migrateSeedAndStartStandIns(env));
 	log('load', 'building the production bundle');
 	await runOrThrow('npx', ['vite', 'build', '--logLevel', 'error'], { env });
 	const base = `http://127.0.0.1:${appPort}`;

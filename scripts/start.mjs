@@ -9,9 +9,9 @@ import {
 	run,
 	runOrThrow,
 	startService,
-	stopGroup,
-	tsNode
+	stopGroup
 } from './lib.mjs';
+import { migrateSeedAndStartStandIns, standInEnv } from './local-services.mjs';
 
 const port = Number(process.env.PORT ?? 3000);
 const pgPort = Number(process.env.PGPORT ?? 5544);
@@ -41,25 +41,12 @@ try {
 	const env = {
 		DATABASE_URL: databaseUrl,
 		AUTH_SECRET: process.env.AUTH_SECRET ?? localSecret(),
-		SMTP_URL: `smtp://127.0.0.1:${smtpPort}`,
-		MAIL_VIEW_URL: `http://127.0.0.1:${mailViewPort}`,
-		S3_ENDPOINT: `http://127.0.0.1:${s3Port}`,
-		S3_BUCKET: 'runrate-uploads',
-		S3_ACCESS_KEY_ID: 'S3RVER',
-		S3_SECRET_ACCESS_KEY: 'S3RVER',
-		SMTP_PORT: String(smtpPort),
-		MAIL_VIEW_PORT: String(mailViewPort),
-		S3_PORT: String(s3Port),
-		S3_DIR: `${root}/.data/s3`
+		...standInEnv({ smtpPort, mailViewPort, s3Port, s3Dir: `${root}/.data/s3` })
 	};
 	await runOrThrow('bash', ['scripts/pg.sh', 'start'], { env: { PGPORT: String(pgPort) } });
 	// In the project's .data/pg, or in ~postgres/runrate/… when the clone sits in a private folder.
 	const pgData = (await runOrThrow('bash', ['scripts/pg.sh', 'where'], { quiet: true })).output.trim();
-	await runOrThrow(...tsNode('scripts/migrate.ts'), { env });
-	await runOrThrow(...tsNode('scripts/seed.ts'), { env });
-	children.push(
-		await startService('stand-ins', ...tsNode('scripts/stand-ins.ts'), { env, ready: /\[stand-ins\]/ })
-	);
+	children.push(await migrateSeedAndStartStandIns(env));
 	log('start', 'building the production bundle (about a minute)');
 	await runOrThrow('npx', ['vite', 'build', '--logLevel', 'warn'], { env });
 	const app = await startService('app', 'node', ['build'], {

@@ -3,16 +3,8 @@
 import { chmodSync, existsSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { basename, join } from 'node:path';
-import {
-	ensureDependencies,
-	freePort,
-	log,
-	run,
-	runOrThrow,
-	startService,
-	stopGroup,
-	tsNode
-} from './lib.mjs';
+import { ensureDependencies, freePort, log, run, runOrThrow, stopGroup } from './lib.mjs';
+import { migrateSeedAndStartStandIns, standInEnv } from './local-services.mjs';
 
 const ALL = ['types', 'lint', 'format', 'unit', 'integration', 'e2e'];
 const wanted = process.argv.slice(2).filter((a) => ALL.includes(a));
@@ -82,59 +74,38 @@ async function vitest(project, env) {
 	);
 }
 
-async function ensureChromium() {
-	if (existsSync('/usr/bin/chromium')) return;
-	log('test', "installing Debian's chromium for the end-to-end tests");
+/** Installs a Debian package with apt-get when its `binary` is missing; `purpose` says in the log what needs it. */
+async function ensureDebianPackage(binary, pkg, purpose) {
+	if (existsSync(binary)) return;
+	log('test', `installing Debian's ${pkg} for ${purpose}`);
 	await runOrThrow('apt-get', ['update', '-qq']);
-	await runOrThrow('apt-get', ['install', '-y', '-qq', 'chromium'], {
-		env: { DEBIAN_FRONTEND: 'noninteractive' }
-	});
+	await runOrThrow('apt-get', ['install', '-y', '-qq', pkg], { env: { DEBIAN_FRONTEND: 'noninteractive' } });
 }
+
+/** Chromium runs the end-to-end tests. */
+const ensureChromium = () => ensureDebianPackage('/usr/bin/chromium', 'chromium', 'the end-to-end tests');
 
 /** LibreOffice Calc recalculates the exported workbook in the integration tests (headless, no GUI). */
-async function ensureLibreOffice() {
-	if (existsSync('/usr/bin/soffice')) return;
-	log('test', "installing Debian's libreoffice-calc-nogui for the workbook recalculation test");
-	await runOrThrow('apt-get', ['update', '-qq']);
-	await runOrThrow('apt-get', ['install', '-y', '-qq', 'libreoffice-calc-nogui'], {
-		env: { DEBIAN_FRONTEND: 'noninteractive' }
-	});
-}
+const ensureLibreOffice = () =>
+	ensureDebianPackage('/usr/bin/soffice', 'libreoffice-calc-nogui', 'the workbook recalculation test');
 
 async function startServices() {
-	const [pgPort, smtpPort, mailViewPort, s3Port, appPort] = await Promise.all([
-		freePort(),
-		freePort(),
-		freePort(),
-		freePort(),
-		freePort()
-	]);
+	const [pgPort, smtpPort, mailViewPort, s3Port, appPort] = await Promise.all(
+		Array.from({ length: 5 }, freePort)
+	);
 	pgEnv = { PGDATA: join(work, 'pg'), PGPORT: String(pgPort) };
 	await runOrThrow('bash', ['scripts/pg.sh', 'start'], { env: pgEnv });
 	const env = {
 		DATABASE_URL: `postgres://postgres@127.0.0.1:${pgPort}/runrate`,
 		AUTH_SECRET: 'test-only-secret-not-for-production-0123456789',
-		SMTP_URL: `smtp://127.0.0.1:${smtpPort}`,
-		MAIL_VIEW_URL: `http://127.0.0.1:${mailViewPort}`,
-		SMTP_PORT: String(smtpPort),
-		MAIL_VIEW_PORT: String(mailViewPort),
-		S3_PORT: String(s3Port),
-		S3_DIR: join(work, 's3'),
-		S3_ENDPOINT: `http://127.0.0.1:${s3Port}`,
-		S3_BUCKET: 'runrate-uploads',
-		S3_ACCESS_KEY_ID: 'S3RVER',
-		S3_SECRET_ACCESS_KEY: 'S3RVER',
+		...standInEnv({ smtpPort, mailViewPort, s3Port, s3Dir: join(work, 's3') }),
 		APP_PORT: String(appPort),
 		PGPORT: String(pgPort),
 		PGDATA: pgEnv.PGDATA,
 		// Inside the project (so the bundle finds node_modules), one folder per run.
 		RUNRATE_BUILD_DIR: join('.test-build', basename(work))
 	};
-	await runOrThrow(...tsNode('scripts/migrate.ts'), { env });
-	await runOrThrow(...tsNode('scripts/seed.ts'), { env });
-	children.push(
-		await startService('stand-ins', ...tsNode('scripts/stand-ins.ts'), { env, ready: /\[stand-ins\]/ })
-	);
+	children.push(await migrateSeedAndStartStandIns(env));
 	return env;
 }
 

@@ -18,13 +18,17 @@ let workspaceId = '';
 /** A new site in this file's workspace, its name tagged with this run. */
 const freshSite = (name: string) => makeSite(workspaceId, owner, `${name} ${tag}`);
 
-/** `hours` hourly readings of `kwh` each from `startIso`. */
-const hourly = (startIso: string, hours: number, kwh = 1): Interval[] =>
-	Array.from({ length: hours }, (_, i) => ({
-		start: new Date(new Date(startIso).getTime() + i * 3_600_000),
-		seconds: 3600,
+/** `count` back-to-back readings of `seconds` each and `kwh` each, from `startIso`. */
+const readingsFrom = (startIso: string, count: number, seconds: number, kwh: number): Interval[] =>
+	Array.from({ length: count }, (_, i) => ({
+		start: new Date(new Date(startIso).getTime() + i * seconds * 1000),
+		seconds,
 		kwh
 	}));
+
+/** `hours` hourly readings of `kwh` each from `startIso`. */
+const hourly = (startIso: string, hours: number, kwh = 1): Interval[] =>
+	readingsFrom(startIso, hours, 3600, kwh);
 
 beforeAll(async () => {
 	owner = await makeUser(`owner-${tag}@example.org`, 'Usage owner');
@@ -75,11 +79,7 @@ describe('importing intervals', () => {
 
 	it('stores more intervals than one batch holds, in one go', async () => {
 		const site = await freshSite('Big');
-		const year = Array.from({ length: 12_000 }, (_, i) => ({
-			start: new Date(Date.UTC(2026, 0, 1, 6) + i * 900_000),
-			seconds: 900,
-			kwh: 0.25
-		}));
+		const year = readingsFrom('2026-01-01T06:00:00Z', 12_000, 900, 0.25);
 		expect((await importUsage(site, year, owner)).imported).toBe(12_000);
 		expect(await usageSummary(site.id)).toMatchObject({ intervals: 12_000, kwh: 3000 });
 	});
@@ -93,38 +93,21 @@ describe('importing intervals', () => {
 });
 
 describe('metered kWh in a billing period', () => {
-	it('sums the intervals that start on the period’s local dates, inclusive', async () => {
-		const site = await freshSite('Bill period');
-		// 1 kWh an hour from 00:00 CST on 1 January to 00:00 CST on 1 February 2026 (744 hours).
-		await importUsage(site, hourly('2026-01-01T06:00:00Z', 744), owner);
-		expect(await meteredKwh(site.id, '2026-01-05', '2026-01-11', site.timezone)).toEqual({
-			kwh: 168,
-			intervals: 168,
-			hoursCovered: 168,
-			hoursInPeriod: 168
-		});
-	});
-
-	it('reports how much of a period the readings cover', async () => {
-		const site = await freshSite('Partial');
-		await importUsage(site, hourly('2026-01-01T06:00:00Z', 36), owner);
-		expect(await meteredKwh(site.id, '2026-01-01', '2026-01-03', site.timezone)).toEqual({
-			kwh: 36,
-			intervals: 36,
-			hoursCovered: 36,
-			hoursInPeriod: 72
-		});
-	});
-
-	it('counts 23 hours in the day clocks spring forward (8 March 2026 in Chicago)', async () => {
-		const site = await freshSite('Spring');
-		// From 00:00 CST on 8 March (06:00Z) to 00:00 CDT on 9 March (05:00Z): 23 hours, US rules.
-		await importUsage(site, hourly('2026-03-08T06:00:00Z', 24), owner);
-		expect(await meteredKwh(site.id, '2026-03-08', '2026-03-08', site.timezone)).toEqual({
-			kwh: 23,
-			intervals: 23,
-			hoursCovered: 23,
-			hoursInPeriod: 23
+	// One kWh an hour from 00:00 Chicago time, so kWh, intervals and hours covered are one number. Spring: from
+	// 00:00 CST on 8 March (06:00Z) to 00:00 CDT on 9 March (05:00Z) is 23 hours, US rules.
+	it.each`
+		site             | from                      | hours  | first           | last            | kwh    | hoursInPeriod | what
+		${'Bill period'} | ${'2026-01-01T06:00:00Z'} | ${744} | ${'2026-01-05'} | ${'2026-01-11'} | ${168} | ${168}        | ${'sums the intervals that start on the period’s local dates, inclusive'}
+		${'Partial'}     | ${'2026-01-01T06:00:00Z'} | ${36}  | ${'2026-01-01'} | ${'2026-01-03'} | ${36}  | ${72}         | ${'reports how much of a period the readings cover'}
+		${'Spring'}      | ${'2026-03-08T06:00:00Z'} | ${24}  | ${'2026-03-08'} | ${'2026-03-08'} | ${23}  | ${23}         | ${'counts 23 hours in the day clocks spring forward (8 March 2026 in Chicago)'}
+	`('$what', async ({ site: name, from, hours, first, last, kwh, hoursInPeriod }) => {
+		const site = await freshSite(name);
+		await importUsage(site, hourly(from, hours), owner);
+		expect(await meteredKwh(site.id, first, last, site.timezone)).toEqual({
+			kwh,
+			intervals: kwh,
+			hoursCovered: kwh,
+			hoursInPeriod
 		});
 	});
 
@@ -166,11 +149,7 @@ describe('the daily load shape', () => {
 
 	it('reads 15-minute readings as kWh per hour, and leaves out daily readings', async () => {
 		const site = await freshSite('Quarter');
-		const quarters = Array.from({ length: 4 }, (_, i) => ({
-			start: new Date(Date.UTC(2026, 0, 12, 6) + i * 900_000),
-			seconds: 900,
-			kwh: 0.25
-		}));
+		const quarters = readingsFrom('2026-01-12T06:00:00Z', 4, 900, 0.25);
 		await importUsage(
 			site,
 			[...quarters, { start: new Date('2026-01-13T06:00:00Z'), seconds: 86_400, kwh: 50 }],

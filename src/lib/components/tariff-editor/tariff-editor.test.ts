@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { TariffInput } from '$lib/calc';
+import { tiered } from '$lib/calc/tariffs.fixture';
 import { blankEnergyCharge, blankSeason, blankTariff } from './tariff-blanks';
 import { numberDraft } from '$lib/components/fields/number-text';
 import {
@@ -49,15 +50,7 @@ describe('issues from the live check', () => {
 			energyCharges: [
 				blankEnergyCharge('flat'),
 				blankEnergyCharge('flat'),
-				{
-					label: 'Demo delivery',
-					type: 'tiered',
-					tiers: [
-						{ uptoKwh: 500, perKwh: 0.05 },
-						{ uptoKwh: 300, perKwh: 0.07 },
-						{ uptoKwh: null, perKwh: 0.09 }
-					]
-				}
+				tiered('Demo delivery', [500, 0.05], [300, 0.07], [null, 0.09])
 			]
 		};
 		expect(tariffIssues(tariff)).toEqual([

@@ -2,8 +2,35 @@
  * Invented comparisons for the workbook's tests: "Demo Valley Power", "Alder Creek hatchery" and
  * "Birchway school garden" are fictional, and so are all their rates and equipment.
  */
-import type { CompareRequestInput } from '$lib/calc';
+import type { CompareRequestInput, EquipmentInput } from '$lib/calc';
 import { TIERED_MINIMUM_TARIFF, TOU_DEMAND_TARIFF, pump } from './workbook-tariffs';
+
+type WindowsSchedule = Extract<EquipmentInput['schedule'], { type: 'windows' }>;
+
+/** The hatchery's 1.5 kW tank heater, run in the cold months only; both scenarios keep it. */
+const tankHeater = (dutyPercent: number, schedule: EquipmentInput['schedule']): EquipmentInput => ({
+	name: 'Tank heater',
+	category: 'heater',
+	power: { watts: 1500 },
+	dutyPercent,
+	months: [1, 2, 3, 11, 12],
+	schedule
+});
+
+/** The hatchery's four grow lights on one clock window; the scenarios differ in lamp and hours. */
+const growLights = (
+	watts: number,
+	standbyWatts: number,
+	window: WindowsSchedule['windows'][number],
+	days: WindowsSchedule['days']
+): EquipmentInput => ({
+	name: 'Grow lights',
+	category: 'lighting',
+	quantity: 4,
+	power: { watts },
+	standbyWatts,
+	schedule: { type: 'windows', windows: [window], days }
+});
 
 export function hatcheryRequest(more: Partial<CompareRequestInput> = {}): CompareRequestInput {
 	return {
@@ -25,22 +52,8 @@ export function hatcheryRequest(more: Partial<CompareRequestInput> = {}): Compar
 						lifeYears: 8,
 						maintenancePerYear: 60
 					},
-					{
-						name: 'Tank heater',
-						category: 'heater',
-						power: { watts: 1500 },
-						dutyPercent: 35,
-						months: [1, 2, 3, 11, 12],
-						schedule: { type: 'always' }
-					},
-					{
-						name: 'Grow lights',
-						category: 'lighting',
-						quantity: 4,
-						power: { watts: 95 },
-						standbyWatts: 1.5,
-						schedule: { type: 'windows', windows: [{ start: '06:00', end: '20:00' }], days: 'all' }
-					}
+					tankHeater(35, { type: 'always' }),
+					growLights(95, 1.5, { start: '06:00', end: '20:00' }, 'all')
 				]
 			},
 			{
@@ -58,22 +71,8 @@ export function hatcheryRequest(more: Partial<CompareRequestInput> = {}): Compar
 						lifeYears: 3,
 						maintenancePerYear: 25
 					},
-					{
-						name: 'Tank heater',
-						category: 'heater',
-						power: { watts: 1500 },
-						dutyPercent: 30,
-						months: [1, 2, 3, 11, 12],
-						schedule: { type: 'hours', hoursPerDay: 18, days: 'all' }
-					},
-					{
-						name: 'Grow lights',
-						category: 'lighting',
-						quantity: 4,
-						power: { watts: 60 },
-						standbyWatts: 1,
-						schedule: { type: 'windows', windows: [{ start: '20:00', end: '06:00' }], days: 'weekdays' }
-					},
+					tankHeater(30, { type: 'hours', hoursPerDay: 18, days: 'all' }),
+					growLights(60, 1, { start: '20:00', end: '06:00' }, 'weekdays'),
 					{
 						name: 'UV steriliser',
 						category: 'uv',

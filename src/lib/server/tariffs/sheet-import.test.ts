@@ -1,6 +1,7 @@
 import ExcelJS from 'exceljs';
 import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
+import { tiered } from '$lib/calc/tariffs.fixture';
 import { MAX_SHEET_ROWS, TARIFF_SHEET_COLUMNS } from './sheet-columns';
 import { describeRowError, parseTariffSheet } from './sheet-import';
 import { tariffSheetTemplateCsv } from './sheet-template';
@@ -28,7 +29,12 @@ const TIER_HEADER = [
 const encode = (text: string) => new TextEncoder().encode(text);
 const csv = (rows: Record<string, string>[], header = HEADER) =>
 	encode(Papa.unparse({ fields: header, data: rows.map((row) => header.map((name) => row[name] ?? '')) }));
-const tiered = (tiers: Record<string, string>) => ({ ...FLAT, name: 'Tiered', energy_per_kwh: '', ...tiers });
+const tieredRow = (tiers: Record<string, string>) => ({
+	...FLAT,
+	name: 'Tiered',
+	energy_per_kwh: '',
+	...tiers
+});
 const parseCsv = (rows: Record<string, string>[], header = HEADER) =>
 	parseTariffSheet(csv(rows, header), 'csv');
 
@@ -49,15 +55,7 @@ describe('a CSV of flat and tiered tariffs', () => {
 			taxes: [{ label: 'Franchise tax', percent: 3 }]
 		});
 		expect(tiers?.structure.energyCharges).toEqual([
-			{
-				label: 'Energy',
-				type: 'tiered',
-				tiers: [
-					{ uptoKwh: 500, perKwh: 0.098 },
-					{ uptoKwh: 1000, perKwh: 0.128 },
-					{ uptoKwh: null, perKwh: 0.162 }
-				]
-			}
+			tiered('Energy', [500, 0.098], [1000, 0.128], [null, 0.162])
 		]);
 		expect(tiers?.structure.fixedCharges).toEqual([{ label: 'Customer charge', perDay: 0.4 }]);
 		expect(tiers?.structure.minimumMonthly).toBe(18);
@@ -236,13 +234,13 @@ describe('tiers out of order', () => {
 			{ field: 'tier1_upto_kwh', message: 'Tier 1 up to kWh is required: only the last tier is open-ended' }
 		]
 	])('reports %s at the tier’s column', async (_, tiers, expected) => {
-		const result = await parseCsv([tiered(tiers)], TIER_HEADER);
+		const result = await parseCsv([tieredRow(tiers)], TIER_HEADER);
 		expect(result.rows).toEqual([]);
 		expect(result.errors).toEqual([{ line: 2, ...expected }]);
 	});
 
 	it('asks for the rate of a tier that only has an end', async () => {
-		const result = await parseCsv([tiered({ tier1_upto_kwh: '500', tier2_per_kwh: '0.2' })], TIER_HEADER);
+		const result = await parseCsv([tieredRow({ tier1_upto_kwh: '500', tier2_per_kwh: '0.2' })], TIER_HEADER);
 		expect(result.errors).toEqual([
 			{ line: 2, field: 'tier1_per_kwh', message: 'Tier 1 per kWh is required' }
 		]);
