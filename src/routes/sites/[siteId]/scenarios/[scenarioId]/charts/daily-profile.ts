@@ -1,4 +1,13 @@
-import { dayProfile, EQUIPMENT_CATEGORIES, type EquipmentInput, equipmentSchema, INTERVAL_HOURS, SLOTS_PER_DAY, STANDARD_DAY, unitWatts } from '$lib/calc';
+import {
+	dayProfile,
+	EQUIPMENT_CATEGORIES,
+	type EquipmentInput,
+	equipmentSchema,
+	INTERVAL_HOURS,
+	SLOTS_PER_DAY,
+	STANDARD_DAY,
+	unitWatts
+} from '$lib/calc';
 import type { Category } from '$lib/components/charts/chart-style';
 
 /**

@@ -1,4 +1,10 @@
-import { type FlowUnit, type Fluid, METERS_PER_FOOT, type PumpingResponse, type RequestIssue } from '$lib/calc';
+import {
+	type FlowUnit,
+	type Fluid,
+	METERS_PER_FOOT,
+	type PumpingResponse,
+	type RequestIssue
+} from '$lib/calc';
 
 /**
  * The pumping helper's form as typed, the request it posts to /api/v1/pumping, and the answer read
