@@ -16,6 +16,7 @@ import {
 	workspaces
 } from '../src/lib/server/db/schema';
 import type { DeviceSpec } from '../src/lib/server/db/schema';
+import type { OneOffCost } from '../src/lib/calc';
 
 type DemoPeople = {
 	password: string;
@@ -43,6 +44,8 @@ type DemoSites = {
 			name: string;
 			description: string;
 			isBaseline: boolean;
+			status: 'installed' | 'proposed';
+			oneOffCosts: OneOffCost[];
 			devices: DeviceSpec[];
 		}[];
 		/** Invented bills, entered with the site. */

@@ -127,3 +127,70 @@ describe('validation of a comparison', () => {
 		expect(own.scenarios[0]?.annualCost).toBe(1752);
 	});
 });
+
+describe('installed against proposed (issue 17)', () => {
+	// The retrofit of the issue: a 1.5 kW pump always on, already installed, against a proposal of a
+	// 90 W pump and two 60 W air pumps bought for $800 in all, saving $1,083.32 a year. The flat rate is
+	// derived so that the savings are exactly that: 1083.32 ÷ ((1500 − 210) W × 8.76 kWh per W-year).
+	// Simple payback by its definition (extra capital ÷ yearly savings; any engineering-economics
+	// text): 800 ÷ 1083.32 ≈ 0.74 years.
+	const rate = 1083.32 / ((1500 - 210) * 8.76);
+	const retrofit = (baselineStatus: 'installed' | 'proposed') =>
+		compare(
+			compareRequestSchema.parse({
+				...input,
+				tariff: flatTariff(rate),
+				scenarios: [
+					{
+						name: 'Pump installed now',
+						status: baselineStatus,
+						equipment: [device({ power: { watts: 1500 }, purchaseCost: 650, installCost: 150, lifeYears: 8 })]
+					},
+					{
+						name: 'Small pump and air pumps',
+						status: 'proposed',
+						equipment: [
+							device({ power: { watts: 90 }, purchaseCost: 500, installCost: 60 }),
+							device({ name: 'Air pump', quantity: 2, power: { watts: 60 }, purchaseCost: 120 })
+						]
+					}
+				]
+			})
+		);
+
+	it('counts nothing in year 0 for what is installed, so the retrofit pays back in about 0.74 years', () => {
+		const [installed, proposal] = retrofit('installed').scenarios;
+		expect(installed?.status).toBe('installed');
+		expect(installed?.capitalCost).toBe(0);
+		expect(installed?.cashFlows[0]).toBe(0);
+		expect(proposal?.capitalCost).toBe(800);
+		expect(proposal?.savingsPerYear).toBeCloseTo(1083.32, 1);
+		expect(proposal?.simplePaybackYears).toBeCloseTo(800 / 1083.32, 2);
+		expect(proposal?.simplePaybackYears).toBeCloseTo(0.74, 2);
+	});
+
+	it('still buys an installed device again when its life ends within the horizon', () => {
+		const [installed] = retrofit('installed').scenarios;
+		const energy = installed?.annualCost ?? 0;
+		expect(installed?.cashFlows[8]).toBeCloseTo(energy * 1.03 ** 7 + 650, 6);
+	});
+
+	it('priced as a new purchase, the same pump would make the retrofit pay back at once', () => {
+		const [, proposal] = retrofit('proposed').scenarios;
+		expect(proposal?.simplePaybackYears).toBe(0);
+	});
+
+	it('adds an installed scenario’s one-off costs to its year 0', () => {
+		const parsed = compareRequestSchema.parse({
+			...input,
+			scenarios: [
+				{
+					...input.scenarios[0],
+					status: 'installed',
+					oneOffCosts: [{ label: 'Electrician’s visit', amount: 120, note: 'Check the circuit' }]
+				}
+			]
+		});
+		expect(compare(parsed).scenarios[0]?.capitalCost).toBe(120);
+	});
+});

@@ -8,7 +8,7 @@ import type { CompareResponse } from './types';
  * Scenarios side by side over 12 calendar months: each is calculated on its own tariff (or the
  * request's), then costed over the finance horizon. Savings are the baseline's annual cost minus the
  * scenario's; simple payback is the extra capital over the baseline divided by the savings (null when
- * nothing is saved); lifecycle cost is the present value of the cash flows, year 0 undiscounted.
+ * nothing is saved), where an installed scenario's capital is only its one-off costs; lifecycle cost is the present value of the cash flows, year 0 undiscounted.
  * Money from the bills is in cents; the finance figures are left unrounded for the UI to round.
  */
 export function compare(request: CompareRequest): CompareResponse {
@@ -20,7 +20,11 @@ export function compare(request: CompareRequest): CompareResponse {
 			tariff: scenario.tariff ?? request.tariff,
 			equipment: scenario.equipment
 		});
-		return { scenario, result, capital: capitalCost(scenario.equipment, scenario.oneOffCosts) };
+		return {
+			scenario,
+			result,
+			capital: capitalCost(scenario.equipment, scenario.oneOffCosts, scenario.status)
+		};
 	});
 	const baseline = runs[request.baseline] ?? runs[0];
 	return {
@@ -30,6 +34,7 @@ export function compare(request: CompareRequest): CompareResponse {
 			const savingsPerYear = roundMoney((baseline?.result.totals.cost ?? annualCost) - annualCost);
 			return {
 				name: scenario.name,
+				status: scenario.status,
 				annualKwh: result.totals.kwh,
 				annualCost,
 				capitalCost: capital,

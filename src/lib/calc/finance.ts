@@ -6,15 +6,23 @@ export interface Finance {
 	escalationPercent: number;
 }
 
-/** Capital cost: Σ quantity × (purchase + install) over the devices, plus the one-off costs. */
+/**
+ * Capital cost, paid in year 0. A proposal buys its equipment now: Σ quantity × (purchase + install)
+ * over the devices, plus the one-off costs. What is installed is already paid for: only its one-off
+ * costs count now, and its devices are bought again only when their life ends within the horizon.
+ */
 export function capitalCost(
 	equipment: readonly Equipment[],
-	oneOffCosts: ReadonlyArray<{ amount: number }>
+	oneOffCosts: ReadonlyArray<{ amount: number }>,
+	status: 'installed' | 'proposed' = 'proposed'
 ): number {
-	const devices = equipment.reduce(
-		(sum, device) => sum + device.quantity * (device.purchaseCost + device.installCost),
-		0
-	);
+	const devices =
+		status === 'installed'
+			? 0
+			: equipment.reduce(
+					(sum, device) => sum + device.quantity * (device.purchaseCost + device.installCost),
+					0
+				);
 	return devices + oneOffCosts.reduce((sum, cost) => sum + cost.amount, 0);
 }
 

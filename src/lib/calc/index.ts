@@ -20,14 +20,21 @@ export { unitWatts } from './power';
 export { FLOW_UNITS, LENGTH_UNITS } from './units';
 export type { FlowUnit, Fluid, LengthUnit } from './units';
 
-export { calculateRequestSchema, compareRequestSchema } from './request.schema';
+export {
+	calculateRequestSchema,
+	compareRequestSchema,
+	oneOffCostSchema,
+	SCENARIO_STATUSES
+} from './request.schema';
 export { holidaysSchema, periodSchema, timezoneSchema } from './period.schema';
 export type {
 	CalculateRequest,
 	CalculateRequestInput,
 	CompareRequest,
 	CompareRequestInput,
-	Scenario
+	OneOffCost,
+	Scenario,
+	ScenarioStatus
 } from './request.schema';
 export type { Period } from './period.schema';
 export { EQUIPMENT_CATEGORIES, equipmentSchema, powerSchema, scheduleSchema } from './equipment.schema';

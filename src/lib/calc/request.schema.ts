@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { equipmentSchema } from './equipment.schema';
-import { amount, list, record, text } from './fields';
+import { amount, choice, list, record, text } from './fields';
 import { holidaysSchema, periodSchema, timezoneSchema } from './period.schema';
 import { tariffSchema } from './tariff.schema';
 
@@ -17,17 +17,23 @@ export const calculateRequestSchema = record('Request', {
 	equipment: list('Equipment', equipmentSchema, { max: 2000 })
 });
 
+/** What a scenario's equipment is: already installed and paid for, or proposed and bought now. */
+export const SCENARIO_STATUSES = ['installed', 'proposed'] as const;
+export type ScenarioStatus = (typeof SCENARIO_STATUSES)[number];
+
+/** A cost paid once when a scenario is carried out: a trench, an outdoor circuit, an electrician's visit. */
+export const oneOffCostSchema = record('One-off cost', {
+	label: text('Label', 80),
+	amount: amount('Amount', { min: -1_000_000_000, max: 1_000_000_000 }),
+	note: text('Note', 500).optional()
+});
+export type OneOffCost = z.output<typeof oneOffCostSchema>;
+
 const scenarioSchema = record('Scenario', {
 	name: text('Name', 120),
+	status: choice('Status', SCENARIO_STATUSES).default('proposed'),
 	equipment: list('Equipment', equipmentSchema, { max: 2000 }),
-	oneOffCosts: list(
-		'One-off costs',
-		record('One-off cost', {
-			label: text('Label', 80),
-			amount: amount('Amount', { min: -1_000_000_000, max: 1_000_000_000 })
-		}),
-		{ max: 50 }
-	).default([]),
+	oneOffCosts: list('One-off costs', oneOffCostSchema, { max: 50 }).default([]),
 	tariff: tariffSchema.optional()
 });
 

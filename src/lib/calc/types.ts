@@ -41,6 +41,8 @@ export interface CalculateResponse {
 
 export interface ScenarioResult {
 	name: string;
+	/** Installed (already paid for) or proposed (bought now): decides what year 0's capital holds. */
+	status: 'installed' | 'proposed';
 	annualKwh: number;
 	annualCost: number;
 	capitalCost: number;

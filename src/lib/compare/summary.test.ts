@@ -6,6 +6,7 @@ import type { ComparisonReport } from './types';
 // Invented figures, chosen so the sentences can be checked by hand.
 const scenario = (name: string, r: Partial<ScenarioResult>): ScenarioResult => ({
 	name,
+	status: 'proposed',
 	annualKwh: 0,
 	annualCost: 0,
 	capitalCost: 0,

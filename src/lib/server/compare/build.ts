@@ -121,7 +121,9 @@ export async function buildComparison(event: RequestEvent, query: ComparisonQuer
 		tariff: base.tariff,
 		scenarios: loaded.map((l, i) => ({
 			name: label(l, i),
+			status: l.scenario.status,
 			equipment: l.specs.map(equipmentOf),
+			oneOffCosts: l.scenario.oneOffCosts,
 			tariff: l.tariff
 		})),
 		baseline,

@@ -51,7 +51,7 @@ export async function createSite(workspaceId: string, input: SiteInput, actor: A
 			.returning({ id: sites.id });
 		const [baseline] = await tx
 			.insert(scenarios)
-			.values({ siteId: site!.id, name: 'What is installed now', isBaseline: true })
+			.values({ siteId: site!.id, name: 'What is installed now', isBaseline: true, status: 'installed' })
 			.returning({ id: scenarios.id });
 		await audit(tx, actor, {
 			workspaceId,

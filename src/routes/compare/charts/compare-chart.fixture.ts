@@ -30,6 +30,7 @@ function scenarioResult(name: string, cashFlows: number[], periods: PeriodResult
 	const annualCost = periods.reduce((sum, p) => sum + p.total, 0);
 	return {
 		name,
+		status: 'proposed',
 		annualKwh: 0,
 		annualCost,
 		capitalCost: cashFlows[0] ?? 0,

@@ -11,7 +11,7 @@ import {
 	uuid
 } from 'drizzle-orm/pg-core';
 import { belongsTo, createdAt, updatedAt, uuidId } from './columns';
-import type { EquipmentInput } from '$lib/calc';
+import type { EquipmentInput, OneOffCost } from '$lib/calc';
 import { belongsToUser, users } from './auth';
 import { tariffs } from './tariff';
 import { workspaces } from './workspace';
@@ -50,6 +50,12 @@ export const scenarios = pgTable(
 		name: text('name').notNull(),
 		description: text('description'),
 		isBaseline: boolean('is_baseline').notNull().default(false),
+		/** Installed (already paid for) or proposed (bought now): see the core's capitalCost. */
+		status: text('status', { enum: ['installed', 'proposed'] })
+			.notNull()
+			.default('proposed'),
+		/** Costs paid once when the scenario is carried out: a trench, an outdoor circuit, a visit. */
+		oneOffCosts: jsonb('one_off_costs').$type<OneOffCost[]>().notNull().default([]),
 		tariffId: uuid('tariff_id').references(() => tariffs.id, { onDelete: 'set null' }),
 		tariffVersion: integer('tariff_version'),
 		position: integer('position').notNull().default(0),
