@@ -1,5 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { powerEcho, powerForm, switchPower, toggleMonth, typedWatts } from './device-fields';
+import {
+	editorVolts,
+	powerEcho,
+	powerForm,
+	switchPower,
+	toggleMonth,
+	typedWatts
+} from './device-fields';
 
 // Power figures follow P = V × I × PF (single phase) and P = √3 × V × I × PF (balanced three phase,
 // line-to-line volts), the usual handbook power formulas; the figures are invented examples.
@@ -65,5 +72,29 @@ describe('active months', () => {
 
 	it('keeps an empty list, for the schema to refuse', () => {
 		expect(toggleMonth([5], 5)).toEqual([]);
+	});
+});
+
+describe('the voltage the editor works at', () => {
+	it('is the site supply voltage when the site gives one', () => {
+		expect(editorVolts(240)).toBe(240);
+		expect(editorVolts(230)).toBe(230);
+	});
+
+	it('is 120 V only when the site has none (North American receptacles, common practice)', () => {
+		expect(editorVolts(null)).toBe(120);
+		expect(editorVolts(undefined)).toBe(120);
+		expect(editorVolts(0)).toBe(120);
+	});
+
+	it('gives a 240 V site a new 180 W device as 0.75 A at 240 V, and switches it to 240 V', () => {
+		const volts = editorVolts(240);
+		expect(powerEcho({ watts: 180 }, volts)).toBe('0.75 A at 240 V');
+		expect(switchPower({ watts: 180 }, 'amps', volts)).toEqual({
+			amps: 0.75,
+			volts: 240,
+			powerFactor: 1,
+			phases: 1
+		});
 	});
 });

@@ -43,11 +43,24 @@ export function typedWatts(power: unknown): number | undefined {
 /** A figure with up to `digits` decimals and thousands separators (one cached formatter per precision). */
 export { figure };
 
+/** The voltage assumed where a site gives none: 120 V receptacles (North American common practice). */
+export const FALLBACK_VOLTS = 120;
+
+/**
+ * The voltage the equipment editor works at: the site's supply voltage (a 240 V site's amps echo and a
+ * switched power entry use 240 V), or 120 V only when the site has none.
+ */
+export function editorVolts(supplyVolts: number | null | undefined): number {
+	return typeof supplyVolts === 'number' && Number.isFinite(supplyVolts) && supplyVolts > 0
+		? supplyVolts
+		: FALLBACK_VOLTS;
+}
+
 /**
  * The other form of a power, as it is computed: "≈ 108 W" beside amps × volts, "0.83 A at 120 V"
  * beside watts (at the site's supply voltage, single phase, power factor 1). Empty while incomplete.
  */
-export function powerEcho(power: unknown, supplyVolts = 120): string {
+export function powerEcho(power: unknown, supplyVolts = FALLBACK_VOLTS): string {
 	const watts = typedWatts(power);
 	if (watts === undefined) return '';
 	if (powerForm(power) === 'amps') return `≈ ${figure(watts, watts < 10 ? 1 : 0)} W`;
@@ -58,7 +71,7 @@ export function powerEcho(power: unknown, supplyVolts = 120): string {
  * The same device's power in the other form, so switching forms keeps what was typed: watts become
  * amps at the supply voltage (power factor 1, single phase); amps × volts become their watts.
  */
-export function switchPower(power: unknown, form: PowerForm, supplyVolts = 120): PowerInput {
+export function switchPower(power: unknown, form: PowerForm, supplyVolts = FALLBACK_VOLTS): PowerInput {
 	const watts = typedWatts(power);
 	if (form === 'watts') return { watts: watts === undefined ? 0 : round(watts, 1) };
 	const amps = watts === undefined ? 0 : round(watts / supplyVolts, 2);
