@@ -1,5 +1,8 @@
 import { money } from '$lib/text/numbers';
-import { MONTH_NAMES, figure, powerForm, powerEcho } from './device-fields';
+import { monthsText as monthRuns } from '$lib/text/tariff';
+import { figure, powerForm, powerEcho } from './device-fields';
+import type { DeviceSpec } from './equipment-table';
+import { scheduleSummary } from './schedule-strip';
 
 // Words and figures for a device as a viewer sees it, and for the live share of each row.
 
@@ -27,9 +30,34 @@ export function powerText(power: unknown): string {
 	return `${parts.join(', ')}${echo ? ` (${echo})` : ''}`;
 }
 
-/** Active months in words: "All year", or "Jan, Feb, Dec". */
+/** Active months in words: "All year", or runs of the calendar ("May–November", "December–February"). */
 export function monthsText(months: readonly number[] | undefined): string {
 	if (!months) return 'All year';
-	if (months.length === 0) return 'None';
-	return months.map((month) => MONTH_NAMES[month - 1]?.slice(0, 3) ?? String(month)).join(', ');
+	const words = monthRuns(months);
+	return words.charAt(0).toUpperCase() + words.slice(1);
+}
+
+/** The duty cycle as typed, when it is a figure below 100 %; anything else (empty, half typed) is full time. */
+function dutyBelowFull(dutyPercent: unknown): number | null {
+	return typeof dutyPercent === 'number' && Number.isFinite(dutyPercent) && dutyPercent >= 0 && dutyPercent < 100
+		? dutyPercent
+		: null;
+}
+
+/**
+ * How a device runs, in the words of its row: the schedule, the duty cycle and the active months
+ * together, so a heater on at 35 % duty from May to November reads "35 % of the time, May–November",
+ * never "Always on". An always-on schedule at part duty is the share of the time; other schedules add
+ * "at 35 % duty"; a month limit comes last.
+ */
+export function runningText(spec: Pick<DeviceSpec, 'schedule' | 'dutyPercent' | 'months'>): string {
+	const duty = dutyBelowFull(spec.dutyPercent);
+	const always = spec.schedule?.type === 'always';
+	const parts = [
+		always && duty !== null ? `${figure(duty, 1)} % of the time` : scheduleSummary(spec.schedule)
+	];
+	if (!always && duty !== null) parts.push(`at ${figure(duty, 1)} % duty`);
+	const months = spec.months ? monthRuns(spec.months) : 'all year';
+	if (months !== 'all year') parts.push(months);
+	return parts.join(', ');
 }
