@@ -11,6 +11,14 @@ export function kwhText(kwh: number): string {
 	return figure(kwh, Math.abs(kwh) < 100 ? 1 : 0);
 }
 
+/**
+ * The month a row's figures are in: "an average month (730 h)", a twelfth of the year, so it is not
+ * taken for a calendar month (a 31-day month has 744 h).
+ */
+export function averageMonthWords(monthHours = 730): string {
+	return `an average month (${figure(monthHours, 0)} h)`;
+}
+
 /** A money formatter for a currency code; a code the browser does not know falls back to plain figures. */
 export function moneyFormat(currency: string): (amount: number) => string {
 	return (amount) => money(amount, currency);
