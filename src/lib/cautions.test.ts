@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { hasMainsInWater, hasOutdoorCircuit, needsElectricalCaution } from './cautions';
+import { asksInWater, hasMainsInWater, hasOutdoorCircuit, needsElectricalCaution } from './cautions';
 
 // Common practice, cited from memory: ground-fault protection (GFCI, US NEC 210.8; RCD, IEC
 // 60364-7-702) for mains equipment in or near water and for outdoor receptacles and circuits.
@@ -34,5 +34,21 @@ describe('electrical cautions (common practice: GFCI/RCD near water and outdoors
 		expect(needsElectricalCaution([{ category: 'lighting' }, inWaterPump])).toBe(true);
 		expect(needsElectricalCaution([{ category: 'lighting', inWater: true }])).toBe(false);
 		expect(needsElectricalCaution([])).toBe(false);
+	});
+});
+
+describe('the in-water question in an equipment row (common practice, no source)', () => {
+	it('is asked of the kinds of device that usually sit in the water on mains power', () => {
+		for (const category of ['water-pump', 'heater', 'uv', 'chiller']) expect(asksInWater(category)).toBe(true);
+	});
+
+	it('is not asked of devices that stay out of the water', () => {
+		for (const category of ['air-pump', 'lighting', 'fan', 'controls', undefined])
+			expect(asksInWater(category)).toBe(false);
+	});
+
+	it('turns the caution on at once when the answer is yes, and not for no', () => {
+		expect(needsElectricalCaution([{ category: 'water-pump', inWater: true }])).toBe(true);
+		expect(needsElectricalCaution([{ category: 'water-pump', inWater: false }])).toBe(false);
 	});
 });

@@ -8,6 +8,11 @@
 /** Categories that are usually mains-powered equipment in the water itself (common practice, no source). */
 export const IN_WATER_CATEGORIES = new Set(['water-pump', 'heater', 'uv', 'chiller']);
 
+/** Whether the equipment editor asks "Is it in the water?" in the row itself for a device of this category. */
+export function asksInWater(category: string | undefined): boolean {
+	return IN_WATER_CATEGORIES.has(category ?? '');
+}
+
 type Flagged = { category?: string; inWater?: boolean; outdoor?: boolean };
 
 /** True when a device marked as in water is one that usually sits in it on mains power (pump, heater, UV, chiller). */
