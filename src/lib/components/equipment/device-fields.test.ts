@@ -1,12 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import {
-	editorVolts,
-	powerEcho,
-	powerForm,
-	switchPower,
-	toggleMonth,
-	typedWatts
-} from './device-fields';
+import { editorVolts, powerEcho, powerForm, switchPower, toggleMonth, typedWatts } from './device-fields';
 
 // Power figures follow P = V × I × PF (single phase) and P = √3 × V × I × PF (balanced three phase,
 // line-to-line volts), the usual handbook power formulas; the figures are invented examples.

@@ -47,7 +47,10 @@ export function monthsText(months: readonly number[] | undefined): string {
 
 /** The duty cycle as typed, when it is a figure below 100 %; anything else (empty, half typed) is full time. */
 function dutyBelowFull(dutyPercent: unknown): number | null {
-	return typeof dutyPercent === 'number' && Number.isFinite(dutyPercent) && dutyPercent >= 0 && dutyPercent < 100
+	return typeof dutyPercent === 'number' &&
+		Number.isFinite(dutyPercent) &&
+		dutyPercent >= 0 &&
+		dutyPercent < 100
 		? dutyPercent
 		: null;
 }

@@ -4,10 +4,11 @@ import { blankDevice } from './equipment-table';
 import {
 	type ScheduleInput,
 	SCHEDULE_KINDS,
-	cellOpacity,
+	cellFill,
 	quarterHours,
 	scheduleSummary,
 	stripDay,
+	stripLegend,
 	stripSegments,
 	switchSchedule
 } from './schedule-strip';
@@ -135,10 +136,57 @@ describe('drawing the strip', () => {
 });
 
 describe('shading and words', () => {
-	it('keeps a thin spread visible and leaves off cells empty', () => {
-		expect(cellOpacity(0)).toBe(0);
-		expect(cellOpacity(0.01)).toBeGreaterThanOrEqual(0.15);
-		expect(cellOpacity(1)).toBe(1);
+	it('leaves off cells empty, fills whole-time cells and hatches part-time ones with a visible share', () => {
+		expect(cellFill(0)).toEqual({ kind: 'off', heightPercent: 0 });
+		expect(cellFill(1)).toEqual({ kind: 'on', heightPercent: 100 });
+		expect(cellFill(0.5)).toEqual({ kind: 'part', heightPercent: 50 });
+		expect(cellFill(1 / 24)).toEqual({ kind: 'part', heightPercent: 15 });
+		expect(cellFill(Number.NaN).kind).toBe('off');
+	});
+
+	it('draws triggered runs as a running share, not as off, and says it in words', () => {
+		// 4 runs of 15 min spread over 24 h: 60 of 1,440 min, 2.5 min of each hour.
+		const schedule: ScheduleInput = { type: 'runs', runsPerDay: 4, minutesPerRun: 15, days: 'all' };
+		const day = stripDay(schedule);
+		expect(stripSegments(day.cells).map((segment) => cellFill(segment.fraction).kind)).toEqual(['part']);
+		expect(stripLegend(schedule, day)).toBe('Runs when triggered, about 2.5 min an hour');
+	});
+
+	it('gives runs inside a window their minutes of the window’s hours', () => {
+		// 4 runs of 15 min inside 06:00–08:00: 60 of 120 min, 30 min an hour.
+		const schedule: ScheduleInput = {
+			type: 'runs',
+			runsPerDay: 4,
+			minutesPerRun: 15,
+			windows: [{ start: '06:00', end: '08:00' }],
+			days: 'all'
+		};
+		expect(stripLegend(schedule, stripDay(schedule))).toBe('Runs when triggered, about 30 min an hour');
+	});
+
+	it('says the share of a cycle or of hours spread over the day', () => {
+		const cycle: ScheduleInput = { type: 'cycle', onMinutes: 15, offMinutes: 45, days: 'all' };
+		expect(stripLegend(cycle, stripDay(cycle))).toBe('Runs part of each hour, about 15 min an hour');
+		const hours: ScheduleInput = { type: 'hours', hoursPerDay: 8, days: 'all' };
+		expect(stripLegend(hours, stripDay(hours))).toBe('Runs part of each hour, about 20 min an hour');
+	});
+
+	it('scales the day by a duty cycle below 100 %: a heater always on at 35 % duty', () => {
+		const day = stripDay({ type: 'always' }, 35);
+		expect(new Set(day.cells)).toEqual(new Set([0.35]));
+		expect(stripLegend({ type: 'always' }, day)).toBe('Runs part of each hour, about 21 min an hour');
+		expect(stripDay({ type: 'always' }, 100).cells.every((fraction) => fraction === 1)).toBe(true);
+		expect(stripDay({ type: 'always' }, undefined).cells.every((fraction) => fraction === 1)).toBe(true);
+	});
+
+	it('has no legend for a day drawn solid or empty', () => {
+		expect(stripLegend({ type: 'always' }, stripDay({ type: 'always' }))).toBeNull();
+		const windows: ScheduleInput = {
+			type: 'windows',
+			windows: [{ start: '06:00', end: '18:00' }],
+			days: 'all'
+		};
+		expect(stripLegend(windows, stripDay(windows))).toBeNull();
 	});
 
 	it.each<[ScheduleInput, string]>([

@@ -34,8 +34,20 @@ const windowsOf = (schedule: object): WindowInput[] | undefined =>
  * The strip for a schedule, by the core's rules on an ordinary 24-hour day: always on; hours a day
  * spread evenly over the whole day; windows on inside them (22:00–06:00 lights both ends); a cycle on
  * for on/(on+off) of each quarter hour inside its windows; runs spread evenly over their windows.
+ * A duty cycle below 100 % scales every quarter hour: a heater always on at 35 % duty draws power
+ * 35 % of each quarter hour.
  */
-export function stripDay(schedule: ScheduleInput | undefined): StripDay {
+export function stripDay(schedule: ScheduleInput | undefined, dutyPercent?: unknown): StripDay {
+	const day = scheduleDay(schedule);
+	const duty =
+		typeof dutyPercent === 'number' && Number.isFinite(dutyPercent) && dutyPercent >= 0 && dutyPercent < 100
+			? dutyPercent / 100
+			: 1;
+	if (duty === 1) return day;
+	return { cells: day.cells.map((fraction) => fraction * duty), spread: true };
+}
+
+function scheduleDay(schedule: ScheduleInput | undefined): StripDay {
 	const blank = (fraction: number, mask?: Uint8Array): number[] =>
 		Array.from({ length: SLOTS_PER_DAY }, (_, i) => (mask ? (mask[i] ?? 0) : 1) * fraction);
 	if (!schedule || typeof schedule !== 'object') return { cells: blank(0), spread: false };
@@ -64,9 +76,29 @@ export function stripDay(schedule: ScheduleInput | undefined): StripDay {
 	}
 }
 
-/** How strongly a cell is shaded: nothing when off, and a thin spread still visible (at least 0.15). */
-export function cellOpacity(fraction: number): number {
-	return fraction <= 0 ? 0 : 0.15 + 0.85 * Math.min(1, fraction);
+/**
+ * How a run of quarter hours is drawn: nothing when off, solid when on the whole time, and when on part
+ * of the time (a triggered run, a cycle, hours spread over the day, a duty cycle) hatched across the
+ * span with a solid fill rising to the share of the time it runs, never thinner than a visible sliver.
+ */
+export function cellFill(fraction: number): { kind: 'off' | 'on' | 'part'; heightPercent: number } {
+	if (!(fraction > 0)) return { kind: 'off', heightPercent: 0 };
+	if (fraction >= 1) return { kind: 'on', heightPercent: 100 };
+	return { kind: 'part', heightPercent: Math.max(15, Math.round(fraction * 100)) };
+}
+
+/**
+ * The words for a hatched strip, a text equivalent of its share: "runs when triggered, about 2.5 min an
+ * hour" (4 runs of 15 min spread over the day), "runs part of each hour, about 15 min an hour". The
+ * minutes are those of the hours it may run (its windows); null when nothing is drawn hatched.
+ */
+export function stripLegend(schedule: ScheduleInput | undefined, day: StripDay): string | null {
+	const part = day.cells.filter((fraction) => fraction > 0 && fraction < 1);
+	if (!part.length) return null;
+	const minutes = Math.max(...part) * 60;
+	const about = `about ${minutes < 10 ? Math.round(minutes * 10) / 10 : Math.round(minutes)} min an hour`;
+	const triggered = schedule?.type === 'runs';
+	return `${triggered ? 'Runs when triggered' : 'Runs part of each hour'}, ${about}`;
 }
 
 const DAY_WORDS: Record<DaysInput, string> = { all: '', weekdays: ', weekdays', weekends: ', weekends' };
