@@ -39,7 +39,8 @@ describe('electrical cautions (common practice: GFCI/RCD near water and outdoors
 
 describe('the in-water question in an equipment row (common practice, no source)', () => {
 	it('is asked of the kinds of device that usually sit in the water on mains power', () => {
-		for (const category of ['water-pump', 'heater', 'uv', 'chiller']) expect(asksInWater(category)).toBe(true);
+		for (const category of ['water-pump', 'heater', 'uv', 'chiller'])
+			expect(asksInWater(category)).toBe(true);
 	});
 
 	it('is not asked of devices that stay out of the water', () => {

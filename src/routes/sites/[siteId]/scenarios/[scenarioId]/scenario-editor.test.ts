@@ -11,7 +11,9 @@ function fakeResults() {
 		const watts = devices.map((d) => d.power.watts);
 		sent.push({ url, watts });
 		const cost = watts.reduce((sum, w) => sum + w, 0);
-		return new Response(JSON.stringify({ currency: 'USD', periods: [], totals: { kwh: 0, cost, peakKw: 0 } }));
+		return new Response(
+			JSON.stringify({ currency: 'USD', periods: [], totals: { kwh: 0, cost, peakKw: 0 } })
+		);
 	});
 	return { sent, fetch };
 }

@@ -3,13 +3,17 @@ import fc from 'fast-check';
 import {
 	type PumpingDraft,
 	blankDraft,
+	efficiencyProblem,
 	fieldIssues,
 	metersIn,
 	missingPumpFields,
 	numberDraft,
+	plausibilityNote,
 	pumpingRequest,
 	readAnswer,
-	usableWatts
+	speedText,
+	usableWatts,
+	useButtonText
 } from './pumping-panel';
 
 // Invented duty points for these tests only; no real pump or site.
@@ -202,5 +206,80 @@ describe('lengths in the chosen unit', () => {
 	it('gives metres in feet at 0.3048 m per foot (NIST SP 811, exact)', () => {
 		expect(metersIn(3.048, 'ft')).toBeCloseTo(10, 12);
 		expect(metersIn(3.048, 'm')).toBe(3.048);
+	});
+});
+
+describe('an efficiency typed as a fraction', () => {
+	it('refuses 0.3 (0.3 %) at its box, offers 30 % and asks nothing about the pump', () => {
+		const draft = filled({ efficiencyPercent: '0.3' });
+		expect(efficiencyProblem(draft)).toEqual({
+			message:
+				'Wire-to-water efficiency is in percent: 0.3 would be 0.3 %, far below any pump. Did you mean 30 %?',
+			meantPercent: '30'
+		});
+		expect(pumpingRequest(draft)).toBeNull();
+	});
+
+	it('still asks about the air part while the pump waits for its efficiency', () => {
+		expect(pumpingRequest(filled({ efficiencyPercent: '0.45', depth: '3' }))).toEqual({
+			fluid: 'fresh',
+			air: { depth: 3, depthUnit: 'ft' }
+		});
+		expect(efficiencyProblem(filled({ efficiencyPercent: '0.455' }))?.meantPercent).toBe('45.5');
+	});
+
+	it.each(['1', '25', '100', '0', '', 'abc'])(
+		'leaves %j to the API (1 % and up, or its own messages)',
+		(text) => {
+			expect(efficiencyProblem(filled({ efficiencyPercent: text }))).toBeNull();
+		}
+	);
+});
+
+describe('a result far beyond the list', () => {
+	// 0.3 taken as 0.3 % gave 5,078 W against a list whose largest device is 1,500 W (issue 17).
+	it('questions watts more than three times the largest device', () => {
+		expect(plausibilityNote(5078, [1500, 60, undefined])).toBe(
+			'That is about 3 times the largest device in this list (1,500 W). Check the flow and its unit, the head and the efficiency before using it.'
+		);
+	});
+
+	it('says nothing for watts in the range of the list, or for a list without watts', () => {
+		expect(plausibilityNote(4500, [1500])).toBeNull();
+		expect(plausibilityNote(51, [90, 60])).toBeNull();
+		expect(plausibilityNote(5078, [])).toBeNull();
+		expect(plausibilityNote(5078, [undefined, 0])).toBeNull();
+	});
+});
+
+describe('the water speed', () => {
+	// 1 ft = 0.3048 m exactly (NIST SP 811): 0.3048 m/s is 1 ft/s.
+	it('is in ft/s after US inputs', () => {
+		expect(speedText(0.3048, filled())).toBe('1 ft/s');
+	});
+
+	it('is in m/s after metric inputs', () => {
+		const metric = filled({
+			flowUnit: 'lpm',
+			staticLiftUnit: 'm',
+			pipeLengthUnit: 'm',
+			innerDiameterUnit: 'mm'
+		});
+		expect(speedText(1.234, metric)).toBe('1.23 m/s');
+	});
+
+	it('gives both when the inputs mix the two', () => {
+		expect(speedText(0.6096, filled({ innerDiameterUnit: 'mm' }))).toBe('0.61 m/s (2 ft/s)');
+	});
+});
+
+describe('putting the watts into a device', () => {
+	it('offers no button until a device is chosen, so no row gets them by default', () => {
+		expect(useButtonText(51, null)).toBeNull();
+	});
+
+	it('names the chosen device on the button', () => {
+		expect(useButtonText(50.8, { name: 'Small pump' })).toBe('Use 50.8 W for Small pump');
+		expect(useButtonText(312, { name: 'device 2' })).toBe('Use 312 W for device 2');
 	});
 });

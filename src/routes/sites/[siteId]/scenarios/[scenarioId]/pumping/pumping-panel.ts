@@ -5,6 +5,7 @@ import {
 	type PumpingResponse,
 	type RequestIssue
 } from '$lib/calc';
+import { figure } from '$lib/text/numbers';
 
 /**
  * The pumping helper's form as typed, the request it posts to /api/v1/pumping, and the answer read
@@ -87,10 +88,26 @@ export interface PumpingBody {
 	air?: Record<string, number | string>;
 }
 
+/**
+ * A wire-to-water efficiency typed as a fraction (0.3 for 30 %): the box is in percent, so 0.3 would
+ * mean 0.3 % and a hundred times the watts. Below 1 % the helper refuses it and offers the percent the
+ * person most likely meant; real pumps are far above 1 % (typical small pumps 20–50 %).
+ */
+export function efficiencyProblem(draft: PumpingDraft): { message: string; meantPercent: string } | null {
+	const typed = numberDraft(draft.efficiencyPercent);
+	if (typeof typed !== 'number' || typed <= 0 || typed >= 1) return null;
+	const meant = figure(typed * 100, 2).replaceAll(',', '');
+	return {
+		message: `Wire-to-water efficiency is in percent: ${figure(typed, 4)} would be ${figure(typed, 4)} %, far below any pump. Did you mean ${meant} %?`,
+		meantPercent: meant
+	};
+}
+
 /** The body to post, or null while neither the pump nor the air part is filled in enough to ask. */
 export function pumpingRequest(draft: PumpingDraft): PumpingBody | null {
 	const body: PumpingBody = { fluid: draft.fluid };
-	if (missingPumpFields(draft).length === 0) {
+	// An efficiency typed as a fraction is refused at its box before anything is asked.
+	if (missingPumpFields(draft).length === 0 && !efficiencyProblem(draft)) {
 		const pump: Record<string, number | string> = {};
 		for (const field of [...PUMP_FIELDS, 'hazenWilliamsC'] as const) {
 			const value = numberDraft(draft[field]);
@@ -163,4 +180,38 @@ export function usableWatts(inputWatts: number): number {
 /** A head or depth in metres, in the unit the person chose for the lift. */
 export function metersIn(meters: number, unit: LiftUnit): number {
 	return unit === 'ft' ? meters / METERS_PER_FOOT : meters;
+}
+
+/** A water speed in the unit system of the inputs: ft/s after US units only, m/s after metric only, both when mixed. */
+export function speedText(velocityMPerS: number, draft: PumpingDraft): string {
+	const units = [draft.flowUnit, draft.staticLiftUnit, draft.pipeLengthUnit, draft.innerDiameterUnit];
+	const us = units.filter((unit) => ['gpm', 'gph', 'ft', 'in'].includes(unit)).length;
+	const feet = `${figure(velocityMPerS / METERS_PER_FOOT, 2)} ft/s`;
+	const meters = `${figure(velocityMPerS, 2)} m/s`;
+	if (us === units.length) return feet;
+	if (us === 0) return meters;
+	return `${meters} (${feet})`;
+}
+
+/** How many times the largest device in the list a result may be before the helper questions it. */
+export const FAR_BEYOND_FACTOR = 3;
+
+/**
+ * A note when the watts worked out are far beyond every device in the list (more than three times the
+ * largest): most often a unit or an efficiency typed wrong. Null when plausible or the list has no watts.
+ */
+export function plausibilityNote(watts: number, listWatts: readonly (number | undefined)[]): string | null {
+	const known = listWatts.filter((w): w is number => typeof w === 'number' && Number.isFinite(w) && w > 0);
+	if (!known.length) return null;
+	const largest = Math.max(...known);
+	if (watts <= largest * FAR_BEYOND_FACTOR) return null;
+	return `That is about ${figure(watts / largest, 0)} times the largest device in this list (${figure(largest, 0)} W). Check the flow and its unit, the head and the efficiency before using it.`;
+}
+
+/**
+ * The words of the button that puts the watts into a device: it names the device the person chose,
+ * and there is no button (null) until they choose one, so no row is written by default.
+ */
+export function useButtonText(watts: number, target: { name: string } | null): string | null {
+	return target ? `Use ${figure(watts, 1)} W for ${target.name}` : null;
 }
