@@ -58,6 +58,8 @@ test('the equipment list on a 240 V site: voltage, in-water question, invalid en
 	await inWater.getByRole('radio', { name: 'Yes' }).check();
 	await expect(row.getByText(/Mains power in the water can kill/)).toBeVisible();
 	await expect(page.getByText('Electrical safety.')).toBeVisible();
+	await saving.click();
+	await expect(page.getByText('All changes saved')).toBeVisible();
 
 	// An invalid entry: marked at its field, the results say why, and nothing is sent that fails.
 	await watts.fill('-5');
@@ -69,11 +71,18 @@ test('the equipment list on a 240 V site: voltage, in-water question, invalid en
 	await expect(watts).not.toHaveAttribute('aria-invalid', 'true');
 	expect(failed).toEqual([]);
 
-	// 1,000 W against the saved 100 W costs more a year; back at 100 W (and dry) nothing is different.
+	// 1,000 W against the saved 100 W costs more a year; back at 100 W nothing changed and nothing shows.
 	await expect(page.getByText(/^\+\$[\d,.]+ a year against the saved list$/)).toBeVisible();
 	await watts.fill('100');
-	await inWater.getByRole('radio', { name: 'No' }).check();
-	await expect(page.getByText(/a year against the saved list/)).toHaveCount(0);
+	await expect(page.getByText('All changes saved')).toBeVisible();
+	await expect(page.getByText(/against the saved list/)).toHaveCount(0);
+
+	// Triggered runs are drawn as a running share, said in words; money fields name the currency.
+	await row.getByRole('button', { name: 'Details of Water pump' }).click();
+	await row.getByRole('combobox', { name: 'Runs' }).selectOption({ label: 'Triggered runs' });
+	await expect(row.getByText('Runs when triggered, about 2.5 min an hour').first()).toBeVisible();
+	await row.getByText(/per unit, in USD/).click();
+	await expect(row.getByRole('textbox', { name: 'Purchase' })).toBeVisible();
 });
 
 test('the pumping helper refuses 0.3 % and puts its watts only into the device named', async ({ page }) => {
