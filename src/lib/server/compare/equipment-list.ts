@@ -1,11 +1,6 @@
 import { type Equipment, type PeriodResult, unitWatts } from '$lib/calc';
 import type { ComparedDevice } from '$lib/compare/types';
-import { CATEGORY_NAMES } from '$lib/components/equipment/device-fields';
-import { activeMonthsText, scheduleText } from '$lib/server/exports/device-words';
-
-/** A category code in words ("water-pump" → "Water pump"); an unknown code is shown as it is. */
-export const categoryWords = (category: string | undefined): string =>
-	CATEGORY_NAMES[(category ?? 'other') as keyof typeof CATEGORY_NAMES] ?? category ?? 'Other';
+import { activeMonthsText, categoryWords, scheduleText } from '$lib/server/exports/device-words';
 
 /**
  * A scenario's equipment as the comparison's readers see it: what each device is, how much of it,
