@@ -46,7 +46,7 @@ interface Loaded {
 
 async function load(event: RequestEvent, id: string, firstDay: string): Promise<Loaded | string> {
 	// Unreadable, deleted or unknown scenarios are all "not found" (404), as everywhere else.
-	const { site, scenario } = await requireScenarioAccess(event, id, 'viewer');
+	const { site, scenario, viaGrant } = await requireScenarioAccess(event, id, 'viewer');
 	const resolved = await tariffFor(site, scenario);
 	if (!resolved.ok)
 		return resolved.reason === 'unavailable'
@@ -61,7 +61,8 @@ async function load(event: RequestEvent, id: string, firstDay: string): Promise<
 		(v) => v.id === version.id
 	);
 	return {
-		workspaceName: (await siteWorkspace(site))?.name ?? '',
+		// A guest of one site sees the site, not the workspace around it (as the site pages do).
+		workspaceName: viaGrant ? '' : ((await siteWorkspace(site))?.name ?? ''),
 		source: stored?.source ?? '',
 		checkedOn: stored?.checkedOn ?? '',
 		site,
