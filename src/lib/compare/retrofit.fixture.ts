@@ -36,8 +36,20 @@ export function retrofitRequest(more: Partial<CompareRequestInput> = {}): Compar
 				name: 'Small pump and air pumps',
 				status: 'proposed',
 				equipment: [
-					device({ name: 'Demo pump 90 W', category: 'water-pump', power: { watts: 90 }, purchaseCost: 500, installCost: 60 }),
-					device({ name: 'Air pump', category: 'air-pump', quantity: 2, power: { watts: 60 }, purchaseCost: 120 })
+					device({
+						name: 'Demo pump 90 W',
+						category: 'water-pump',
+						power: { watts: 90 },
+						purchaseCost: 500,
+						installCost: 60
+					}),
+					device({
+						name: 'Air pump',
+						category: 'air-pump',
+						quantity: 2,
+						power: { watts: 60 },
+						purchaseCost: 120
+					})
 				],
 				oneOffCosts: []
 			}

@@ -34,7 +34,9 @@ function statusSentences(report: ComparisonReport): string[] {
 		const oneOff = r.capitalCost;
 		return [
 			`“${name}” is what is installed now: it is already paid for, so its purchase and installation counts only ${
-				Math.abs(oneOff) < 0.5 ? 'its one-off costs (none)' : `its one-off costs of about ${money(oneOff, currency)}`
+				Math.abs(oneOff) < 0.5
+					? 'its one-off costs (none)'
+					: `its one-off costs of about ${money(oneOff, currency)}`
 			}, and its devices are bought again only when their life ends within the horizon.`
 		];
 	});

@@ -65,7 +65,13 @@ describe('the comparison and monthly CSV tables', () => {
 
 	it('leave the figures, negative differences from the baseline among them, as plain numbers', () => {
 		const [header = [], ...rows] = rowsOf(comparisonCsv(report));
-		const words = new Set(['status', 'simple_payback_note', 'co2_note', 'one_off_costs_items', 'description']);
+		const words = new Set([
+			'status',
+			'simple_payback_note',
+			'co2_note',
+			'one_off_costs_items',
+			'description'
+		]);
 		const numeric = header.flatMap((name, col) => (col >= 4 && !words.has(name) ? [col] : []));
 		const figures = rows.flatMap((row) => numeric.map((col) => row[col] ?? ''));
 		expect(figures.every((cell) => /^(-?\d+(\.\d+)?)?$/.test(cell))).toBe(true);
@@ -119,7 +125,9 @@ describe('the comparison CSV of issue 17’s retrofit', () => {
 
 	it('lists the one-off costs with their notes', () => {
 		const report = retrofitReport();
-		report.scenarios[1]!.oneOffCosts = [{ label: 'Electrician’s visit', amount: 120, note: 'Check the circuit' }];
+		report.scenarios[1]!.oneOffCosts = [
+			{ label: 'Electrician’s visit', amount: 120, note: 'Check the circuit' }
+		];
 		const [, proposal] = recordsOf(comparisonCsv(report));
 		expect(proposal?.one_off_costs_USD).toBe('120.00');
 		expect(proposal?.one_off_costs_items).toBe('Electrician’s visit: 120.00 (Check the circuit)');

@@ -71,7 +71,12 @@ export function writeAssumptionsSheet(out: SheetWriter, input: AssumptionsInput)
 	};
 	const { finance } = request;
 	named('Discount rate a year', 'DiscountRate', finance.discountPercent / 100, formats.percent);
-	named(`${OUTPUT_LABELS.escalation} a year`, 'EscalationRate', finance.escalationPercent / 100, formats.percent);
+	named(
+		`${OUTPUT_LABELS.escalation} a year`,
+		'EscalationRate',
+		finance.escalationPercent / 100,
+		formats.percent
+	);
 	named('Horizon (years)', 'HorizonYears', finance.horizonYears, formats.whole);
 	named('Emission factor (kg CO₂ per kWh)', 'EmissionFactor', request.emissionFactorKgPerKwh, '0.000###');
 	pair(

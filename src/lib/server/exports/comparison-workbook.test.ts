@@ -72,7 +72,9 @@ describe('a time-of-use comparison with demand charges, riders and two taxes', (
 		expect(input.request.scenarios[0]?.status).toBe('installed');
 		expect(formulaAt(summary, 'F5').formula).toBe("SUM('1 Today one large blower'!$B$16:$B$16)");
 		expect(formulaAt(summary, 'F5').result).toBe(40);
-		expect(formulaAt(summary, 'F6').formula).toMatch(/^SUM\('2 Two small air pumps and a tim'!\$U\$5:\$U\$9,/);
+		expect(formulaAt(summary, 'F6').formula).toMatch(
+			/^SUM\('2 Two small air pumps and a tim'!\$U\$5:\$U\$9,/
+		);
 		expect(summary.getCell('L5').value).toBe('Installed (already paid for)');
 		expect(summary.getCell('L6').value).toBe('Proposed (bought now)');
 	});
@@ -80,10 +82,17 @@ describe('a time-of-use comparison with demand charges, riders and two taxes', (
 	it('names its columns from the glossary, categories and the date in words, kWh to a tenth', () => {
 		const summary = sheet(workbook(), 'Summary');
 		const headers = (summary.getRow(4).values as unknown[]).filter((v) => typeof v === 'string');
-		for (const label of [OUTPUT_LABELS.runningCost, OUTPUT_LABELS.saving, OUTPUT_LABELS.lifecycle, OUTPUT_LABELS.status])
+		for (const label of [
+			OUTPUT_LABELS.runningCost,
+			OUTPUT_LABELS.saving,
+			OUTPUT_LABELS.lifecycle,
+			OUTPUT_LABELS.status
+		])
 			expect(headers).toContain(label);
 		expect(headers.some((h) => (h as string).startsWith(OUTPUT_LABELS.capital))).toBe(true);
-		expect(String(summary.getCell('A2').value)).toMatch(/^Made 2 December 2026, 03:30 \(America\/Chicago\)\./);
+		expect(String(summary.getCell('A2').value)).toMatch(
+			/^Made 2 December 2026, 03:30 \(America\/Chicago\)\./
+		);
 		const cashFlows = sheet(workbook(), 'Cash flows');
 		expect(texts(cashFlows)).toContain(OUTPUT_LABELS.escalatedBill);
 		expect(texts(cashFlows)).not.toContain('Energy (escalated)');

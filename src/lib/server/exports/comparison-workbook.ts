@@ -121,7 +121,8 @@ export async function comparisonWorkbook(input: ComparisonExport): Promise<Buffe
 		formats
 	});
 	printSetup(summary.sheet, { titleRows: '1:4' });
-	for (const out of scenarioSheets) if (out) printSetup(out.sheet, { titleRows: '3:4', titleColumns: 'A:A', pagesWide: 3 });
+	for (const out of scenarioSheets)
+		if (out) printSetup(out.sheet, { titleRows: '3:4', titleColumns: 'A:A', pagesWide: 3 });
 	printSetup(monthly.sheet, { titleRows: '3:4', titleColumns: 'A:B', pagesWide: Math.min(3, names.length) });
 	printSetup(tariffSheet.sheet, { titleRows: '1:1' });
 	printSetup(cashFlows.sheet, { titleRows: '3:4', titleColumns: 'A:A' });

@@ -160,9 +160,7 @@ export function writeSummarySheet(out: SheetWriter, input: SummaryInput): void {
 			row,
 			COL.co2,
 			`IF(EmissionFactor>0,${a1(COL.co2, FIRST_ROW + s)}-${baseCell(COL.co2)},"${CO2_CELL_NOT_SET}")`,
-			request.emissionFactorKgPerKwh > 0
-				? result.co2KgPerYear - baseline.co2KgPerYear
-				: CO2_CELL_NOT_SET,
+			request.emissionFactorKgPerKwh > 0 ? result.co2KgPerYear - baseline.co2KgPerYear : CO2_CELL_NOT_SET,
 			formats.kwh
 		);
 	});
