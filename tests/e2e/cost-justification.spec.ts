@@ -45,6 +45,10 @@ test('a site viewer finds the cost justification, reads the summary and download
 	await expect(page.getByRole('heading', { name: 'Sources' })).toBeVisible();
 	await expect(page.getByRole('heading', { name: 'Cautions' })).toBeVisible();
 	await expect(page.getByRole('link', { name: 'Printable report' })).toBeVisible();
+	// At a phone's width the page does not scroll sideways (wide tables scroll inside their own region).
+	await page.setViewportSize({ width: 390, height: 844 });
+	await expect.poll(() => page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+	await page.setViewportSize({ width: 1280, height: 900 });
 
 	const download = page.waitForEvent('download');
 	await page.getByRole('link', { name: 'Workbook (.xlsx)' }).click();
