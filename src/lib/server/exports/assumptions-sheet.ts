@@ -4,7 +4,7 @@ import { holidaysText } from './device-words';
 import type { MonthFigures } from './figures';
 import { type Formats, madeText } from './formats';
 import { RULES, VALUES_NOTE } from './rules-text';
-import { CO2_HOW_TO_SET, OUTPUT_LABELS } from '$lib/text/output-labels';
+import { CO2_HOW_TO_SET, OUTPUT_LABELS, STATUS_LABELS } from '$lib/text/output-labels';
 
 export const ASSUMPTIONS_SHEET = 'Assumptions & sources';
 
@@ -59,9 +59,12 @@ export function writeAssumptionsSheet(out: SheetWriter, input: AssumptionsInput)
 		const version =
 			scenario.tariffVersion === null ? 'no version number' : `version ${scenario.tariffVersion}`;
 		const baseline = s === request.baseline ? ' (baseline)' : '';
+		const status = request.scenarios[s]?.status ?? 'proposed';
 		pair(
 			`${scenario.name}${baseline}`,
-			`Site: ${scenario.siteName}. Tariff: ${scenario.tariffName} (${version}).`
+			`Site: ${scenario.siteName}. Tariff: ${scenario.tariffName} (${version}). ${OUTPUT_LABELS.status}: ${STATUS_LABELS[status]}${
+				status === 'installed' ? ', so its year 0 holds only its one-off costs' : ''
+			}.`
 		);
 	});
 	heading('Finance and emissions (change them on the Summary sheet)');
