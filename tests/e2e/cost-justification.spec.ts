@@ -9,7 +9,8 @@ import { demoSites } from './site-setup';
 // are the page's. The demo hatchery: "One large pump, always on" is installed (the baseline), "Small
 // pump plus an air-lift" is proposed with a $95 one-off cost (invented demo figures).
 const hatchery = demoSites.sites[0]!;
-const [installed, proposal] = hatchery.scenarios as [{ name: string }, { name: string }];
+const installed = hatchery.scenarios[0]!;
+const proposal = hatchery.scenarios[1]!;
 const guest = uniqueEmail('justification-guest');
 const GUEST_PASSWORD = 'justification guest password 1';
 

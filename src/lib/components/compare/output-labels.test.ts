@@ -10,14 +10,9 @@ import ScenarioDetails from './ScenarioDetails.svelte';
 
 // The page, the printable report and the cost justification all draw these components; the workbook
 // and CSV have their own tests of the same glossary (comparison-workbook.test.ts, csv.test.ts).
-const html = (
-	component: Component<{ report: ComparisonReport; origin?: string }>,
-	report = retrofitReport()
-) =>
-	render(component, { props: { report, origin: 'https://runrate.example.org' } }).body.replaceAll(
-		'&amp;',
-		'&'
-	);
+const ORIGIN = 'https://runrate.example.org';
+const html = (component: Component<{ report: ComparisonReport }>, report = retrofitReport()) =>
+	render(component, { props: { report } }).body.replaceAll('&amp;', '&');
 
 describe('the comparison table names each figure as the glossary does', () => {
 	const body = html(ComparisonTable);
@@ -67,7 +62,9 @@ describe('each scenario’s details', () => {
 
 describe('the sources', () => {
 	it('name the rules by their full address and each tariff version once', () => {
-		const body = html(ComparisonSources);
+		const body = render(ComparisonSources, {
+			props: { report: retrofitReport(), origin: ORIGIN }
+		}).body;
 		expect(body).toContain('https://runrate.example.org/rules');
 		expect(body.match(/Demo flat rate \(invented\), version 1/g)).toHaveLength(1);
 	});
