@@ -126,6 +126,8 @@ export const routes: Route[] = [
 		expect: [401, 403, 400, 400, 404, 404, 404]
 	},
 	{ method: 'GET', path: () => `/sites/${SITE}`, expect: [303, 200, 200, 200, 404, 404, 200] },
+	// The cost justification reads like the site page: viewers and the site's guest too.
+	{ method: 'GET', path: () => `/sites/${SITE}/justification`, expect: [303, 200, 200, 200, 404, 404, 200] },
 	{ method: 'GET', path: () => `/sites/${SITE}/edit`, expect: [303, 403, 200, 200, 404, 404, 403] },
 	{
 		method: 'POST',

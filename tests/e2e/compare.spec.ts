@@ -60,13 +60,24 @@ test.describe('comparing scenarios', () => {
 			.trim()
 			.split('\r\n');
 		expect(lines).toHaveLength(3);
-		expect(lines[0]).toMatch(/^scenario,site,tariff,baseline,annual_kwh,annual_cost_USD,/);
+		expect(lines[0]).toMatch(
+			/^scenario,site,tariff,baseline,status,energy_a_year_kWh,running_cost_a_year_USD,one_off_costs_USD,purchase_and_installation_USD,/
+		);
 
 		await page.getByRole('link', { name: 'Printable report' }).click();
 		await expect(page.getByRole('heading', { name: 'Sources' })).toBeVisible();
 		await expect(page.getByText('Electrical safety.')).toBeVisible();
+		const article = page.getByRole('article').first();
+		await expect(article).toContainText('Prepared by');
+		await expect(article).toContainText('Air line and riser pipe');
+		await expect(article).toContainText(/\/rules/);
+		await expect(article.getByText('Runrate’s rules page, /rules')).toHaveCount(0);
 		await page.emulateMedia({ media: 'print' });
 		await expect(page.getByRole('button', { name: 'Print or save as PDF' })).toBeHidden();
+		// The tables behind the charts print as tables; their toggles and the development banner do not print.
+		await expect(page.getByText('captured e-mail')).toBeHidden();
+		await expect(page.locator('details > summary').first()).toBeHidden();
+		await expect(page.locator('figure table').first()).toBeVisible();
 		for (const format of ['A4', 'Letter'] as const) {
 			const pdf = await page.pdf({ format });
 			expect(pdf.subarray(0, 5).toString()).toBe('%PDF-');

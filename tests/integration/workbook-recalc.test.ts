@@ -61,7 +61,7 @@ async function figuresOf(path: string, scenarios: number): Promise<Figures> {
 	const result = (sheet: ExcelJS.Worksheet | undefined, row: number, col: number) => {
 		const cell = sheet?.getCell(row, col);
 		if (cell?.type !== ExcelJS.ValueType.Formula) throw new Error(`${path}: no formula at ${row}/${col}`);
-		// exceljs reads a cached 0 back as no result; "none" is the payback when nothing is saved.
+		// exceljs reads a cached 0 back as no result; "never" is the payback when nothing is saved.
 		return (cell.result as number | string | undefined) ?? 0;
 	};
 	const summary = workbook.getWorksheet('Summary');
@@ -116,7 +116,7 @@ function expectSame(figures: Figures | undefined, response: CompareResponse): vo
 		expect(row.maintenancePerYear).toBeCloseTo(expected.maintenancePerYear, 2);
 		expect(row.lifecycleCost).toBeCloseTo(expected.lifecycleCost, 2);
 		expect(row.co2KgPerYear).toBeCloseTo(expected.co2KgPerYear, 3);
-		if (expected.simplePaybackYears === null) expect(row.simplePaybackYears).toBe('none');
+		if (expected.simplePaybackYears === null) expect(row.simplePaybackYears).toBe('never');
 		else expect(row.simplePaybackYears).toBeCloseTo(expected.simplePaybackYears, 6);
 	});
 }
@@ -124,6 +124,14 @@ function expectSame(figures: Figures | undefined, response: CompareResponse): vo
 describe('LibreOffice recalculating an exported comparison', () => {
 	it('gets compare()’s figures for time-of-use with demand charges, riders and two taxes', () => {
 		expectSame(recalculated.get('hatchery'), hatchery.response);
+	});
+
+	it('counts only the one-off costs of the installed baseline as its purchase and installation', () => {
+		// The hatchery's baseline is installed with a $40 one-off cost (invented): compare() says 40, and so
+		// does LibreOffice from the workbook's formula, whatever its blower and heater cost to buy.
+		expect(hatchery.request.scenarios[0]?.status).toBe('installed');
+		expect(hatchery.response.scenarios[0]?.capitalCost).toBe(40);
+		expect(recalculated.get('hatchery')?.summary[0]?.capitalCost).toBeCloseTo(40, 2);
 	});
 
 	it('gets compare()’s figures for tiers with a minimum bill, a per-day charge and a tax', () => {

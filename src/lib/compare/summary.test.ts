@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { ScenarioResult } from '$lib/calc';
+import { retrofitReport } from './retrofit.fixture';
 import { summarySentences } from './summary';
 import type { ComparisonReport } from './types';
 
@@ -38,6 +39,11 @@ function report(results: ScenarioResult[], factor = 0): ComparisonReport {
 		scenarios: results.map((r, i) => ({
 			id: `s${i}`,
 			name: r.name,
+			status: r.status,
+			description: '',
+			oneOffCosts: [],
+			equipment: [],
+			workspaceName: 'Invented workspace',
 			siteId: 'x',
 			siteName: 'Invented site',
 			tariffName: 'Invented tariff',
@@ -74,7 +80,7 @@ describe('the plain-words summary', () => {
 			co2KgPerYear: 1314
 		});
 		expect(summarySentences(report([big, small], 0.4))).toEqual([
-			'Choosing “Small pump and air-lift” instead of “One large pump” saves about $600 a year (50 %) on the electricity bill and 3,285 kWh. The extra purchase and installation of $600 pays back in about 12 months. Over 10 years, counting maintenance and replacements and discounting at 5 % a year, it comes to $4,500 less in today’s money. That is about 1,314 kg of CO₂ a year less.'
+			'Choosing “Small pump and air-lift” instead of “One large pump” saves about $600 a year (50 %) on the electricity bill and 3,285 kWh. The extra purchase and installation of $600 pays back in about 1 year (12 months). Over 10 years, counting maintenance and replacements and discounting at 5 % a year, it comes to $4,500 less in today’s money. That is about 1,314 kg of CO₂ a year less.'
 		]);
 	});
 
@@ -100,5 +106,27 @@ describe('the plain-words summary', () => {
 			lifecycleCost: 10_900
 		});
 		expect(summarySentences(report([big, slow]))[0]).toContain('pays back in about 3 years');
+	});
+});
+
+describe('installed against proposed (issue 17’s retrofit)', () => {
+	it('counts nothing in year 0 for the installed pump, so the $800 retrofit pays back in about 0.74 years', () => {
+		const sentences = summarySentences(retrofitReport());
+		expect(sentences[0]).toBe(
+			'“Pump installed now” is what is installed now: it is already paid for, so its purchase and installation counts only its one-off costs (none), and its devices are bought again only when their life ends within the horizon.'
+		);
+		expect(sentences[1]).toContain('saves about $1,083 a year');
+		expect(sentences[1]).toContain(
+			'The extra purchase and installation of $800 pays back in about 0.74 years (9 months).'
+		);
+	});
+
+	it('words a payback at once, and says no CO₂ while the emission factor is not set', () => {
+		const cheap = retrofitReport();
+		const proposal = cheap.result.scenarios[1]!;
+		cheap.result.scenarios[1] = { ...proposal, capitalCost: 0, simplePaybackYears: 0 };
+		const sentence = summarySentences(cheap)[1]!;
+		expect(sentence).toContain('It pays back at once: it costs no more to buy than the baseline.');
+		expect(sentence).not.toContain('CO₂');
 	});
 });

@@ -1,4 +1,6 @@
 import { figure, moneyWhole } from '$lib/text/numbers';
+import { PAYBACK_WORDS } from '$lib/text/output-labels';
+import { emissionFactorSet, paybackYearsFigure } from './format';
 import type { ComparisonReport } from './types';
 
 /**
@@ -10,12 +12,34 @@ export const money = moneyWhole;
 
 const whole = (n: number) => figure(n, 0);
 
+/** "pays back in about 0.74 years (9 months)": years as the tables give them, months while under two years. */
 function paybackWords(years: number): string {
-	if (years === 0) return 'pays back at once, as it costs no more to buy';
+	if (years === 0) return `pays back ${PAYBACK_WORDS.atOnce}`;
 	const months = Math.round(years * 12);
-	if (months < 1) return 'pays back in under a month';
-	if (months < 24) return `pays back in about ${months} ${months === 1 ? 'month' : 'months'}`;
-	return `pays back in about ${(Math.round(years * 10) / 10).toString()} years`;
+	if (months < 1) return `pays back in about ${paybackYearsFigure(years)} (under a month)`;
+	if (months < 24)
+		return `pays back in about ${paybackYearsFigure(years)} (${months} ${months === 1 ? 'month' : 'months'})`;
+	return `pays back in about ${paybackYearsFigure(years)}`;
+}
+
+/**
+ * What is installed is already paid for: its year 0 holds only its one-off costs, which a reader
+ * needs to know before the payback makes sense.
+ */
+function statusSentences(report: ComparisonReport): string[] {
+	const { result, scenarios, currency } = report;
+	return result.scenarios.flatMap((r, i) => {
+		if (r.status !== 'installed') return [];
+		const name = scenarios[i]?.name ?? r.name;
+		const oneOff = r.capitalCost;
+		return [
+			`“${name}” is what is installed now: it is already paid for, so its purchase and installation counts only ${
+				Math.abs(oneOff) < 0.5
+					? 'its one-off costs (none)'
+					: `its one-off costs of about ${money(oneOff, currency)}`
+			}, and its devices are bought again only when their life ends within the horizon.`
+		];
+	});
 }
 
 export function summarySentences(report: ComparisonReport): string[] {
@@ -24,7 +48,7 @@ export function summarySentences(report: ComparisonReport): string[] {
 	const baseName = scenarios[baseline]?.name ?? 'the baseline';
 	if (!base) return [];
 	const m = (amount: number) => money(Math.abs(amount), currency);
-	return result.scenarios.flatMap((r, i) => {
+	const perScenario = result.scenarios.flatMap((r, i) => {
 		if (i === baseline) return [];
 		const name = scenarios[i]?.name ?? r.name;
 		const kwh = base.annualKwh - r.annualKwh;
@@ -48,17 +72,20 @@ export function summarySentences(report: ComparisonReport): string[] {
 		} else if (extra > 0.5) {
 			parts.push(`It costs ${m(extra)} more to buy and install, which the running costs never pay back.`);
 		} else if (extra < -0.5) {
-			parts.push(`It also costs ${m(extra)} less to buy and install.`);
+			parts.push(`It also costs ${m(extra)} less to buy and install, so it ${paybackWords(0)}.`);
+		} else if (r.simplePaybackYears === 0) {
+			parts.push(`It ${paybackWords(0)}.`);
 		}
 		parts.push(
 			Math.abs(lifecycle) < 0.5
 				? `Over ${query.horizonYears} years the two come to about the same.`
 				: `Over ${query.horizonYears} years, counting maintenance and replacements and discounting at ${query.discountPercent} % a year, it comes to ${m(lifecycle)} ${lifecycle > 0 ? 'less' : 'more'} in today’s money.`
 		);
-		if (query.emissionKgPerKwh > 0 && Math.abs(kwh) >= 1) {
+		if (emissionFactorSet(query) && Math.abs(kwh) >= 1) {
 			const co2 = base.co2KgPerYear - r.co2KgPerYear;
 			parts.push(`That is about ${whole(Math.abs(co2))} kg of CO₂ a year ${co2 > 0 ? 'less' : 'more'}.`);
 		}
 		return [parts.join(' ')];
 	});
+	return [...statusSentences(report), ...perScenario];
 }

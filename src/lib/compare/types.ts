@@ -1,4 +1,4 @@
-import type { CompareResponse, DutyRedundancy } from '$lib/calc';
+import type { CompareResponse, DutyRedundancy, OneOffCost, ScenarioStatus } from '$lib/calc';
 
 /**
  * A comparison of stored scenarios as GET /api/v1/compare answers it: the core's `compare()`
@@ -14,14 +14,37 @@ export interface ComparisonQuery {
 	horizonYears: number;
 	discountPercent: number;
 	escalationPercent: number;
+	/** 0 when no factor was given: CO₂ then reads "not set" (see `emissionFactorSet`). */
 	emissionKgPerKwh: number;
 	/** Where the emission factor comes from, in the user's words. */
 	emissionSource: string;
 }
 
+/** One line of a scenario's equipment list, in words and figures a reader can check. */
+export interface ComparedDevice {
+	name: string;
+	/** The category in words ("Water pump", "UV steriliser"). */
+	category: string;
+	quantity: number;
+	/** Real watts per unit. */
+	wattsPerUnit: number;
+	/** The schedule in words ("Always on", "8 hours a day, on weekdays"), with its active months. */
+	schedule: string;
+	kwhPerYear: number;
+	/** The device's share of the year's bill. */
+	costPerYear: number;
+}
+
 export interface ComparedScenario {
 	id: string;
 	name: string;
+	/** Installed (already paid for: year 0 holds only its one-off costs) or proposed (bought now). */
+	status: ScenarioStatus;
+	description: string;
+	oneOffCosts: OneOffCost[];
+	equipment: ComparedDevice[];
+	/** The workspace that owns the scenario's site. */
+	workspaceName: string;
 	siteId: string;
 	siteName: string;
 	tariffName: string;

@@ -10,6 +10,7 @@ import {
 } from '$lib/calc';
 import { needsElectricalCaution } from '$lib/cautions';
 import type { ComparedScenario, ComparisonQuery, ComparisonReport } from '$lib/compare/types';
+import { siteWorkspace } from '$lib/server/sites/site.service';
 import type { DeviceSpec } from '$lib/server/db/schema';
 import { requireScenarioAccess } from '$lib/server/guard';
 import { equipmentOf, tariffFor } from '$lib/server/sites/results.service';
@@ -19,6 +20,7 @@ import type { ScenarioRow } from '$lib/server/sites/scenario.service';
 import type { SiteRow } from '$lib/server/sites/site.service';
 import { assumptionsOf } from './assumptions';
 import { comparisonPlace } from './issue-place';
+import { equipmentList } from './equipment-list';
 
 /** Everything a comparison of stored scenarios is made of: the report, and the exact request given to compare(). */
 export interface Comparison {
@@ -39,11 +41,12 @@ interface Loaded {
 	holidays: unknown;
 	source: string;
 	checkedOn: string;
+	workspaceName: string;
 }
 
 async function load(event: RequestEvent, id: string, firstDay: string): Promise<Loaded | string> {
 	// Unreadable, deleted or unknown scenarios are all "not found" (404), as everywhere else.
-	const { site, scenario } = await requireScenarioAccess(event, id, 'viewer');
+	const { site, scenario, viaGrant } = await requireScenarioAccess(event, id, 'viewer');
 	const resolved = await tariffFor(site, scenario);
 	if (!resolved.ok)
 		return resolved.reason === 'unavailable'
@@ -58,6 +61,8 @@ async function load(event: RequestEvent, id: string, firstDay: string): Promise<
 		(v) => v.id === version.id
 	);
 	return {
+		// A guest of one site sees the site, not the workspace around it (as the site pages do).
+		workspaceName: viaGrant ? '' : ((await siteWorkspace(site))?.name ?? ''),
 		source: stored?.source ?? '',
 		checkedOn: stored?.checkedOn ?? '',
 		site,
@@ -151,6 +156,11 @@ export async function buildComparison(event: RequestEvent, query: ComparisonQuer
 	const scenarios: ComparedScenario[] = loaded.map((l, i) => ({
 		id: l.scenario.id,
 		name: label(l, i),
+		status: l.scenario.status,
+		description: l.scenario.description ?? '',
+		oneOffCosts: l.scenario.oneOffCosts,
+		equipment: equipmentList(parsed.data.scenarios[i]?.equipment ?? [], result.scenarios[i]?.periods ?? []),
+		workspaceName: l.workspaceName,
 		siteId: l.site.id,
 		siteName: l.site.name,
 		tariffName: l.tariffName,

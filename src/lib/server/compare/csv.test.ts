@@ -4,6 +4,8 @@ import { compare, compareRequestSchema } from '$lib/calc';
 import type { ComparisonReport } from '$lib/compare/types';
 import { FORMULA_TEXTS, LOOKS_LIKE_FORMULA, neutralised } from '$lib/server/exports/formula-texts';
 import { hatcheryRequest } from '$lib/server/exports/workbook-fixtures';
+import { retrofitReport } from '$lib/compare/retrofit.fixture';
+import { csvColumn } from '$lib/text/output-labels';
 import { comparisonCsv, monthlyCsv } from './csv';
 
 // Names a spreadsheet would run as formulas come out with a leading apostrophe; figures stay numbers.
@@ -26,6 +28,11 @@ describe('the comparison and monthly CSV tables', () => {
 		scenarios: request.scenarios.map((_, s) => ({
 			id: `s${s + 1}`,
 			name: FORMULA_TEXTS[s]!,
+			status: request.scenarios[s]!.status,
+			description: FORMULA_TEXTS[3],
+			oneOffCosts: request.scenarios[s]!.oneOffCosts,
+			equipment: [],
+			workspaceName: 'Invented workspace',
 			siteId: 'site-1',
 			siteName: FORMULA_TEXTS[2 + s]!,
 			tariffName: FORMULA_TEXTS[4 + s]!,
@@ -57,9 +64,72 @@ describe('the comparison and monthly CSV tables', () => {
 	});
 
 	it('leave the figures, negative differences from the baseline among them, as plain numbers', () => {
-		const [, ...rows] = rowsOf(comparisonCsv(report));
-		const figures = rows.flatMap((row) => row.slice(4));
+		const [header = [], ...rows] = rowsOf(comparisonCsv(report));
+		const words = new Set([
+			'status',
+			'simple_payback_note',
+			'co2_note',
+			'one_off_costs_items',
+			'description'
+		]);
+		const numeric = header.flatMap((name, col) => (col >= 4 && !words.has(name) ? [col] : []));
+		const figures = rows.flatMap((row) => numeric.map((col) => row[col] ?? ''));
 		expect(figures.every((cell) => /^(-?\d+(\.\d+)?)?$/.test(cell))).toBe(true);
 		expect(figures.some((cell) => cell.startsWith('-'))).toBe(true);
+		expect(rows.map((row) => row[header.indexOf('description')])).toEqual([
+			neutralised(FORMULA_TEXTS[3]),
+			neutralised(FORMULA_TEXTS[3])
+		]);
+	});
+});
+
+describe('the comparison CSV of issue 17’s retrofit', () => {
+	const recordsOf = (csv: string) =>
+		Papa.parse<Record<string, string>>(csv.trimEnd(), { header: true, skipEmptyLines: true }).data;
+
+	it('names its columns from the glossary of output labels', () => {
+		const [header] = Papa.parse<string[]>(comparisonCsv(retrofitReport()).trimEnd()).data;
+		expect(header).toEqual(
+			expect.arrayContaining([
+				csvColumn('capital', 'USD'),
+				csvColumn('oneOffCosts', 'USD'),
+				csvColumn('saving', 'USD'),
+				'simple_payback_years',
+				'simple_payback_note',
+				csvColumn('co2', 'kg')
+			])
+		);
+		expect(csvColumn('capital', 'USD')).toBe('purchase_and_installation_USD');
+	});
+
+	it('writes the status, and the payback as a number with its words beside it', () => {
+		const [installed, proposal] = recordsOf(comparisonCsv(retrofitReport()));
+		expect(installed?.status).toBe('Installed (already paid for)');
+		expect(installed?.purchase_and_installation_USD).toBe('0.00');
+		expect(installed?.simple_payback_years).toBe('');
+		expect(proposal?.status).toBe('Proposed (bought now)');
+		expect(proposal?.purchase_and_installation_USD).toBe('800.00');
+		expect(proposal?.simple_payback_years).toBe('0.74');
+		expect(proposal?.simple_payback_note).toBe('0.74 years');
+	});
+
+	it('writes a payback at once as 0 and says so, and CO₂ as not set until a factor is given', () => {
+		const report = retrofitReport();
+		report.result.scenarios[1] = { ...report.result.scenarios[1]!, simplePaybackYears: 0 };
+		const [, proposal] = recordsOf(comparisonCsv(report));
+		expect(proposal?.simple_payback_years).toBe('0.00');
+		expect(proposal?.simple_payback_note).toBe('at once: it costs no more to buy than the baseline');
+		expect(proposal?.co2_a_year_kg).toBe('');
+		expect(proposal?.co2_note).toBe('not set');
+	});
+
+	it('lists the one-off costs with their notes', () => {
+		const report = retrofitReport();
+		report.scenarios[1]!.oneOffCosts = [
+			{ label: 'Electrician’s visit', amount: 120, note: 'Check the circuit' }
+		];
+		const [, proposal] = recordsOf(comparisonCsv(report));
+		expect(proposal?.one_off_costs_USD).toBe('120.00');
+		expect(proposal?.one_off_costs_items).toBe('Electrician’s visit: 120.00 (Check the circuit)');
 	});
 });

@@ -2,8 +2,9 @@ import type { CompareRequest } from '$lib/calc';
 import { type SheetWriter } from './cells';
 import { holidaysText } from './device-words';
 import type { MonthFigures } from './figures';
-import type { Formats } from './formats';
+import { type Formats, madeText } from './formats';
 import { RULES, VALUES_NOTE } from './rules-text';
+import { CO2_HOW_TO_SET, OUTPUT_LABELS, STATUS_LABELS } from '$lib/text/output-labels';
 
 export const ASSUMPTIONS_SHEET = 'Assumptions & sources';
 
@@ -52,15 +53,18 @@ export function writeAssumptionsSheet(out: SheetWriter, input: AssumptionsInput)
 	);
 	pair('Time zone', request.timezone);
 	pair('Public holidays', holidaysText(request.holidays));
-	pair('Made', input.generatedAt);
+	pair(OUTPUT_LABELS.made, madeText(input.generatedAt, request.timezone));
 	heading('Scenarios and where they come from');
 	input.scenarios.forEach((scenario, s) => {
 		const version =
 			scenario.tariffVersion === null ? 'no version number' : `version ${scenario.tariffVersion}`;
 		const baseline = s === request.baseline ? ' (baseline)' : '';
+		const status = request.scenarios[s]?.status ?? 'proposed';
 		pair(
 			`${scenario.name}${baseline}`,
-			`Site: ${scenario.siteName}. Tariff: ${scenario.tariffName} (${version}).`
+			`Site: ${scenario.siteName}. Tariff: ${scenario.tariffName} (${version}). ${OUTPUT_LABELS.status}: ${STATUS_LABELS[status]}${
+				status === 'installed' ? ', so its year 0 holds only its one-off costs' : ''
+			}.`
 		);
 	});
 	heading('Finance and emissions (change them on the Summary sheet)');
@@ -70,10 +74,18 @@ export function writeAssumptionsSheet(out: SheetWriter, input: AssumptionsInput)
 	};
 	const { finance } = request;
 	named('Discount rate a year', 'DiscountRate', finance.discountPercent / 100, formats.percent);
-	named('Price escalation a year', 'EscalationRate', finance.escalationPercent / 100, formats.percent);
+	named(
+		`${OUTPUT_LABELS.escalation} a year`,
+		'EscalationRate',
+		finance.escalationPercent / 100,
+		formats.percent
+	);
 	named('Horizon (years)', 'HorizonYears', finance.horizonYears, formats.whole);
 	named('Emission factor (kg CO₂ per kWh)', 'EmissionFactor', request.emissionFactorKgPerKwh, '0.000###');
-	pair('Source of the emission factor', input.emissionSource || 'not given');
+	pair(
+		OUTPUT_LABELS.emissionSource,
+		request.emissionFactorKgPerKwh > 0 ? input.emissionSource || 'not given' : CO2_HOW_TO_SET
+	);
 	heading('The rules');
 	for (const [title, text] of RULES) pair(title, text);
 	heading('What is a formula, and what is a value');

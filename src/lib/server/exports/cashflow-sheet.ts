@@ -1,12 +1,19 @@
 import type { CompareRequest, ScenarioResult } from '$lib/calc';
 import { type SheetWriter, a1, columnRange, on } from './cells';
 import type { Formats } from './formats';
+import { OUTPUT_LABELS } from '$lib/text/output-labels';
 import { DEVICE, type ScenarioLayout } from './scenario-layout';
 
 export const CASH_FLOW_SHEET = 'Cash flows';
 const FIRST_YEAR_ROW = 5;
 const PER_SCENARIO = 6;
-const HEADERS = ['Capital', 'Energy (escalated)', 'Maintenance', 'Replacements', 'Cash flow'];
+const HEADERS = [
+	OUTPUT_LABELS.capital,
+	OUTPUT_LABELS.escalatedBill,
+	OUTPUT_LABELS.maintenance,
+	OUTPUT_LABELS.replacements,
+	OUTPUT_LABELS.cashFlow
+];
 
 /** The Summary cells a scenario's cash flows start from. */
 export interface SummaryCells {
@@ -53,7 +60,7 @@ export function writeCashFlowSheet(
 	out.headers(4, 1, ['Year']);
 	for (let year = 0; year <= horizon; year++) out.number(FIRST_YEAR_ROW + year, 1, year, formats.whole);
 	const lifecycleRow = FIRST_YEAR_ROW + horizon + 1;
-	out.text(lifecycleRow, 1, 'Lifecycle cost (present value)', 'bold');
+	out.text(lifecycleRow, 1, `${OUTPUT_LABELS.lifecycle} (present value)`, 'bold');
 	scenarios.forEach((scenario, s) => writeScenario(out, scenario, 2 + s * PER_SCENARIO, finance, formats));
 	out.freeze(4, 1);
 }

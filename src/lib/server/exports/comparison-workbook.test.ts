@@ -1,4 +1,5 @@
 import ExcelJS from 'exceljs';
+import { OUTPUT_LABELS } from '$lib/text/output-labels';
 import { describe, expect, it } from 'vitest';
 import { comparisonWorkbook } from './comparison-workbook';
 import { formulaAt, readBackOnce, sheet, texts } from './workbook-read';
@@ -40,7 +41,7 @@ describe('a time-of-use comparison with demand charges, riders and two taxes', (
 			expect(result('E')).toBe(expected.annualCost);
 			expect(result('F')).toBe(expected.capitalCost);
 			expect(result('H')).toBe(expected.savingsPerYear);
-			expect(result('I')).toBe(expected.simplePaybackYears ?? 'none');
+			expect(result('I')).toBe(expected.simplePaybackYears ?? 'never');
 			expect(result('J')).toBe(expected.lifecycleCost);
 			expect(result('K')).toBe(expected.co2KgPerYear);
 		});
@@ -50,7 +51,7 @@ describe('a time-of-use comparison with demand charges, riders and two taxes', (
 		const summary = sheet(workbook(), 'Summary');
 		expect(formulaAt(summary, 'E6').formula).toBe("'Monthly'!$AE$17");
 		expect(formulaAt(summary, 'J6').formula).toBe("'Cash flows'!$L$16");
-		expect(formulaAt(summary, 'K6').formula).toBe('D6*EmissionFactor');
+		expect(formulaAt(summary, 'K6').formula).toBe('IF(EmissionFactor>0,D6*EmissionFactor,"not set")');
 		const monthly = sheet(workbook(), 'Monthly');
 		expect(formulaAt(monthly, 'AE17').formula).toBe('ROUND(SUM(AE5:AE16),2)');
 		expect(formulaAt(sheet(workbook(), 'Cash flows'), 'L16').formula).toBe('L5+NPV(DiscountRate,L6:L15)');
@@ -64,6 +65,56 @@ describe('a time-of-use comparison with demand charges, riders and two taxes', (
 		const march = input.response.scenarios[1]?.periods[2]?.equipment[2];
 		expect(formulaAt(scenario, 'AA7').result).toBe(march?.kwh);
 		expect(formulaAt(scenario, 'AM7').result).toBe(march?.cost);
+	});
+
+	it('counts only the one-off costs as the installed baseline’s purchase and installation', () => {
+		const summary = sheet(workbook(), 'Summary');
+		expect(input.request.scenarios[0]?.status).toBe('installed');
+		expect(formulaAt(summary, 'F5').formula).toBe("SUM('1 Today one large blower'!$B$16:$B$16)");
+		expect(formulaAt(summary, 'F5').result).toBe(40);
+		expect(formulaAt(summary, 'F6').formula).toMatch(
+			/^SUM\('2 Two small air pumps and a tim'!\$U\$5:\$U\$9,/
+		);
+		expect(summary.getCell('L5').value).toBe('Installed (already paid for)');
+		expect(summary.getCell('L6').value).toBe('Proposed (bought now)');
+	});
+
+	it('names its columns from the glossary, categories and the date in words, kWh to a tenth', () => {
+		const summary = sheet(workbook(), 'Summary');
+		const headers = (summary.getRow(4).values as unknown[]).filter((v) => typeof v === 'string');
+		for (const label of [
+			OUTPUT_LABELS.runningCost,
+			OUTPUT_LABELS.saving,
+			OUTPUT_LABELS.lifecycle,
+			OUTPUT_LABELS.status
+		])
+			expect(headers).toContain(label);
+		expect(headers.some((h) => (h as string).startsWith(OUTPUT_LABELS.capital))).toBe(true);
+		expect(String(summary.getCell('A2').value)).toMatch(
+			/^Made 2 December 2026, 03:30 \(America\/Chicago\)\./
+		);
+		const cashFlows = sheet(workbook(), 'Cash flows');
+		expect(texts(cashFlows)).toContain(OUTPUT_LABELS.escalatedBill);
+		expect(texts(cashFlows)).not.toContain('Energy (escalated)');
+		const second = sheet(workbook(), '2 Two small air pumps and a tim');
+		expect(texts(second)).toEqual(expect.arrayContaining(['Water pump', 'Air pump', 'UV steriliser']));
+		expect(texts(second)).not.toContain('water-pump');
+		expect(second.getCell('W5').numFmt).toBe('#,##0.0');
+	});
+
+	it('lists the one-off costs with their notes', () => {
+		const first = sheet(workbook(), '1 Today one large blower');
+		expect(first.getCell('A16').value).toBe('Electrician’s check of the blower circuit');
+		expect(first.getCell('C16').value).toBe('Invented: a yearly visit booked now');
+	});
+
+	it('prints every sheet landscape, fitted to the width, with its title rows repeated', () => {
+		for (const worksheet of workbook().worksheets) {
+			expect(worksheet.pageSetup.orientation, worksheet.name).toBe('landscape');
+			expect(worksheet.pageSetup.fitToPage, worksheet.name).toBe(true);
+			expect(worksheet.pageSetup.printArea, worksheet.name).toMatch(/^A1:[A-Z]+\d+$/);
+		}
+		expect(sheet(workbook(), 'Summary').pageSetup.printTitlesRow).toBe('1:4');
 	});
 
 	it('holds what no formula can express as values, and says so', () => {

@@ -10,6 +10,7 @@ import { type MonthlyScenario, monthlyPlans, writeMonthlySheet } from './monthly
 import { DEVICE, scenarioLayout } from './scenario-layout';
 import { writeScenarioSheet } from './scenario-sheet';
 import { SUMMARY_SHEET, type SummarySources, summaryCells, writeSummarySheet } from './summary-sheet';
+import { printSetup } from './print-setup';
 import { writeTariffSheet } from './tariff-sheet';
 import { tariffUses } from './tariff-uses';
 
@@ -119,10 +120,21 @@ export async function comparisonWorkbook(input: ComparisonExport): Promise<Buffe
 		})),
 		formats
 	});
+	printSetup(summary.sheet, { titleRows: '1:4' });
+	for (const out of scenarioSheets)
+		if (out) printSetup(out.sheet, { titleRows: '3:4', titleColumns: 'A:A', pagesWide: 3 });
+	printSetup(monthly.sheet, { titleRows: '3:4', titleColumns: 'A:B', pagesWide: Math.min(3, names.length) });
+	printSetup(tariffSheet.sheet, { titleRows: '1:1' });
+	printSetup(cashFlows.sheet, { titleRows: '3:4', titleColumns: 'A:A' });
+	printSetup(assumptions.sheet);
 	return Buffer.from(await workbook.xlsx.writeBuffer(ZIP));
 }
 
-/** The formulas of a scenario's Summary row: the Monthly year row, its sheet's sums, its lifecycle cost. */
+/**
+ * The formulas of a scenario's Summary row: the Monthly year row, its sheet's sums, its lifecycle cost.
+ * Its purchase and installation follows the core's rule: a proposal's devices plus its one-off costs;
+ * what is installed is already paid for, so only its one-off costs.
+ */
 function sources(input: ComparisonExport, block: MonthlyScenario, s: number): SummarySources {
 	const { layout, plan } = block;
 	const { firstDevice, lastDevice, firstOneOff, lastOneOff, sheet } = layout;
@@ -133,9 +145,12 @@ function sources(input: ComparisonExport, block: MonthlyScenario, s: number): Su
 		annualKwh: monthlyCell(plan.kwh, YEAR),
 		annualCost: monthlyCell(plan.total, YEAR),
 		capital: sumOf([
-			columnRange(sheet, DEVICE.capital, firstDevice, lastDevice),
+			input.request.scenarios[s]?.status === 'installed'
+				? null
+				: columnRange(sheet, DEVICE.capital, firstDevice, lastDevice),
 			columnRange(sheet, 2, firstOneOff, lastOneOff)
 		]),
+		status: input.request.scenarios[s]?.status ?? 'proposed',
 		maintenance: sumOf([columnRange(sheet, DEVICE.maintenancePerYear, firstDevice, lastDevice)]),
 		lifecycle: lifecycleCell(s, input.request.finance.horizonYears)
 	};

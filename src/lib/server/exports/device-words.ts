@@ -1,6 +1,11 @@
 import type { HolidaySpec, Schedule } from '$lib/calc';
 import { daysText, monthsText, windowsText } from '$lib/text/tariff';
 import { figure } from '$lib/text/numbers';
+import { CATEGORY_NAMES } from '$lib/components/equipment/device-fields';
+
+/** A category code in words ("water-pump" → "Water pump", "uv" → "UV steriliser"); an unknown code as it is. */
+export const categoryWords = (category: string | undefined): string =>
+	CATEGORY_NAMES[(category ?? 'other') as keyof typeof CATEGORY_NAMES] ?? category ?? 'Other';
 
 // The same figures as the tariff words' figureText, with one formatter kept: a workbook of thousands
 // of devices would otherwise build a new one per number.

@@ -1,3 +1,4 @@
+import { DateTime } from 'luxon';
 import { MONTH_ABBREVIATIONS } from '$lib/calc';
 import type { MonthFigures } from './figures';
 
@@ -30,7 +31,8 @@ export function formatsFor(currency: string): Formats {
 	return {
 		money: `${symbol}#,##0.00`,
 		rate: `${symbol}0.00###`,
-		kwh: '#,##0.000',
+		// Whole kWh would hide a small device's month; a tenth is as fine as a meter reads.
+		kwh: '#,##0.0',
 		kw: '#,##0.000',
 		hours: '#,##0.00',
 		percent: '0.00%',
@@ -38,6 +40,16 @@ export function formatsFor(currency: string): Formats {
 		fraction: '0.0000',
 		whole: '0'
 	};
+}
+
+/**
+ * When the workbook was made, in words and in the comparison's time zone:
+ * "2 December 2026, 03:30 (America/Chicago)" — not an ISO timestamp a reader must decode.
+ */
+export function madeText(generatedAt: string, timezone: string): string {
+	const made = DateTime.fromISO(generatedAt, { zone: 'utc' }).setZone(timezone);
+	const at = made.isValid ? made : DateTime.fromISO(generatedAt, { zone: 'utc' });
+	return `${at.toFormat('d MMMM yyyy, HH:mm', { locale: 'en-GB' })} (${at.zoneName ?? 'UTC'})`;
 }
 
 /** "Jan 2027", for month columns. */

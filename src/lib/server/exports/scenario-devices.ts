@@ -1,6 +1,6 @@
 import { type Equipment, type Scenario, type ScenarioResult, unitWatts } from '$lib/calc';
 import { type SheetWriter, a1, columnName } from './cells';
-import { activeMonthsText, scheduleText } from './device-words';
+import { activeMonthsText, categoryWords, scheduleText } from './device-words';
 import type { ScenarioFigures } from './figures';
 import type { Formats } from './formats';
 import type { MonthlyPlan } from './monthly-plan';
@@ -71,7 +71,7 @@ function writeInputs(
 	const put = (col: number, value: number | null, format: string) =>
 		out.number(row, col, value, format, 'input');
 	out.text(row, DEVICE.name, device.name);
-	out.text(row, DEVICE.category, device.category);
+	out.text(row, DEVICE.category, categoryWords(device.category));
 	put(DEVICE.quantity, device.quantity, formats.whole);
 	if (device.power.watts !== undefined) put(DEVICE.watts, device.power.watts, '#,##0.##');
 	else {

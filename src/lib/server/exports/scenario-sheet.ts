@@ -1,4 +1,5 @@
 import { monthHeading } from './formats';
+import { OUTPUT_LABELS, STATUS_LABELS } from '$lib/text/output-labels';
 import { type ScenarioSheetInput, writeDevices } from './scenario-devices';
 import { writeTotals } from './scenario-totals';
 import { DEVICE } from './scenario-layout';
@@ -8,7 +9,7 @@ export type { ScenarioSheetInput } from './scenario-devices';
 
 const INPUT_HEADERS = [
 	'Device',
-	'Category',
+	OUTPUT_LABELS.category,
 	'Quantity',
 	'Watts per unit',
 	'Amps',
@@ -27,10 +28,10 @@ const INPUT_HEADERS = [
 	'Installation per unit',
 	'Life (years)',
 	'Maintenance per unit a year',
-	'Capital cost',
-	'Maintenance a year',
-	'kWh a year',
-	'Cost a year'
+	`${OUTPUT_LABELS.capital} (equipment)`,
+	OUTPUT_LABELS.maintenance,
+	OUTPUT_LABELS.kwhPerYear,
+	OUTPUT_LABELS.costPerYear
 ];
 
 const WIDTHS = [30, 12, 9, 10, 8, 8, 8, 7, 10, 10, 7, 16, 30, 10, 10, 10, 11, 11, 8, 11, 12, 12, 12, 12];
@@ -42,7 +43,7 @@ const SHEET_NOTE =
 export function writeScenarioSheet(input: ScenarioSheetInput, title: string): void {
 	const { out, layout, figures, formats, scenario } = input;
 	out.widths([...WIDTHS, ...Array<number>(24).fill(11)]);
-	out.line(1, title, 13, 'title');
+	out.line(1, `${title} · ${STATUS_LABELS[scenario.status]}`, 13, 'title');
 	out.line(2, SHEET_NOTE, 24, 'note');
 	out.sheet.getRow(2).height = 48;
 	out.text(3, DEVICE.name, 'Equipment (inputs)', 'bold');
@@ -55,12 +56,17 @@ export function writeScenarioSheet(input: ScenarioSheetInput, title: string): vo
 	writeDevices(input);
 	writeTotals(input);
 
-	out.text(layout.firstOneOff - 2, 1, 'One-off costs (part of the capital cost)', 'heading');
-	out.headers(layout.firstOneOff - 1, 1, ['One-off cost', 'Amount']);
+	const paid =
+		scenario.status === 'installed'
+			? `${OUTPUT_LABELS.oneOffCosts}: all of this scenario’s ${OUTPUT_LABELS.capital.toLowerCase()}, as it is installed (already paid for)`
+			: `${OUTPUT_LABELS.oneOffCosts} (part of the ${OUTPUT_LABELS.capital.toLowerCase()}, with the equipment)`;
+	out.text(layout.firstOneOff - 2, 1, paid, 'heading');
+	out.headers(layout.firstOneOff - 1, 1, ['One-off cost', 'Amount', 'Note']);
 	if (scenario.oneOffCosts.length === 0) out.text(layout.firstOneOff, 1, 'None');
 	scenario.oneOffCosts.forEach((cost, i) => {
 		out.text(layout.firstOneOff + i, 1, cost.label);
 		out.number(layout.firstOneOff + i, 2, cost.amount, formats.money, 'input');
+		if (cost.note) out.text(layout.firstOneOff + i, 3, cost.note);
 	});
 	writeSchedules(input);
 	// The schedules table may reach past the monthly columns.

@@ -1,7 +1,8 @@
 import type { CompareRequest, CompareResponse } from '$lib/calc';
 import { type SheetWriter, a1, on } from './cells';
 import type { SummaryCells } from './cashflow-sheet';
-import type { Formats } from './formats';
+import { type Formats, madeText } from './formats';
+import { OUTPUT_LABELS as L, STATUS_LABELS } from '$lib/text/output-labels';
 import { writeInputs } from './summary-inputs';
 
 export const SUMMARY_SHEET = 'Summary';
@@ -17,27 +18,37 @@ const COL = {
 	savings: 8,
 	payback: 9,
 	lifecycle: 10,
-	co2: 11
+	co2: 11,
+	status: 12
 };
+/** The glossary's labels, so the workbook names each figure as the page and the report do. */
 const HEADERS = [
-	'Scenario',
-	'Site',
-	'Tariff',
-	'kWh a year',
-	'Cost a year',
-	'Capital cost',
-	'Maintenance a year',
-	'Savings a year vs the baseline',
-	'Simple payback (years)',
-	'Lifecycle cost',
-	'CO₂ kg a year'
+	L.scenario,
+	L.site,
+	L.tariff,
+	`${L.energy} (kWh)`,
+	L.runningCost,
+	`${L.capital}, year 0`,
+	L.maintenance,
+	L.saving,
+	`${L.payback} (years)`,
+	L.lifecycle,
+	`${L.co2} (kg)`,
+	L.status
 ];
+/** Payback in years; 0 reads "at once" (it costs no more to buy than the baseline), as on the page. */
+const PAYBACK_FORMAT = '[=0]"at once";0.00';
+/** What a payback cell says when nothing is saved, as the page's "never". */
+export const PAYBACK_NEVER = 'never';
+/** What a CO₂ cell says while the emission factor is 0 (not set). */
+export const CO2_CELL_NOT_SET = 'not set';
 
 /** Formulas (over the other sheets) that give one scenario's row. */
 export interface SummarySources {
 	name: string;
 	site: string;
 	tariff: string;
+	status: 'installed' | 'proposed';
 	annualKwh: string;
 	annualCost: string;
 	capital: string;
@@ -71,15 +82,15 @@ export function writeSummarySheet(out: SheetWriter, input: SummaryInput): void {
 	const { request, response, sources, formats } = input;
 	const base = request.baseline;
 	const count = sources.length;
-	out.widths([30, 24, 26, 13, 13, 13, 13, 14, 12, 14, 12]);
-	out.line(1, `${input.title}: scenarios compared`, 11, 'title');
+	out.widths([30, 24, 26, 13, 13, 13, 13, 14, 12, 14, 12, 16]);
+	out.line(1, `${input.title}: scenarios compared`, 12, 'title');
 	out.line(
 		2,
-		`Made ${input.generatedAt}. These are estimates, not a bill. Baseline: ${sources[base]?.name ?? ''}. Every figure is a formula over the other sheets; change a pale input (here, on a scenario sheet or the Tariff sheet) and it follows.`,
-		11,
+		`${L.made} ${madeText(input.generatedAt, request.timezone)}. These are estimates, not a bill. Baseline: ${sources[base]?.name ?? ''}. Every figure is a formula over the other sheets; change a pale input (here, on a scenario sheet or the Tariff sheet) and it follows. An installed scenario is already paid for: its purchase and installation is only its one-off costs.`,
+		12,
 		'note'
 	);
-	out.sheet.getRow(2).height = 32;
+	out.sheet.getRow(2).height = 45;
 	out.headers(4, 1, HEADERS);
 	const baseCell = (col: number) => a1(col, FIRST_ROW + base, true);
 	const formats_ = [formats.kwh, formats.money, formats.money, formats.money];
@@ -108,14 +119,27 @@ export function writeSummarySheet(out: SheetWriter, input: SummaryInput): void {
 			formats.money
 		);
 		const payback = `IF(${at(COL.savings)}>0,MAX(0,${at(COL.capital)}-${baseCell(COL.capital)})/${at(COL.savings)},"none")`;
-		out.formula(row, COL.payback, payback, result.simplePaybackYears ?? 'none', formats.years);
+		out.formula(
+			row,
+			COL.payback,
+			payback.replace('"none"', `"${PAYBACK_NEVER}"`),
+			result.simplePaybackYears ?? PAYBACK_NEVER,
+			PAYBACK_FORMAT
+		);
 		out.formula(row, COL.lifecycle, source.lifecycle, result.lifecycleCost, formats.money);
-		out.formula(row, COL.co2, `${at(COL.kwh)}*EmissionFactor`, result.co2KgPerYear, formats.kwh);
+		out.formula(
+			row,
+			COL.co2,
+			`IF(EmissionFactor>0,${at(COL.kwh)}*EmissionFactor,"${CO2_CELL_NOT_SET}")`,
+			request.emissionFactorKgPerKwh > 0 ? result.co2KgPerYear : CO2_CELL_NOT_SET,
+			formats.kwh
+		);
+		out.text(row, COL.status, STATUS_LABELS[source.status]);
 	});
 
 	const diffTitle = FIRST_ROW + count + 1;
 	out.text(diffTitle, 1, 'Difference from the baseline (this scenario − the baseline)', 'heading');
-	out.headers(diffTitle + 1, 1, HEADERS.slice(0, 7).concat(['', '', 'Lifecycle cost', 'CO₂ kg a year']));
+	out.headers(diffTitle + 1, 1, HEADERS.slice(0, 7).concat(['', '', HEADERS[9] ?? '', HEADERS[10] ?? '']));
 	const baseline = response.scenarios[base];
 	sources.forEach((source, s) => {
 		const row = diffTitle + 2 + s;
@@ -132,7 +156,13 @@ export function writeSummarySheet(out: SheetWriter, input: SummaryInput): void {
 		] as const;
 		fields.forEach(([col, value], i) => diff(col, value, formats_[i] ?? formats.money));
 		diff(COL.lifecycle, result.lifecycleCost - baseline.lifecycleCost, formats.money);
-		diff(COL.co2, result.co2KgPerYear - baseline.co2KgPerYear, formats.kwh);
+		out.formula(
+			row,
+			COL.co2,
+			`IF(EmissionFactor>0,${a1(COL.co2, FIRST_ROW + s)}-${baseCell(COL.co2)},"${CO2_CELL_NOT_SET}")`,
+			request.emissionFactorKgPerKwh > 0 ? result.co2KgPerYear - baseline.co2KgPerYear : CO2_CELL_NOT_SET,
+			formats.kwh
+		);
 	});
 	writeInputs(out, input, inputsRow(count));
 	out.freeze(4, 1);

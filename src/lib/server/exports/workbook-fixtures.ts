@@ -40,7 +40,16 @@ export function hatcheryRequest(more: Partial<CompareRequestInput> = {}): Compar
 		tariff: TOU_DEMAND_TARIFF,
 		scenarios: [
 			{
+				// What is installed now: already paid for, so only its one-off cost is its year 0.
 				name: 'Today: one large blower',
+				status: 'installed',
+				oneOffCosts: [
+					{
+						label: 'Electrician’s check of the blower circuit',
+						amount: 40,
+						note: 'Invented: a yearly visit booked now'
+					}
+				],
 				equipment: [
 					pump(),
 					{
@@ -86,7 +95,14 @@ export function hatcheryRequest(more: Partial<CompareRequestInput> = {}): Compar
 						purchaseCost: 180
 					}
 				],
-				oneOffCosts: [{ label: 'Outdoor circuit with ground-fault protection', amount: 850 }]
+				status: 'proposed',
+				oneOffCosts: [
+					{
+						label: 'Outdoor circuit with ground-fault protection',
+						amount: 850,
+						note: 'Invented quote; a licensed electrician does this work'
+					}
+				]
 			}
 		],
 		baseline: 0,

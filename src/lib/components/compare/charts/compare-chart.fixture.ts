@@ -48,6 +48,11 @@ function compared(id: string, name: string, kwhByCategory: Record<string, number
 	return {
 		id,
 		name,
+		status: 'proposed',
+		description: '',
+		oneOffCosts: [],
+		equipment: [],
+		workspaceName: 'Demo workspace (invented)',
 		siteId: 'site-1',
 		siteName: 'Willow Creek Demo Farm',
 		tariffName: 'Example Co-op Small Farm (invented)',
