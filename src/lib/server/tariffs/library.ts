@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { CUSTOMER_CLASSES } from '$lib/forms/tariff-meta.schema';
 import { searchTariffs, workspaceIdsOf } from '$lib/server/tariffs/tariff.service';
-import { features, typicalMonth } from './submission';
+import { features, typicalMonth, versionForToday } from './submission';
 import { tariffListing, tariffScope } from './tariff-view';
 
 export const libraryQuerySchema = z.object({
@@ -45,7 +45,7 @@ export async function libraryPage(userId: string | undefined, query: LibraryQuer
 				? { number: latest.number, effectiveFrom: latest.effectiveFrom, checkedOn: latest.checkedOn }
 				: null,
 			features: latest ? features(latest.structure) : null,
-			typicalMonthFor1Kw: typicalMonth(tariff, latest)
+			typicalMonthFor1Kw: typicalMonth(tariff, versionForToday(versions))
 		};
 	});
 	// Cost sorts within the page: the figure is computed, not stored.

@@ -6,3 +6,4 @@ export * from './rate-phrases';
 export * from './charge-sentences';
 export { type TariffSection, describeTariff } from './tariff-summary';
 export { describeTariffDiff } from './version-diff';
+export { referenceBasisText, versionInForceText } from './reference-basis';

@@ -4,7 +4,7 @@ import { can, requireRole, requireTariffRead } from '$lib/server/guard';
 import { copyTariff, workspaceIdsOf } from '$lib/server/tariffs/tariff.service';
 import { tariffUsage } from '$lib/server/sites/site.service';
 import { listWorkspacesFor } from '$lib/server/workspaces/workspace.service';
-import { features, typicalMonth } from '$lib/server/tariffs/submission';
+import { features, todayIso, typicalMonth, versionForToday } from '$lib/server/tariffs/submission';
 import type { Actions, PageServerLoad } from './$types';
 import { tariffMeta, tariffScope } from '$lib/server/tariffs/tariff-view';
 
@@ -12,10 +12,18 @@ export const load = (async (event) => {
 	const { tariff, versions, role } = await requireTariffRead(event, event.params.tariffId);
 	const user = event.locals.user;
 	const canEdit = tariff.workspaceId ? !!role && can(role, 'editor') : !!user?.isAdmin;
-	const copyTargets = user ? (await listWorkspacesFor(user.id)).filter((w) => w.role !== 'viewer') : [];
-	const latest = versions.at(-1);
+	// "Make our copy" is for a tariff the workspace does not own already.
+	const copyTargets = user
+		? (await listWorkspacesFor(user.id)).filter((w) => w.role !== 'viewer' && w.id !== tariff.workspaceId)
+		: [];
+	const today = todayIso();
+	const current = versionForToday(versions, today);
 	return {
 		tariff: { id: tariff.id, ...tariffMeta(tariff), ...tariffScope(tariff) },
+		today,
+		current: current
+			? { number: current.number, effectiveFrom: current.effectiveFrom, year: Number(today.slice(0, 4)) }
+			: null,
 		versions: versions
 			.map((v) => ({
 				id: v.id,
@@ -30,8 +38,8 @@ export const load = (async (event) => {
 				structure: v.structure
 			}))
 			.reverse(),
-		typicalMonth: typicalMonth(tariff, latest),
-		features: latest ? features(latest.structure) : null,
+		typicalMonth: typicalMonth(tariff, current),
+		features: current ? features(current.structure) : null,
 		canEdit,
 		copyTargets: copyTargets.map((w) => ({ id: w.id, name: w.name })),
 		usage: await tariffUsage(tariff.id, await workspaceIdsOf(user?.id))
