@@ -7,6 +7,28 @@ import { listWorkspacesFor } from '$lib/server/workspaces/workspace.service';
 import { features, todayIso, typicalMonth, versionForToday } from '$lib/server/tariffs/submission';
 import type { Actions, PageServerLoad } from './$types';
 import { tariffMeta, tariffScope } from '$lib/server/tariffs/tariff-view';
+import { noticeAudience } from '$lib/server/tariffs/notice-audience';
+
+/**
+ * After saving (`?published=N`, the editor's redirect), what the editor is told: a public version is
+ * published and its notices go to the owners and editors of the workspaces billed on it; a workspace's
+ * own tariff is saved, private, and tells nobody.
+ */
+async function savedNote(
+	tariff: { id: string; workspaceId: string | null },
+	versions: readonly { number: number }[],
+	param: string | null
+) {
+	const number = Number(param);
+	if (!param || !versions.some((v) => v.number === number)) return null;
+	if (tariff.workspaceId !== null) return `Version ${number} is saved, private to your workspace.`;
+	if (number === 1) return 'Version 1 is published in the public library.';
+	const { people, workspaces } = await noticeAudience(tariff.id);
+	if (people === 0)
+		return `Version ${number} is published. No workspace has a site billed on this tariff, so nobody was e-mailed.`;
+	const who = `${people} ${people === 1 ? 'person' : 'people'} in ${workspaces} ${workspaces === 1 ? 'workspace' : 'workspaces'}`;
+	return `Version ${number} is published. ${who} ${people === 1 ? 'was' : 'were'} told by e-mail (the owners and editors of workspaces with a site billed on this tariff).`;
+}
 
 export const load = (async (event) => {
 	const { tariff, versions, role } = await requireTariffRead(event, event.params.tariffId);
@@ -41,6 +63,7 @@ export const load = (async (event) => {
 		typicalMonth: typicalMonth(tariff, current),
 		features: current ? features(current.structure) : null,
 		canEdit,
+		savedNote: canEdit ? await savedNote(tariff, versions, event.url.searchParams.get('published')) : null,
 		copyTargets: copyTargets.map((w) => ({ id: w.id, name: w.name })),
 		usage: await tariffUsage(tariff.id, await workspaceIdsOf(user?.id))
 	};
