@@ -7,3 +7,4 @@ export * from './charge-sentences';
 export { type TariffSection, describeTariff } from './tariff-summary';
 export { describeTariffDiff } from './version-diff';
 export { referenceBasisText, versionInForceText } from './reference-basis';
+export { beforeFirstVersionNote, periodsText } from './version-notes';

@@ -37,7 +37,8 @@ export const load = (async (event) => {
 				deviceCount: devices.length,
 				thisMonth: months[monthIndex] ?? null,
 				year: months,
-				problem: priced && !priced.ok ? priced.message : baseline ? null : 'No baseline scenario'
+				problem: priced && !priced.ok ? priced.message : baseline ? null : 'No baseline scenario',
+				note: priced?.ok ? priced.note : null
 			};
 		})
 	);
