@@ -14,7 +14,7 @@ test('an editor adds a private tariff with a summer-only time-of-use adder', asy
 	await expect(page.getByLabel('Currency')).toHaveValue('');
 	await expect(page.locator('#te-energyCharges-0-perKwh')).toHaveValue('');
 	await expect(page.getByText('Holiday country')).toHaveCount(0);
-	await expect(page.getByText(/^Currency/)).toHaveCount(1);
+	await expect(page.getByLabel('Currency', { exact: true })).toHaveCount(1);
 	const preview = page.getByRole('complementary', { name: /^Preview/ });
 	await expect(preview).toContainText('Fill in the fields to see the preview.');
 	await expect(page.getByRole('button', { name: 'Save the tariff' })).toBeVisible();
@@ -46,11 +46,11 @@ test('an editor adds a private tariff with a summer-only time-of-use adder', asy
 	await expect(
 		page.locator('#te-energyCharges-1-seasons-0-months').getByRole('button', { pressed: true })
 	).toHaveText(['Jun', 'Jul', 'Aug', 'Sep']);
+	const priced = page.waitForResponse((r) => r.url().endsWith('/api/v1/calculate') && r.status() === 200);
 	await page.locator('#te-energyCharges-1-seasons-0-periods-0-perKwh').fill('0.05');
 	await expect(page.getByText('The tariff checks out.')).toBeVisible();
 	await expect(page.getByText(/Every month needs a season/)).toHaveCount(0);
 
-	const priced = page.waitForResponse((r) => r.url().endsWith('/api/v1/calculate') && r.status() === 200);
 	await priced;
 	await expect(preview).toContainText('$');
 	await expect(preview).toContainText('calendar year in America/Chicago divided by 12');
@@ -60,7 +60,7 @@ test('an editor adds a private tariff with a summer-only time-of-use adder', asy
 	await expect(page.getByRole('status').filter({ hasText: 'saved' })).toHaveText(
 		'Version 1 is saved, private to your workspace.'
 	);
-	await expect(page.getByText(/Summer peak adder, June–September/)).toBeVisible();
+	await expect(page.getByText(/Summer peak adder, June–September/).first()).toBeVisible();
 	await expect(page.getByRole('link', { name: 'Add a new version' })).toBeVisible();
 	// Our own tariff: no "Make our copy" into the workspace that owns it.
 	await expect(page.getByRole('button', { name: 'Make our copy' })).toHaveCount(0);
