@@ -19,7 +19,7 @@ test.describe('field messages show once, at their fields', () => {
 		await page.getByRole('textbox', { name: 'Source', exact: true }).fill('Invented for a test');
 		// A new tariff starts empty; with its charges filled in, the preview asks the server.
 		await page.locator('#meta-country').fill('US');
-		await page.getByLabel('Currency').fill('USD');
+		await page.locator('#te-currency').fill('USD');
 		await page.locator('#te-energyCharges-0-perKwh').fill('0.1');
 		await refused;
 		const preview = page.getByRole('complementary', { name: /^Preview/ });

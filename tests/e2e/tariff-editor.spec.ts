@@ -11,7 +11,7 @@ test('an editor adds a private tariff with a summer-only time-of-use adder', asy
 	// Empty, with examples only as placeholders.
 	await expect(page.locator('#meta-timezone')).toHaveValue('');
 	await expect(page.locator('#meta-country')).toHaveValue('');
-	await expect(page.getByLabel('Currency')).toHaveValue('');
+	await expect(page.locator('#te-currency')).toHaveValue('');
 	await expect(page.locator('#te-energyCharges-0-perKwh')).toHaveValue('');
 	await expect(page.getByText('Holiday country')).toHaveCount(0);
 	await expect(page.getByLabel('Currency', { exact: true })).toHaveCount(1);
@@ -26,7 +26,7 @@ test('an editor adds a private tariff with a summer-only time-of-use adder', asy
 	await page.locator('#meta-country').fill('US');
 	await page.locator('#meta-timezone').fill('America/Chicago');
 	await page.getByRole('textbox', { name: 'Source', exact: true }).fill('Invented for a test');
-	await page.getByLabel('Currency').fill('USD');
+	await page.locator('#te-currency').fill('USD');
 	await page.locator('#te-energyCharges-0-perKwh').fill('0.1');
 
 	// A field marked: no figure.
