@@ -36,6 +36,7 @@ export async function libraryPage(userId: string | undefined, query: LibraryQuer
 	const result = await searchTariffs(workspaceIds, { ...rest, sort: sort === 'cost' ? 'name' : sort });
 	const items = result.items.map(({ tariff, versions }) => {
 		const latest = versions.at(-1);
+		const priced = versionForToday(versions);
 		return {
 			id: tariff.id,
 			...tariffListing(tariff),
@@ -45,7 +46,9 @@ export async function libraryPage(userId: string | undefined, query: LibraryQuer
 				? { number: latest.number, effectiveFrom: latest.effectiveFrom, checkedOn: latest.checkedOn }
 				: null,
 			features: latest ? features(latest.structure) : null,
-			typicalMonthFor1Kw: typicalMonth(tariff, versionForToday(versions))
+			// The version in force today, not the newest: a version ahead of its date is not yet paid.
+			typicalMonthFor1Kw: typicalMonth(tariff, priced),
+			typicalMonthVersion: priced?.number ?? null
 		};
 	});
 	// Cost sorts within the page: the figure is computed, not stored.
