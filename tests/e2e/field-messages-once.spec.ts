@@ -17,12 +17,16 @@ test.describe('field messages show once, at their fields', () => {
 		await page.locator('#meta-name').fill('Typed tariff');
 		await page.locator('#meta-timezone').fill('Mars/Olympus');
 		await page.getByRole('textbox', { name: 'Source', exact: true }).fill('Invented for a test');
+		// A new tariff starts empty; with its charges filled in, the preview asks the server.
+		await page.locator('#meta-country').fill('US');
+		await page.locator('#te-currency').fill('USD');
+		await page.locator('#te-energyCharges-0-perKwh').fill('0.1');
 		await refused;
 		const preview = page.getByRole('complementary', { name: /^Preview/ });
 		await expect(preview).toContainText('No preview until “Time zone” is corrected.');
 		await expect(preview).toContainText('—');
 
-		await page.getByRole('button', { name: 'Publish the tariff' }).click();
+		await page.getByRole('button', { name: 'Save the tariff' }).click();
 		await expect(page.locator('#meta-timezone')).toHaveAttribute('aria-invalid', 'true');
 		await expect(page.locator('#meta-timezone-error')).toHaveText(TIME_ZONE_MESSAGE);
 		await expect(page.getByText(TIME_ZONE_MESSAGE)).toHaveCount(1);
@@ -37,6 +41,7 @@ test.describe('field messages show once, at their fields', () => {
 	test('the charges’ summary names the field and leaves the message to it', async ({ page }) => {
 		await signInWithPassword(page, 'editor@example.org');
 		await gotoReady(page, '/tariffs/new');
+		await page.locator('#te-energyCharges-0-perKwh').fill('1');
 		await page.locator('#te-energyCharges-0-perKwh').fill('');
 		await expect(page.locator('#te-energyCharges-0-perKwh')).toHaveAttribute('aria-invalid', 'true');
 		await expect(page.getByText('Per kWh is required')).toHaveCount(1);

@@ -82,6 +82,47 @@ describe('a time-of-use charge', () => {
 	});
 });
 
+describe('a time-of-use charge in some months only', () => {
+	// Invented "Demo Valley Power" summer peak adder: $0.05 per kWh on weekdays 16:00–21:00, June–September
+	// only, and nothing at other hours; no dummy all-zero season for October–May.
+	const summerAdder = (): TariffInput => ({
+		currency: 'USD',
+		energyCharges: [
+			{ label: 'Energy', type: 'flat', perKwh: 0.1 },
+			{
+				...tou('Summer peak adder', {
+					months: [6, 7, 8, 9],
+					periods: [touPeriod('On-peak', 0.05, 'weekdays', '16:00', '21:00')],
+					otherPerKwh: 0
+				}),
+				months: [6, 7, 8, 9]
+			}
+		]
+	});
+
+	it('charges the adder in its months: July 2027 by hand', () => {
+		const period = onlyPeriod({
+			period: july,
+			tariff: summerAdder(),
+			equipment: [kilowatt({ type: 'always' })]
+		});
+		// Hand-checked: July 2027 has 22 weekdays (UTC); 22 × 5 h × 1 kW × $0.05 = $5.50; 744 kWh × $0.10 = $74.40.
+		expect(line(period, 'energy', 'Summer peak adder')).toBe(5.5);
+		expect(line(period, 'energy', 'Energy')).toBe(74.4);
+	});
+
+	it('charges nothing for it in a month it does not apply', () => {
+		const period = onlyPeriod({
+			period: { start: '2027-01', months: 1 },
+			tariff: summerAdder(),
+			equipment: [kilowatt({ type: 'always' })]
+		});
+		const adder = period.charges.find((charge) => charge.label === 'Summer peak adder');
+		expect(adder?.amount ?? 0).toBe(0);
+		expect(line(period, 'energy', 'Energy')).toBe(74.4); // 744 kWh × $0.10
+	});
+});
+
 describe('public holidays', () => {
 	// The observed Independence Day of 2027 as date-holidays lists it (a substitute public holiday in July).
 	const observed = new Holidays('US')

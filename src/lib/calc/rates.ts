@@ -61,7 +61,7 @@ export class RateBook {
 	 * Weights of an energy charge on each interval of a day class: its price per kWh (flat, or
 	 * time-of-use: the first matching period of the month's season, else `otherPerKwh`), or for a tiered
 	 * charge 1 where it applies (its price depends on the period's total). A number when equal all day;
-	 * a charge with `months` weighs 0 outside them.
+	 * a charge with `months` (any type, time-of-use included) weighs 0 outside them.
 	 */
 	energyWeights(index: number, classIndex: number): number | Float64Array {
 		const known = this.weights[index]?.[classIndex];
@@ -70,8 +70,8 @@ export class RateBook {
 		const day = this.calendar.classes[classIndex];
 		if (!charge || !day) return 0;
 		let weights: number | Float64Array;
-		if (charge.type === 'tou') weights = this.touWeights(index, charge, day);
-		else if (charge.months && !charge.months.includes(day.month)) weights = 0;
+		if (charge.months && !charge.months.includes(day.month)) weights = 0;
+		else if (charge.type === 'tou') weights = this.touWeights(index, charge, day);
 		else weights = charge.type === 'flat' ? charge.perKwh : 1;
 		const row = this.weights[index];
 		if (row) row[classIndex] = weights;

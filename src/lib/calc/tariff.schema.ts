@@ -67,10 +67,17 @@ const energyChargeSchema = z.discriminatedUnion(
 		record('Energy charge', {
 			label,
 			type: z.literal('tou'),
-			seasons: list('Seasons', seasonSchema, { min: 1, max: 12 }).superRefine((seasons, ctx) =>
-				report(seasonCoverageIssues(seasons), ctx)
+			seasons: list('Seasons', seasonSchema, { min: 1, max: 12 }),
+			months: monthsSchema.optional()
+		}).superRefine((charge, ctx) =>
+			report(
+				seasonCoverageIssues(charge.seasons, charge.months).map((issue) => ({
+					...issue,
+					path: ['seasons', ...issue.path]
+				})),
+				ctx
 			)
-		})
+		)
 	],
 	{ error: 'Energy charge type must be one of: flat, tiered, tou' }
 );

@@ -50,6 +50,29 @@ describe('seasons', () => {
 		]);
 	});
 
+	it('asks a charge limited to some months for seasons over those months only', () => {
+		const summer = [6, 7, 8, 9];
+		const charge = (seasonMonths: number[]) => ({
+			label: 'Summer peak adder',
+			type: 'tou',
+			months: summer,
+			seasons: [{ months: seasonMonths, periods: [], otherPerKwh: 0 }]
+		});
+		expect(issuesOf({ energyCharges: [charge(summer)] })).toEqual([]);
+		expect(issuesOf({ energyCharges: [charge([6, 7, 8])] })).toEqual([
+			{
+				path: 'energyCharges.0.seasons',
+				message: 'Every month this charge applies needs a season; missing: 9 (September)'
+			}
+		]);
+		expect(issuesOf({ energyCharges: [charge([5, 6, 7, 8, 9])] })).toEqual([
+			{
+				path: 'energyCharges.0.seasons.0.months.0',
+				message: 'Month 5 (May) is not one of the months this charge applies'
+			}
+		]);
+	});
+
 	it('reports a month in two seasons at the second', () => {
 		expect(
 			seasonCoverageIssues([{ months: [1, 2, 3, 4, 5, 6] }, { months: [6, 7, 8, 9, 10, 11, 12] }])

@@ -40,25 +40,39 @@ export function tierIssues(tiers: ReadonlyArray<{ uptoKwh: number | null }>): Ru
 	return issues;
 }
 
-/** Every month of the year belongs to exactly one season. */
-export function seasonCoverageIssues(seasons: ReadonlyArray<{ months: readonly number[] }>): RuleIssue[] {
+/**
+ * Each month the charge applies (all twelve, or its `months` when it is limited to some) belongs to
+ * exactly one season; a season may not hold a month the charge does not apply in. A summer-only
+ * time-of-use adder is then one charge limited to June–September with one season, not a dummy
+ * all-zero season for the other months.
+ */
+export function seasonCoverageIssues(
+	seasons: ReadonlyArray<{ months: readonly number[] }>,
+	chargeMonths?: readonly number[]
+): RuleIssue[] {
 	const issues: RuleIssue[] = [];
+	const applies = new Set(chargeMonths ?? [...Array(12).keys()].map((i) => i + 1));
 	const owner = new Map<number, number>();
 	seasons.forEach((season, s) => {
 		season.months.forEach((month, m) => {
-			if (owner.has(month)) {
-				const name = MONTH_NAMES[month - 1] ?? month;
+			const name = `Month ${month} (${MONTH_NAMES[month - 1] ?? month})`;
+			if (!applies.has(month)) {
 				issues.push({
 					path: [s, 'months', m],
-					message: `Month ${month} (${name}) is already in an earlier season`
+					message: `${name} is not one of the months this charge applies`
 				});
+			} else if (owner.has(month)) {
+				issues.push({ path: [s, 'months', m], message: `${name} is already in an earlier season` });
 			} else owner.set(month, s);
 		});
 	});
-	const missing = [...Array(12).keys()].map((i) => i + 1).filter((month) => !owner.has(month));
+	const missing = [...applies].sort((a, b) => a - b).filter((month) => !owner.has(month));
 	if (missing.length > 0) {
 		const names = missing.map((month) => `${month} (${MONTH_NAMES[month - 1]})`).join(', ');
-		issues.push({ path: [], message: `Every month needs a season; missing: ${names}` });
+		const which = chargeMonths
+			? 'Every month this charge applies needs a season'
+			: 'Every month needs a season';
+		issues.push({ path: [], message: `${which}; missing: ${names}` });
 	}
 	return issues;
 }

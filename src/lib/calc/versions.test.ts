@@ -87,3 +87,33 @@ describe('calculating across a rate change', () => {
 		);
 	});
 });
+
+describe('months before the first version', () => {
+	// A tariff whose first version is dated 2026-12-03 (the day it was added), priced for the year 2026.
+	const added: DatedTariff[] = [
+		{ id: 'v1', number: 1, effectiveFrom: '2026-12-03', effectiveTo: null, tariff: flat(0.1) }
+	];
+
+	it('refuses them by default, naming the first day without rates', () => {
+		expect(() => calculateAcrossVersions(request({ start: '2026-01', months: 12 }), added)).toThrow(
+			new NoVersionInForce('2026-01-01')
+		);
+	});
+
+	it('prices them on the earliest version when asked, and says which months', () => {
+		const result = calculateAcrossVersions(request({ start: '2026-01', months: 12 }), added, 'earliest');
+		// December 2026 starts on the 1st, before the version's 3rd: it too is priced before the version.
+		expect(result.beforeFirst).toEqual({
+			labels: Array.from({ length: 12 }, (_, i) => `2026-${String(i + 1).padStart(2, '0')}`),
+			number: 1,
+			effectiveFrom: '2026-12-03'
+		});
+		// 1 kW always on for the 8,760 h of 2026 at $0.10 per kWh: $876.00 (hand-checked).
+		expect(result.totals.cost).toBe(876);
+	});
+
+	it('leaves months a version is in force for alone', () => {
+		const result = calculateAcrossVersions(request({ start: '2027-01', months: 3 }), added, 'earliest');
+		expect(result.beforeFirst).toBeUndefined();
+	});
+});

@@ -44,7 +44,33 @@ export class NoVersionInForce extends Error {
 
 export type VersionedResponse = CalculateResponse & {
 	versions: { label: string; versionId: string; number: number }[];
+	/**
+	 * Periods that start before the tariff's earliest version and were priced on it anyway (only with
+	 * `beforeFirst: 'earliest'`): the labels, and the version with its first day, for the note a page shows.
+	 */
+	beforeFirst?: { labels: string[]; number: number; effectiveFrom: string };
 };
+
+/**
+ * What to do with a billing period that starts before any version is in force: refuse the request
+ * (`'refuse'`, the default: NoVersionInForce names the date) or price it on the earliest version and say
+ * so (`'earliest'`). A site's year on a tariff whose first version is dated today would otherwise have no
+ * rates for its earlier months; pricing them on that version, with a note, keeps the year whole.
+ */
+export type BeforeFirstVersion = 'refuse' | 'earliest';
+
+/** The version that starts first (of two the same day, the later-published). */
+function earliestVersion<V extends Omit<DatedTariff, 'tariff'>>(versions: readonly V[]): V | null {
+	let first: V | null = null;
+	for (const v of versions)
+		if (
+			!first ||
+			v.effectiveFrom < first.effectiveFrom ||
+			(v.effectiveFrom === first.effectiveFrom && v.number > first.number)
+		)
+			first = v;
+	return first;
+}
 
 /**
  * Calculates with, for each billing period, the version in force on the period's first day (the rule
@@ -53,12 +79,19 @@ export type VersionedResponse = CalculateResponse & {
  */
 export function calculateAcrossVersions(
 	request: CalculateRequest,
-	versions: readonly DatedTariff[]
+	versions: readonly DatedTariff[],
+	beforeFirst: BeforeFirstVersion = 'refuse'
 ): VersionedResponse {
 	const spans = billingSpans(request.period);
 	const groups: { version: DatedTariff; spans: BillingSpan[]; firstIndex: number }[] = [];
+	const first = earliestVersion(versions);
+	const early: string[] = [];
 	spans.forEach((span, index) => {
-		const version = versionInForce(versions, span.from);
+		let version = versionInForce(versions, span.from);
+		if (!version && beforeFirst === 'earliest' && first && span.from < first.effectiveFrom) {
+			version = first;
+			early.push(span.label);
+		}
 		if (!version) throw new NoVersionInForce(span.from);
 		const last = groups.at(-1);
 		if (last && last.version.id === version.id) last.spans.push(span);
@@ -83,6 +116,9 @@ export function calculateAcrossVersions(
 		},
 		versions: groups.flatMap((g) =>
 			g.spans.map((s) => ({ label: s.label, versionId: g.version.id, number: g.version.number }))
-		)
+		),
+		...(early.length && first
+			? { beforeFirst: { labels: early, number: first.number, effectiveFrom: first.effectiveFrom } }
+			: {})
 	};
 }

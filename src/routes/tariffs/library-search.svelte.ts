@@ -16,6 +16,8 @@ export type LibraryItem = {
 	latestVersion: { number: number; effectiveFrom: string; checkedOn: string } | null;
 	features: { tou: boolean; tiers: boolean; demand: boolean; minimum: boolean } | null;
 	typicalMonthFor1Kw: number | null;
+	/** The version the figure prices: the one in force today. */
+	typicalMonthVersion: number | null;
 };
 export type LibraryResult = { page: number; pageSize: number; total: number; items: LibraryItem[] };
 export type LibraryFilters = Record<

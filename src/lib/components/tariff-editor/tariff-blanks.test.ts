@@ -14,6 +14,7 @@ import {
 	insertTier,
 	quarterHours,
 	removeTier,
+	setChargeMonths,
 	setFixedBasis,
 	toggleMonth,
 	unclaimedMonths
@@ -40,7 +41,10 @@ describe('a freshly added row', () => {
 			type: 'tiered',
 			months: [6, 7]
 		});
-		expect(blankEnergyCharge('tou', 'Demo supply', [6])).not.toHaveProperty('months');
+		expect(blankEnergyCharge('tou', 'Demo supply', [6])).toMatchObject({
+			months: [6],
+			seasons: [{ months: [6] }]
+		});
 	});
 
 	it('makes a second period that the schema accepts beside the first', () => {
@@ -122,5 +126,28 @@ describe('a fixed charge changing between per month and per day', () => {
 		const charge: FixedChargeInput = { label: 'Demo basic charge', perDay: 0.4 };
 		setFixedBasis(charge, 'perDay');
 		expect(charge).toEqual({ label: 'Demo basic charge', perDay: 0.4 });
+	});
+});
+
+describe('a time-of-use charge limited to some months', () => {
+	it('keeps its one season on the months it applies, so the schema accepts it without a dummy season', () => {
+		const charge = blankEnergyCharge('tou', 'Summer peak adder');
+		setChargeMonths(charge, [6, 7, 8, 9]);
+		expect(charge).toMatchObject({ months: [6, 7, 8, 9], seasons: [{ months: [6, 7, 8, 9] }] });
+		expect(tariffSchema.safeParse({ ...blankTariff(), energyCharges: [charge] }).success).toBe(true);
+		setChargeMonths(charge, undefined);
+		expect(charge).toMatchObject({
+			months: undefined,
+			seasons: [{ months: [...Array(12).keys()].map((i) => i + 1) }]
+		});
+	});
+
+	it('drops months from every season and gives new ones to the last', () => {
+		const charge = blankEnergyCharge('tou', 'Supply');
+		if (charge.type !== 'tou') throw new Error('not time-of-use');
+		charge.seasons = [blankSeason([6, 7, 8, 9]), blankSeason([1, 2, 3, 4, 5, 10, 11, 12])];
+		setChargeMonths(charge, [5, 6, 7]);
+		expect(charge.seasons.map((season) => season.months)).toEqual([[6, 7], [5]]);
+		expect(unclaimedMonths(charge.seasons, [5, 6, 7, 8])).toEqual([8]);
 	});
 });

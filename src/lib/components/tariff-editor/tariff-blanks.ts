@@ -65,7 +65,8 @@ export function blankEnergyCharge(
 			...only
 		};
 	}
-	if (type === 'tou') return { label, type, seasons: [blankSeason()] };
+	if (type === 'tou')
+		return { label, type, seasons: [blankSeason(months ? [...months] : undefined)], ...only };
 	return { label, type, perKwh: 0, ...only };
 }
 
@@ -108,10 +109,29 @@ export function toggleMonth(months: readonly number[], month: number): number[] 
 	return next.sort((a, b) => a - b);
 }
 
-/** Months no other season of the charge holds yet: what a new season starts with. */
-export function unclaimedMonths(seasons: readonly SeasonInput[]): number[] {
+/**
+ * Months of the charge (all twelve, or those it is limited to) that no season holds yet: what a new
+ * season starts with.
+ */
+export function unclaimedMonths(seasons: readonly SeasonInput[], chargeMonths?: readonly number[]): number[] {
 	const taken = new Set(seasons.flatMap((season) => season.months));
-	return ALL_MONTHS.filter((month) => !taken.has(month));
+	return (chargeMonths ?? ALL_MONTHS).filter((month) => !taken.has(month));
+}
+
+/**
+ * Limits a charge to some months (or, with undefined, to none: all year). A time-of-use charge's
+ * seasons follow, so that each month it applies stays in exactly one season without the person
+ * redoing them: months it no longer applies leave their season, and months it now applies join the
+ * last season (the only one, for the common summer-only adder).
+ */
+export function setChargeMonths(charge: EnergyChargeInput, months: number[] | undefined): void {
+	charge.months = months;
+	if (charge.type !== 'tou') return;
+	const applies = months ?? [...ALL_MONTHS];
+	for (const season of charge.seasons) season.months = season.months.filter((m) => applies.includes(m));
+	const last = charge.seasons[charge.seasons.length - 1];
+	const joining = unclaimedMonths(charge.seasons, applies);
+	if (last && joining.length) last.months = [...last.months, ...joining].sort((a, b) => a - b);
 }
 
 /** Moves a fixed charge between per month and per day, keeping the amount typed. */

@@ -1,6 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import { describeField, summaryEntries } from '$lib/components/tariff-editor/tariff-editor';
-import { formFieldWords, formSummary, previewFieldWords } from './tariff-form';
+import {
+	formFieldWords,
+	formSummary,
+	holidaysOf,
+	metaDraftFrom,
+	previewFieldWords,
+	submission
+} from './tariff-form';
 
 // Summaries name fields in words and leave each message to its field, so a message shows once.
 describe('the tariff editor’s summary', () => {
@@ -40,7 +47,9 @@ describe('the tariff form’s summary', () => {
 			fields: ['Time zone', 'Source', 'Charges'],
 			messages: ['The form did not arrive whole. Try saving again.']
 		});
-		expect(formFieldWords('meta.holidays.country')).toBe('Public holidays');
+		// The country is asked once, for the tariff and its holiday calendar: its field shows the message.
+		expect(formFieldWords('meta.holidays.country')).toBe('Country');
+		expect(formFieldWords('meta.holidays.dates.0')).toBe('Public holidays');
 		expect(formFieldWords('meta.unknown')).toBeNull();
 	});
 
@@ -49,5 +58,28 @@ describe('the tariff form’s summary', () => {
 		expect(previewFieldWords('holidays.region')).toBe('Public holidays');
 		expect(previewFieldWords('tariff.energyCharges.0.perKwh')).toBe('Charges');
 		expect(previewFieldWords('equipment.0.power.watts')).toBeNull();
+	});
+});
+
+describe('the tariff form’s holidays', () => {
+	const meta = { ...metaDraftFrom({}), country: 'ca', holidayRegion: '' };
+
+	it('uses the tariff’s own country for its holiday calendar, asked once', () => {
+		expect(holidaysOf({ ...meta, holidayMode: 'country' })).toEqual({ country: 'CA' });
+		const sent = submission({ ...meta, holidayMode: 'country' }, {} as never, { currency: 'CAD' });
+		expect(sent.meta.holidays).toEqual({ country: 'CA' });
+		expect(sent.meta.currency).toBe('CAD'); // the currency is asked once, with the charges
+	});
+
+	it('prices the preview with the tariff’s own holiday dates, as the tariff page does', () => {
+		// The cause of $126.67 (preview) against $126.10 (tariff page) for the demo "General service
+		// time-of-use": the preview left out a tariff's own list of holidays.
+		expect(holidaysOf({ ...meta, holidayMode: 'dates', holidayDates: '2026-01-01\n2026-07-03' })).toEqual({
+			dates: ['2026-01-01', '2026-07-03']
+		});
+	});
+
+	it('starts a new tariff empty: no country, zone or currency that looks real', () => {
+		expect(metaDraftFrom({})).toMatchObject({ country: '', timezone: '', currency: '', holidayMode: 'none' });
 	});
 });

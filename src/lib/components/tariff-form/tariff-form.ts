@@ -11,7 +11,6 @@ export type MetaDraft = {
 	currency: string;
 	timezone: string;
 	holidayMode: 'country' | 'dates' | 'none';
-	holidayCountry: string;
 	holidayRegion: string;
 	holidayDates: string;
 	description: string;
@@ -27,6 +26,11 @@ export type Issue = { path: string; message: string };
 
 type Holidays = { country: string; region?: string } | { dates: string[] } | null;
 
+/**
+ * The form's fields from a tariff's details. A new tariff starts empty (no country, zone or currency
+ * that could pass for real figures); the fields show examples as placeholders instead. Holidays by
+ * country use the tariff's own country, so the country is asked once.
+ */
 export function metaDraftFrom(meta: Partial<Record<string, unknown>> & { holidays?: Holidays }): MetaDraft {
 	const h = meta.holidays ?? null;
 	const text = (k: string) => (typeof meta[k] === 'string' ? (meta[k] as string) : '');
@@ -34,36 +38,44 @@ export function metaDraftFrom(meta: Partial<Record<string, unknown>> & { holiday
 		utility: text('utility'),
 		name: text('name'),
 		code: text('code'),
-		country: text('country') || 'US',
+		country: text('country'),
 		region: text('region'),
 		area: text('area'),
 		customerClass: text('customerClass') || 'agricultural',
-		currency: text('currency') || 'USD',
-		timezone: text('timezone') || 'America/Chicago',
+		currency: text('currency'),
+		timezone: text('timezone'),
 		holidayMode: !h ? 'none' : 'dates' in h ? 'dates' : 'country',
-		holidayCountry: h && 'country' in h ? h.country : '',
 		holidayRegion: h && 'country' in h ? (h.region ?? '') : '',
 		holidayDates: h && 'dates' in h ? h.dates.join('\n') : '',
 		description: text('description')
 	};
 }
 
-/** The JSON the editor posts: the same shape as the API and the JSON export (meta, version, structure). */
+/**
+ * The holidays the tariff prices like weekends, as saved: the tariff's country's calendar (the country
+ * field is asked once, for both), its own list of dates, or none. The live preview prices with the same
+ * value, so the preview and the tariff page agree.
+ */
+export function holidaysOf(meta: MetaDraft): Holidays {
+	if (meta.holidayMode === 'none') return null;
+	if (meta.holidayMode === 'dates') return { dates: meta.holidayDates.split(/[\s,]+/).filter(Boolean) };
+	return {
+		country: meta.country.trim().toUpperCase(),
+		...(meta.holidayRegion.trim() ? { region: meta.holidayRegion } : {})
+	};
+}
+
+/**
+ * The JSON the editor posts: the same shape as the API and the JSON export (meta, version, structure).
+ * The currency is asked once, with the charges; the tariff's details carry the same code.
+ */
 export function submission(
 	meta: MetaDraft,
 	version: VersionDraft,
 	structure: TariffInput,
 	expectedRevision?: number
 ) {
-	const holidays: Holidays =
-		meta.holidayMode === 'none'
-			? null
-			: meta.holidayMode === 'dates'
-				? { dates: meta.holidayDates.split(/[\s,]+/).filter(Boolean) }
-				: {
-						country: meta.holidayCountry,
-						...(meta.holidayRegion.trim() ? { region: meta.holidayRegion } : {})
-					};
+	const holidays = holidaysOf(meta);
 	return {
 		meta: {
 			utility: meta.utility,
@@ -73,7 +85,7 @@ export function submission(
 			region: meta.region,
 			area: meta.area,
 			customerClass: meta.customerClass,
-			currency: meta.currency,
+			currency: structure.currency,
 			timezone: meta.timezone,
 			holidays,
 			description: meta.description
@@ -119,6 +131,8 @@ const VERSION_WORDS: Record<string, string> = {
  */
 export function formFieldWords(path: string): string | null {
 	const [part, key] = path.split('.');
+	// Holidays by country use the Country field, which shows the message.
+	if (path.startsWith('meta.holidays.country')) return 'Country';
 	if (part === 'meta') return (key && META_WORDS[key]) || null;
 	if (part === 'version') return (key && VERSION_WORDS[key]) || null;
 	if (part === 'structure') return 'Charges';
@@ -147,6 +161,7 @@ export function formSummary(issues: Issue[]): { fields: string[]; messages: stri
 export function previewFieldWords(path: string): string | null {
 	const [part] = path.split('.');
 	if (part === 'timezone') return 'Time zone';
+	if (path.startsWith('holidays.country')) return 'Country';
 	if (part === 'holidays') return 'Public holidays';
 	if (part === 'tariff') return 'Charges';
 	return null;

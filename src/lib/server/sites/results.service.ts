@@ -8,6 +8,7 @@ import {
 	type VersionedResponse
 } from '$lib/calc';
 import { needsElectricalCaution } from '$lib/cautions';
+import { beforeFirstVersionNote } from '$lib/text/tariff';
 import type { DeviceSpec } from '../db/schema';
 import { listDevices } from './equipment.service';
 import { UNDO_MS, type ScenarioRow } from './scenario.service';
@@ -17,7 +18,13 @@ import type { TariffRow } from '../tariffs/tariff.service';
 
 /** A scenario's priced year, or why it cannot be priced. */
 export type Priced =
-	| { ok: true; result: VersionedResponse; tariff: { id: string; name: string; utility: string } }
+	| {
+			ok: true;
+			result: VersionedResponse;
+			tariff: { id: string; name: string; utility: string };
+			/** Said beside the figures when months before the tariff's first version were priced on it. */
+			note: string | null;
+	  }
 	| {
 			ok: false;
 			reason: 'no-tariff' | 'unavailable' | 'invalid';
@@ -99,10 +106,18 @@ export async function priceScenario(
 		};
 	}
 	try {
+		// A site's calendar months before the tariff's first version (a first version dated today) are
+		// priced on that version, with a note; a bill's own period before it is refused, naming its date.
+		const result = calculateAcrossVersions(
+			parsed.data,
+			resolved.versions,
+			'start' in period ? 'earliest' : 'refuse'
+		);
 		return {
 			ok: true,
-			result: calculateAcrossVersions(parsed.data, resolved.versions),
-			tariff: { id: resolved.tariff.id, name: resolved.tariff.name, utility: resolved.tariff.utility }
+			result,
+			tariff: { id: resolved.tariff.id, name: resolved.tariff.name, utility: resolved.tariff.utility },
+			note: result.beforeFirst ? beforeFirstVersionNote(result.beforeFirst) : null
 		};
 	} catch (error) {
 		return { ok: false, reason: 'invalid', message: (error as Error).message };
@@ -138,7 +153,8 @@ export async function priceScenarios(site: SiteRow, scenarios: ScenarioRow[], ye
 					deviceCount: devices.length,
 					caution: needsElectricalCaution(devices.map((d) => d.spec)),
 					annual: priced?.ok ? { cost: priced.result.totals.cost, kwh: priced.result.totals.kwh } : null,
-					problem: priced && !priced.ok ? priced.message : null
+					problem: priced && !priced.ok ? priced.message : null,
+					note: priced?.ok ? priced.note : null
 				};
 			})
 	);

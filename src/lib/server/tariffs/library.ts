@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { CUSTOMER_CLASSES } from '$lib/forms/tariff-meta.schema';
 import { searchTariffs, workspaceIdsOf } from '$lib/server/tariffs/tariff.service';
-import { features, typicalMonth } from './submission';
+import { features, typicalMonth, versionForToday } from './submission';
 import { tariffListing, tariffScope } from './tariff-view';
 
 export const libraryQuerySchema = z.object({
@@ -36,6 +36,7 @@ export async function libraryPage(userId: string | undefined, query: LibraryQuer
 	const result = await searchTariffs(workspaceIds, { ...rest, sort: sort === 'cost' ? 'name' : sort });
 	const items = result.items.map(({ tariff, versions }) => {
 		const latest = versions.at(-1);
+		const priced = versionForToday(versions);
 		return {
 			id: tariff.id,
 			...tariffListing(tariff),
@@ -45,7 +46,9 @@ export async function libraryPage(userId: string | undefined, query: LibraryQuer
 				? { number: latest.number, effectiveFrom: latest.effectiveFrom, checkedOn: latest.checkedOn }
 				: null,
 			features: latest ? features(latest.structure) : null,
-			typicalMonthFor1Kw: typicalMonth(tariff, latest)
+			// The version in force today, not the newest: a version ahead of its date is not yet paid.
+			typicalMonthFor1Kw: typicalMonth(tariff, priced),
+			typicalMonthVersion: priced?.number ?? null
 		};
 	});
 	// Cost sorts within the page: the figure is computed, not stored.

@@ -1,5 +1,11 @@
 import { z } from 'zod';
-import { holidaysSchema, referenceMonthlyCost, tariffSchema, timezoneSchema } from '$lib/calc';
+import {
+	holidaysSchema,
+	referenceMonthlyCost,
+	tariffSchema,
+	timezoneSchema,
+	versionInForce
+} from '$lib/calc';
 import { tariffMetaSchema, versionMetaSchema } from '$lib/forms/tariff-meta.schema';
 import type { VersionRow, TariffRow } from '$lib/server/tariffs/tariff.service';
 import { MAX_REVISION } from '$lib/forms/storable';
@@ -44,6 +50,24 @@ export function exportVersion(tariff: TariffRow, version: VersionRow) {
 		},
 		structure: version.structure
 	};
+}
+
+/** Today's date in UTC, "YYYY-MM-DD": the day the tariff page's "in force" is judged on. */
+export const todayIso = () => new Date().toISOString().slice(0, 10);
+
+/**
+ * The version the tariff page and the library price and describe: the one in force today, or, for a
+ * tariff whose first version starts later, that first version (the page then says "from <date>").
+ * Never simply the newest: a version published ahead of its date is not yet what anyone pays.
+ */
+export function versionForToday<V extends VersionRow>(
+	versions: readonly V[],
+	today = todayIso()
+): V | undefined {
+	return (
+		versionInForce(versions, today) ??
+		[...versions].sort((a, b) => a.effectiveFrom.localeCompare(b.effectiveFrom))[0]
+	);
 }
 
 const referenceCache = new Map<string, number | null>();

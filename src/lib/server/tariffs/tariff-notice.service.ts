@@ -2,22 +2,14 @@ import { and, desc, eq, isNull, or } from 'drizzle-orm';
 import { env } from '$env/dynamic/private';
 import { money } from '$lib/text/numbers';
 import { db } from '../db';
-import {
-	memberships,
-	notices,
-	scenarios,
-	sites,
-	tariffs,
-	tariffVersions,
-	users,
-	workspaces
-} from '../db/schema';
+import { notices, scenarios, sites, tariffs, tariffVersions, workspaces } from '../db/schema';
 import { defineJob } from '../jobs';
 import { deliverMail } from '../mail';
 import { tariffUsableBy } from '../tariffs/usable';
 import { priceScenario } from '../sites/results.service';
 import { listDevices } from '$lib/server/sites/equipment.service';
 import { listScenarios } from '$lib/server/sites/scenario.service';
+import { noticeLinks, noticeRecipients } from './notice-audience';
 
 type Published = { tariffId: string; versionNumber: number };
 type ForWorkspace = Published & { workspaceId: string };
@@ -76,17 +68,36 @@ export async function costChanges(job: ForWorkspace) {
 	return { tariff, now, before, year, lines };
 }
 
+/**
+ * Who published, in the notice's words: a public version comes from the library's curator (never "the
+ * utility": Runrate copies the utility's rates, the utility publishes nothing here); a workspace's own
+ * tariff from one of its members.
+ */
+export function publisherWords(tariff: { workspaceId: string | null }): string {
+	return tariff.workspaceId === null ? "The library's curator" : 'A member of your workspace';
+}
+
+/** The notice's first line: who published which version of which tariff, from when. */
+export function noticeTitle(
+	tariff: { workspaceId: string | null; name: string; utility: string },
+	version: { number: number; effectiveFrom: string }
+): string {
+	const verb = tariff.workspaceId === null ? 'published' : 'saved';
+	return `${publisherWords(tariff)} ${verb} version ${version.number} of ${tariff.name} (${tariff.utility}), in force from ${version.effectiveFrom}`;
+}
+
+/**
+ * One workspace's notice: recorded for its pages (the workspace page and the sites dashboard) and
+ * e-mailed to its owners and editors (`noticeRecipients`: the members who can act on it), with links to
+ * the tariff and to each affected site.
+ */
 const perWorkspace = defineJob<ForWorkspace>('tariff-version-notice', async (job) => {
 	const changes = await costChanges(job);
 	if (!changes || changes.lines.length === 0) return;
 	const [ws] = await db.select().from(workspaces).where(eq(workspaces.id, job.workspaceId));
-	const owners = await db
-		.select({ email: users.email })
-		.from(memberships)
-		.innerJoin(users, eq(users.id, memberships.userId))
-		.where(and(eq(memberships.workspaceId, job.workspaceId), eq(memberships.role, 'owner')));
+	const recipients = await noticeRecipients(job.workspaceId);
 	const { tariff, now, year, lines } = changes;
-	const title = `${tariff.utility} published version ${now.number} of ${tariff.name}, in force from ${now.effectiveFrom}`;
+	const title = noticeTitle(tariff, now);
 	const body = [
 		`What the baseline of each of your sites on this tariff would cost in ${year}, on the previous version and on the new one:`,
 		...lines.map((l) => {
@@ -97,11 +108,15 @@ const perWorkspace = defineJob<ForWorkspace>('tariff-version-notice', async (job
 		'\nEstimates, not bills.'
 	].join('\n');
 	const origin = env.ORIGIN ?? 'http://127.0.0.1:3000';
-	for (const owner of owners)
+	const links = [
+		`The tariff: ${origin}/tariffs/${tariff.id}`,
+		...lines.map((l) => `${l.site}: ${origin}/sites/${l.siteId}`)
+	].join('\n');
+	for (const to of recipients)
 		await deliverMail({
-			to: owner.email,
+			to,
 			subject: `Tariff change: ${tariff.name} (${ws?.name ?? 'your workspace'})`,
-			text: `${title}.\n\n${body}\n\nThe tariff: ${origin}/tariffs/${tariff.id}\n`
+			text: `${title}.\n\n${body}\n\n${links}\n\nYou get this as an owner or editor of ${ws?.name ?? 'the workspace'}.\n`
 		});
 	// Recorded after the mail went out: a retried job sends again rather than silently dropping the e-mail.
 	await db
@@ -118,11 +133,21 @@ const fanOut = defineJob<Published>('tariff-version-published', async (job) => {
 /** Queues the notices of a new public version; returns at once, the queue does the work (and retries it). */
 export const announceVersion = (job: Published) => fanOut.send(job);
 
+/** A workspace's latest notices, each with its links (the tariff, the sites billed on it). */
 export async function recentNotices(workspaceId: string, limit = 10) {
-	return db
+	const rows = await db
 		.select()
 		.from(notices)
 		.where(eq(notices.workspaceId, workspaceId))
 		.orderBy(desc(notices.createdAt))
 		.limit(limit);
+	return Promise.all(
+		rows.map(async (row) => ({
+			id: row.id,
+			title: row.title,
+			body: row.body,
+			createdAt: row.createdAt.toISOString(),
+			links: await noticeLinks(workspaceId, row.dedupeKey)
+		}))
+	);
 }

@@ -6,3 +6,5 @@ export * from './rate-phrases';
 export * from './charge-sentences';
 export { type TariffSection, describeTariff } from './tariff-summary';
 export { describeTariffDiff } from './version-diff';
+export { referenceBasisText, versionInForceText } from './reference-basis';
+export { beforeFirstVersionNote, periodsText } from './version-notes';

@@ -29,12 +29,7 @@ export const load = (async (event) => {
 		deleteAfter: deleteAfter?.toISOString() ?? null,
 		members: await listMembers(workspace.id),
 		invitations: role === 'owner' ? await listPendingInvitations(workspace.id) : [],
-		notices: (await recentNotices(workspace.id)).map((n) => ({
-			id: n.id,
-			title: n.title,
-			body: n.body,
-			createdAt: n.createdAt.toISOString()
-		}))
+		notices: await recentNotices(workspace.id)
 	};
 }) satisfies PageServerLoad;
 

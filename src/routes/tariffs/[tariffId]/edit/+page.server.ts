@@ -3,13 +3,19 @@ import { requireTariffWrite } from '$lib/server/guard';
 import { tariffFormAction } from '$lib/server/tariffs/form-action';
 import { jsonField, MAX_REVISION, unstorableIn } from '$lib/forms/storable';
 import type { Actions, PageServerLoad } from './$types';
-import { tariffMeta } from '$lib/server/tariffs/tariff-view';
+import { tariffMeta, tariffScope } from '$lib/server/tariffs/tariff-view';
 
 export const load = (async (event) => {
 	const { tariff, versions } = await requireTariffWrite(event, event.params.tariffId);
 	const latest = versions.at(-1)!;
 	return {
-		tariff: { id: tariff.id, name: tariff.name, utility: tariff.utility, revision: tariff.revision },
+		tariff: {
+			id: tariff.id,
+			name: tariff.name,
+			utility: tariff.utility,
+			revision: tariff.revision,
+			scope: tariffScope(tariff).scope
+		},
 		meta: tariffMeta(tariff),
 		latest: {
 			number: latest.number,

@@ -3,6 +3,7 @@ import { listDevices } from '$lib/server/sites/equipment.service';
 import { listScenarios } from '$lib/server/sites/scenario.service';
 import { listSites } from '$lib/server/sites/site.service';
 import { priceScenario } from '$lib/server/sites/results.service';
+import { recentNotices } from '$lib/server/tariffs/tariff-notice.service';
 import type { PageServerLoad } from './$types';
 
 export const load = (async (event) => {
@@ -36,9 +37,11 @@ export const load = (async (event) => {
 				deviceCount: devices.length,
 				thisMonth: months[monthIndex] ?? null,
 				year: months,
-				problem: priced && !priced.ok ? priced.message : baseline ? null : 'No baseline scenario'
+				problem: priced && !priced.ok ? priced.message : baseline ? null : 'No baseline scenario',
+				note: priced?.ok ? priced.note : null
 			};
 		})
 	);
-	return { sites: rows, canEdit: role !== 'viewer', year };
+	// The latest tariff change notices show here too, where the costs they change are.
+	return { sites: rows, canEdit: role !== 'viewer', year, notices: await recentNotices(workspace.id, 3) };
 }) satisfies PageServerLoad;

@@ -1,0 +1,69 @@
+import { expect, test } from '@playwright/test';
+import { gotoReady, signInWithPassword } from './helpers';
+
+// The tariff editor as an editor of a workspace uses it: a new tariff starts empty, the country and the
+// currency are asked once, the preview waits for a form without marked fields, a summer-only
+// time-of-use adder needs no dummy season, and a workspace's own tariff is saved, never "published".
+test('an editor adds a private tariff with a summer-only time-of-use adder', async ({ page }) => {
+	await signInWithPassword(page, 'editor@example.org');
+	await gotoReady(page, '/tariffs/new');
+
+	// Empty, with examples only as placeholders.
+	await expect(page.locator('#meta-timezone')).toHaveValue('');
+	await expect(page.locator('#meta-country')).toHaveValue('');
+	await expect(page.locator('#te-currency')).toHaveValue('');
+	await expect(page.locator('#te-energyCharges-0-perKwh')).toHaveValue('');
+	await expect(page.getByText('Holiday country')).toHaveCount(0);
+	await expect(page.getByLabel('Currency', { exact: true })).toHaveCount(1);
+	const preview = page.getByRole('complementary', { name: /^Preview/ });
+	await expect(preview).toContainText('Fill in the fields to see the preview.');
+	await expect(page.getByRole('button', { name: 'Save the tariff' })).toBeVisible();
+	await expect(page.getByText('private to your workspace; saved versions are never changed')).toBeVisible();
+
+	const name = `Summer adder ${Date.now()} (invented)`;
+	await page.locator('#meta-utility').fill('Invented Test Power');
+	await page.locator('#meta-name').fill(name);
+	await page.locator('#meta-country').fill('US');
+	await page.locator('#meta-timezone').fill('America/Chicago');
+	await page.getByRole('textbox', { name: 'Source', exact: true }).fill('Invented for a test');
+	await page.locator('#te-currency').fill('USD');
+	await page.locator('#te-energyCharges-0-perKwh').fill('0.1');
+
+	// A field marked: no figure.
+	await page.locator('#te-energyCharges-0-perKwh').fill('');
+	await expect(preview).toContainText('Fix the fields marked to see the preview.');
+	await expect(preview).not.toContainText('$');
+	await page.locator('#te-energyCharges-0-perKwh').fill('0.1');
+
+	// The adder: time-of-use, only in June–September, one season, no dummy season for the other months.
+	await page.getByRole('button', { name: 'Add an energy charge' }).click();
+	await page.locator('#te-energyCharges-1-label').fill('Summer peak adder');
+	await page.locator('#te-energyCharges-1-type').selectOption('tou');
+	await page.locator('#te-energyCharges-1-months-only').check();
+	const months = page.locator('#te-energyCharges-1-months');
+	for (const month of ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Oct', 'Nov', 'Dec'])
+		await months.getByRole('button', { name: month, exact: true }).click();
+	await expect(
+		page.locator('#te-energyCharges-1-seasons-0-months').getByRole('button', { pressed: true })
+	).toHaveText(['Jun', 'Jul', 'Aug', 'Sep']);
+	const priced = page.waitForResponse((r) => r.url().endsWith('/api/v1/calculate') && r.status() === 200);
+	await page.locator('#te-energyCharges-1-seasons-0-periods-0-perKwh').fill('0.05');
+	await expect(page.getByText('The tariff checks out.')).toBeVisible();
+	await expect(page.getByText(/Every month needs a season/)).toHaveCount(0);
+
+	await priced;
+	await expect(preview).toContainText('$');
+	await expect(preview).toContainText('calendar year in America/Chicago divided by 12');
+
+	await page.getByRole('button', { name: 'Save the tariff' }).click();
+	await expect(page.getByRole('heading', { name, level: 1 })).toBeVisible();
+	await expect(page.getByRole('status').filter({ hasText: 'saved' })).toHaveText(
+		'Version 1 is saved, private to your workspace.'
+	);
+	await expect(page.getByText(/Summer peak adder, June–September/).first()).toBeVisible();
+	await expect(page.getByRole('link', { name: 'Add a new version' })).toBeVisible();
+	// Our own tariff: no "Make our copy" into the workspace that owns it.
+	await expect(page.getByRole('button', { name: 'Make our copy' })).toHaveCount(0);
+	await expect(page.getByText(/Priced on version 1, in force since/)).toBeVisible();
+	await expect(page.getByText(/Published/)).toHaveCount(0);
+});
