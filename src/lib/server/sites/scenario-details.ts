@@ -52,7 +52,7 @@ async function tariffName(tariffId: string | null): Promise<string | null> {
 
 /**
  * Saves the details if the scenario is still at `expectedRevision` (null: whatever it is now, for API
- * callers that send no revision). A tariff goes through the one rule of who may choose which
+ * callers that send no revision). A changed tariff goes through the one rule of who may choose which
  * (`tariffChoiceIssue`, its issue at `tariffPath`). Nothing changed: nothing written and no event.
  * Answers the revision now, or why nothing was saved.
  */
@@ -69,7 +69,9 @@ export async function saveScenarioDetails(
 		details.tariff === undefined
 			? { tariffId: scenario.tariffId, tariffVersion: scenario.tariffVersion }
 			: { tariffId: details.tariff?.tariffId ?? null, tariffVersion: details.tariff?.tariffVersion ?? null };
-	if (details.tariff !== undefined) {
+	// Keeping the tariff it has is no choice; a new one goes through the rule of who may choose which.
+	const newTariff = choice.tariffId !== scenario.tariffId || choice.tariffVersion !== scenario.tariffVersion;
+	if (details.tariff !== undefined && newTariff) {
 		const issue = await tariffChoiceIssue(chooserFor(access, scenario), choice, tariffPath);
 		if (issue) return { issues: [issue] satisfies RequestIssue[] };
 	}
