@@ -51,7 +51,7 @@ const DEVICE_FIELDS: Record<string, string> = {
 const SCENARIO_FIELDS: Record<string, string> = {
 	name: 'name',
 	description: 'description',
-	status: 'kind',
+	status: 'status',
 	tariff: 'tariff',
 	oneOffCosts: 'one-off costs'
 };
