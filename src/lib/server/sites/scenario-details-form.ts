@@ -8,7 +8,7 @@ import {
 	oneOffCostsSchema,
 	statusSchema,
 	type ScenarioDetails
-} from './scenario-details';
+} from './scenario-details.schema';
 import type { ScenarioRow } from './scenario.service';
 
 /** One one-off cost as typed: the amount still text, so "12a" comes back as typed. */

@@ -2,9 +2,7 @@
 // what is installed or a proposal, its one-off costs and its own tariff. Saved against the scenario's
 // revision like its equipment, and recorded in the trail field by field.
 import { and, eq } from 'drizzle-orm';
-import { z } from 'zod';
-import { list, oneOffCostSchema, SCENARIO_STATUSES, type OneOffCost, type RequestIssue } from '$lib/calc';
-import { scenarioSchema } from '$lib/forms/site.schema';
+import type { RequestIssue } from '$lib/calc';
 import { db } from '../db';
 import { scenarios } from '../db/schema';
 import type { Refusal } from '../http/answers';
@@ -14,31 +12,8 @@ import { audit, type Actor } from '../workspaces/audit';
 import { fieldChanges, scenarioChangeWords } from './change-words';
 import type { ScenarioRow } from './scenario.service';
 import type { SiteRow } from './site.service';
+import type { ScenarioDetails } from './scenario-details.schema';
 import { tariffChoiceIssue } from './tariff-choice';
-
-/** At most this many one-off costs a scenario. */
-export const MAX_ONE_OFF_COSTS = 50;
-
-/** The status and one-off costs as a request or a form sends them; each may be left out. */
-export const statusSchema = z.enum(SCENARIO_STATUSES, {
-	error: 'Choose whether this is what is installed or a proposal'
-});
-export const oneOffCostsSchema = list('One-off costs', oneOffCostSchema, {
-	max: MAX_ONE_OFF_COSTS,
-	tooMany: `A scenario holds at most ${MAX_ONE_OFF_COSTS} one-off costs`
-});
-export const nameSchema = scenarioSchema.shape.name;
-/** The description; null and an empty text both mean none. */
-export const descriptionSchema = z.preprocess((v) => (v === null ? '' : v), scenarioSchema.shape.description);
-
-/** What a save may change; a field left out keeps its value. `tariff` null: the site's tariff. */
-export type ScenarioDetails = {
-	name?: string;
-	description?: string | null;
-	status?: (typeof SCENARIO_STATUSES)[number];
-	oneOffCosts?: OneOffCost[];
-	tariff?: { tariffId: string; tariffVersion: number | null } | null;
-};
 
 /** Who saves, on which scenario of which site; `viaGrant` marks a guest of the site. */
 export type DetailsAccess = { site: SiteRow; scenario: ScenarioRow; user: Actor; viaGrant: boolean };

@@ -12,10 +12,10 @@ import {
 	descriptionSchema,
 	nameSchema,
 	oneOffCostsSchema,
-	saveScenarioDetails,
 	statusSchema,
 	type ScenarioDetails
-} from './scenario-details';
+} from './scenario-details.schema';
+import { saveScenarioDetails } from './scenario-details';
 
 /** A scenario as stored. */
 export type ScenarioRow = typeof scenarios.$inferSelect;

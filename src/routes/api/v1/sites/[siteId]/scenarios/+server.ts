@@ -4,7 +4,7 @@ import { readJsonBody } from '$lib/server/http/body';
 import { requireSiteAccess } from '$lib/server/guard';
 import { createScenario, listScenarios } from '$lib/server/sites/scenario.service';
 import { scenarioSchema } from '$lib/forms/site.schema';
-import { statusSchema } from '$lib/server/sites/scenario-details';
+import { statusSchema } from '$lib/server/sites/scenario-details.schema';
 import type { RequestHandler } from './$types';
 import { invalid } from '$lib/server/http/answers';
 
