@@ -30,7 +30,7 @@ test.describe('a scenario’s details on its page', () => {
 		await gotoReady(page, `/sites/${siteId}/scenarios/${proposal}`);
 		await expect(page.getByTestId('scenario-status')).toContainText('A proposal (bought now).');
 		await page.getByText('Change the name, kind, tariff or one-off costs').click();
-		await page.getByLabel('Name', { exact: true }).fill('Small pump plus an air-lift (invented)');
+		await page.getByLabel('Scenario name').fill('Small pump plus an air-lift (invented)');
 		await page.getByRole('button', { name: 'Add a one-off cost' }).click();
 		await page.getByLabel('What it is').fill('Trench and outdoor circuit');
 		await page.getByLabel('Amount (USD)').fill('lots');
