@@ -70,6 +70,21 @@ test.describe('a scenario’s details on its page', () => {
 			['proposed', 800 + 2500]
 		]);
 
+		// At the tank, on a phone: nothing scrolls sideways and each control is at least 44 px tall.
+		await page.setViewportSize({ width: 390, height: 844 });
+		await page.getByText('Change the name, kind, tariff or one-off costs').click();
+		for (const control of [
+			page.getByText('Change the name, kind, tariff or one-off costs'),
+			page.getByRole('button', { name: 'Remove one-off cost 1' }),
+			page.getByRole('button', { name: 'Add a one-off cost' }),
+			page.getByRole('radio', { name: /What is installed/ }).locator('xpath=ancestor::label'),
+			page.getByRole('button', { name: 'Save the details' })
+		]) {
+			const box = await control.boundingBox();
+			expect(box?.height ?? 0).toBeGreaterThanOrEqual(44);
+		}
+		expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+
 		// The trail says what changed, in words.
 		await gotoReady(page, `/sites/${siteId}`);
 		await expect(page.getByRole('list', { name: 'Changes to this site' })).toContainText(
