@@ -28,7 +28,9 @@ test.describe('a scenario’s details on its page', () => {
 		expect(put.status()).toBe(200);
 
 		await gotoReady(page, `/sites/${siteId}/scenarios/${proposal}`);
-		await expect(page.getByTestId('scenario-status')).toContainText('A proposal (bought now).');
+		await expect(page.getByTestId('scenario-status')).toContainText(
+			'A proposal (bought now): its equipment and one-off costs are its capital'
+		);
 		await page.getByText('Change the name, kind, tariff or one-off costs').click();
 		await page.getByLabel('Scenario name').fill('Small pump plus an air-lift (invented)');
 		await page.getByRole('button', { name: 'Add a one-off cost' }).click();
@@ -96,7 +98,9 @@ test.describe('a scenario’s details on its page', () => {
 		const scenario = hatchery.scenarios.find((s) => s.name === 'Small pump plus an air-lift')!;
 		await signInWithPassword(page, 'viewer@example.org');
 		await gotoReady(page, `/sites/${hatchery.id}/scenarios/${scenario.id}`);
-		await expect(page.getByTestId('scenario-status')).toContainText('A proposal (bought now).');
+		await expect(page.getByTestId('scenario-status')).toContainText(
+			'A proposal (bought now): its equipment and one-off costs are its capital'
+		);
 		await expect(page.getByRole('table', { name: 'One-off costs of this scenario' })).toContainText('$95.00');
 		await expect(page.getByText('Change the name, kind, tariff or one-off costs')).toHaveCount(0);
 		await expect(page.getByRole('button', { name: 'Save the details' })).toHaveCount(0);

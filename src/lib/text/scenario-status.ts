@@ -15,3 +15,9 @@ export const STATUS_MEANING: Record<ScenarioStatus, string> = {
 	proposed:
 		'Its equipment is bought now: purchase, installation and its one-off costs are its capital, and payback weighs that outlay against the yearly saving.'
 };
+
+/** The same, short enough for the top of the scenario page on a phone. */
+export const STATUS_SHORT: Record<ScenarioStatus, string> = {
+	installed: 'only its one-off costs count as capital; a device is bought again when its life ends.',
+	proposed: 'its equipment and one-off costs are its capital, which payback weighs against the saving.'
+};
