@@ -145,6 +145,12 @@ export const routes: Route[] = [
 		path: () => `/sites/${OTHER_SITE}/scenarios/${SCENARIO}`,
 		expect: [303, 404, 404, 404, 404, 404, 404]
 	},
+	{
+		method: 'POST',
+		path: () => `/sites/${SITE}/scenarios/${SCENARIO}?/details`,
+		form: { name: '' },
+		expect: [401, 403, 400, 400, 404, 404, 403]
+	},
 	// The machine API of sites, scenarios and single devices.
 	{ method: 'GET', path: () => `/api/v1/sites/${SITE}`, expect: [401, 200, 200, 200, 404, 404, 200] },
 	{

@@ -1,7 +1,7 @@
 import type { PeakPoint } from './demand';
 import type { SpanUsage } from './energy';
 import type { DeviceLoad } from './loads';
-import { roundMoney } from './rounding';
+import { apportionMoney } from './rounding';
 
 export interface DemandShare {
 	amount: number;
@@ -16,6 +16,8 @@ export interface AllocationInput {
 	ridersPerKwh: number;
 	demand: readonly DemandShare[];
 	taxRate: number;
+	/** What the rounded shares must add up to: the bill's total less its rounded shared cost. */
+	devicesTotal: number;
 }
 
 /** kWh over the period of a device (or a group's sums): standby all its hours, plus running's extra. */
@@ -36,15 +38,15 @@ export function loadWeighted(load: DeviceLoad, usage: SpanUsage, e: number): num
  * Each device's share of a period's bill: its energy charges at the rates its own intervals met (a
  * tiered charge at the period's average tier rate), riders on its kWh, its share of each demand charge
  * (its kW at the peak interval over the peak kW), and the taxes on those. Fixed charges and the minimum
- * line are shared cost. The exact shares add up to the exact bill, so the rounded ones add up to the
- * total within a cent per line.
+ * line are shared cost. The exact shares add up to the exact bill; the bill rounds each line, so the
+ * shares are rounded together (`apportionMoney`) to add up, with the shared cost, to its total exactly.
  */
 export function allocate(
 	devices: readonly DeviceLoad[],
 	usage: SpanUsage,
 	input: AllocationInput
 ): Array<{ kwh: number; cost: number }> {
-	return devices.map((device) => {
+	const exact = devices.map((device) => {
 		const extraKw = device.runKw - device.standbyKw;
 		const kwh = loadKwh(device, usage);
 		let cost = kwh * input.ridersPerKwh;
@@ -57,6 +59,11 @@ export function allocate(
 			if (!charge.peak || charge.peak.kw <= 0 || mayRun == null) continue;
 			cost += (charge.amount * (device.standbyKw + mayRun * extraKw)) / charge.peak.kw;
 		}
-		return { kwh, cost: roundMoney(cost * (1 + input.taxRate)) };
+		return { kwh, cost: cost * (1 + input.taxRate) };
 	});
+	const cents = apportionMoney(
+		exact.map((share) => share.cost),
+		input.devicesTotal
+	);
+	return exact.map((share, i) => ({ kwh: share.kwh, cost: cents[i] ?? 0 }));
 }

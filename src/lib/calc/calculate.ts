@@ -54,8 +54,12 @@ function periodResult(context: Context, span: BillingSpan, days: SpanDays): Peri
 		tierRates,
 		ridersPerKwh: tariff.riders.reduce((sum, rider) => sum + rider.perKwh, 0),
 		demand: demandShares,
-		taxRate: bill.taxRate
+		taxRate: bill.taxRate,
+		devicesTotal: bill.total - roundMoney(bill.shared * (1 + bill.taxRate))
 	});
+	// What the devices' shares leave of the total; it differs from the rounded shared cost only when no
+	// device used anything, and then the shared cost takes the whole bill.
+	const deviceCents = shares.reduce((sum, share) => sum + Math.round(share.cost * 100), 0);
 	return {
 		label: span.label,
 		from: span.from,
@@ -66,7 +70,7 @@ function periodResult(context: Context, span: BillingSpan, days: SpanDays): Peri
 		peakKw: demand.spanPeak(days, () => WHOLE_DAY, 15)?.kw ?? 0,
 		charges: bill.charges,
 		total: bill.total,
-		sharedCost: roundMoney(bill.shared * (1 + bill.taxRate)),
+		sharedCost: roundMoney(bill.total - deviceCents / 100),
 		equipment: request.equipment.map((device, i) => ({
 			name: device.name,
 			...(shares[i] ?? { kwh: 0, cost: 0 })

@@ -183,7 +183,8 @@ export async function buildComparison(event: RequestEvent, query: ComparisonQuer
 			query,
 			scenarios,
 			loaded.map((l) => l.site.timezone),
-			base.site.timezone
+			base.site.timezone,
+			result.scenarios.map((s) => s.status)
 		)
 	};
 	return { ok: true, comparison: { report, request: parsed.data, specs: loaded.map((l) => l.specs) } };

@@ -29,15 +29,15 @@ export const RULES: ReadonlyArray<readonly [string, string]> = [
 	],
 	[
 		'Rounding',
-		'Each charge line is rounded to the cent, halves away from zero, as a bill is; the month’s total is the sum of the rounded lines, and the year’s cost the sum of the months. kWh are not rounded.'
+		'Each charge line is rounded to the cent, halves away from zero, as a bill is; the month’s total is the sum of the rounded lines, and the year’s cost the sum of the months. The devices’ shares are rounded together (largest remainder: each is cut to the cent and the cents left go to the shares that lost most), so they add up with the shared cost to the month’s total exactly. kWh are not rounded.'
 	],
 	[
 		'Each device’s share',
-		'A device’s cost is its energy charges at the rates its own intervals met (a tiered charge at the month’s average tier rate), its riders, its part of each demand charge (its kW at the peak), and the taxes on those, rounded to the cent. Fixed charges and the minimum line are shared cost; devices + shared cost = the bill, within rounding.'
+		'A device’s cost is its energy charges at the rates its own intervals met (a tiered charge at the month’s average tier rate), its riders, its part of each demand charge (its kW at the peak), and the taxes on those. Fixed charges and the minimum line are shared cost, rounded to the cent; devices + shared cost = the bill, to the cent.'
 	],
 	[
 		'Comparing scenarios',
-		'Capital cost = Σ quantity × (purchase + installation) + one-off costs. Year 0’s cash flow is the capital cost; year t’s is the annual cost × (1 + escalation)^(t − 1) + maintenance + the purchase price of every device whose life ends in year t (before the horizon). Lifecycle cost = Σ cash flow ÷ (1 + discount rate)^year. Savings = the baseline’s annual cost − this scenario’s. Simple payback = extra capital over the baseline ÷ savings (none when nothing is saved). CO₂ = kWh × the emission factor.'
+		'A scenario is a proposal (bought now) or what is installed (already paid for). A proposal’s capital cost = Σ quantity × (purchase + installation) + its one-off costs; what is installed has only its one-off costs as capital. One-off costs are part of year 0 either way. Year 0’s cash flow is the capital cost; year t’s is the annual cost × (1 + escalation)^(t − 1) + maintenance + the purchase price of every device, installed or proposed, whose life ends in year t (before the horizon). Lifecycle cost = Σ cash flow ÷ (1 + discount rate)^year. Savings = the baseline’s annual cost − this scenario’s. Simple payback = extra capital over the baseline ÷ savings (none when nothing is saved); against an installed baseline that is the proposal’s whole outlay. CO₂ = kWh × the emission factor.'
 	]
 ];
 

@@ -5,6 +5,7 @@ import { devices, scenarios, type DeviceSpec } from '../db/schema';
 import { audit, type Actor } from '../workspaces/audit';
 import type { ScenarioRow } from './scenario.service';
 import { StaleWrite, type SiteRow } from './site.service';
+import { deviceTrail, onlyReordered } from './device-trail';
 
 /** A scenario's devices in list order. */
 export async function listDevices(scenarioId: string) {
@@ -13,7 +14,8 @@ export async function listDevices(scenarioId: string) {
 
 /**
  * Saves a scenario's whole equipment list (order included) if nobody saved since `expectedRevision`.
- * The trail records which devices were added, removed or changed.
+ * The trail records each device added, removed or changed, with the old and new value of each field
+ * changed; a save that changes nothing records nothing.
  */
 export async function saveDevices(
 	site: SiteRow,
@@ -35,25 +37,28 @@ export async function saveDevices(
 			await tx
 				.insert(devices)
 				.values(specs.map((spec, position) => ({ scenarioId: scenario.id, position, spec })));
-		const names = (list: DeviceSpec[]) => new Map(list.map((d) => [d.name, JSON.stringify(d)]));
-		const old = names(before.map((d) => d.spec));
-		const now = names(specs);
-		const added = [...now.keys()].filter((n) => !old.has(n));
-		const removed = [...old.keys()].filter((n) => !now.has(n));
-		const changed = [...now.keys()].filter((n) => old.has(n) && old.get(n) !== now.get(n));
-		const parts = [
-			added.length && `added ${added.join(', ')}`,
-			removed.length && `removed ${removed.join(', ')}`,
-			changed.length && `changed ${changed.join(', ')}`
-		].filter(Boolean);
-		await audit(tx, actor, {
+		const old = before.sort((a, b) => a.position - b.position).map((d) => d.spec);
+		const entries = deviceTrail(old, specs, site.currency);
+		const event = {
 			workspaceId: site.workspaceId,
 			siteId: site.id,
-			entity: 'device',
-			entityId: scenario.id,
-			action: 'saved',
-			summary: `Equipment of "${scenario.name}": ${parts.join('; ') || 'reordered'}`
-		});
+			entity: 'device' as const,
+			entityId: scenario.id
+		};
+		// One event a device actually added, removed or changed; rows sent back untouched record nothing.
+		for (const entry of entries)
+			await audit(tx, actor, {
+				...event,
+				action: entry.action,
+				summary: `Equipment of "${scenario.name}": ${entry.words}`,
+				changes: entry.changes ?? undefined
+			});
+		if (entries.length === 0 && onlyReordered(old, specs))
+			await audit(tx, actor, {
+				...event,
+				action: 'reordered',
+				summary: `Equipment of "${scenario.name}": reordered`
+			});
 		return bumped.revision;
 	});
 }

@@ -2,14 +2,20 @@
 // archive, delete, restore, tariff).
 import { and, asc, eq } from 'drizzle-orm';
 import { z } from 'zod';
-import { parseRequest, type RequestIssue } from '$lib/calc';
-import { scenarioSchema } from '$lib/forms/site.schema';
+import { parseRequest, type RequestIssue, type ScenarioStatus } from '$lib/calc';
 import { db } from '../db';
 import { devices, scenarios } from '../db/schema';
 import { audit, type Actor } from '../workspaces/audit';
-import { chooserFor } from '../tariffs/usable';
+import { MAX_REVISION } from '$lib/forms/storable';
 import type { SiteRow } from './site.service';
-import { tariffChoiceIssue } from './tariff-choice';
+import {
+	descriptionSchema,
+	nameSchema,
+	oneOffCostsSchema,
+	statusSchema,
+	type ScenarioDetails
+} from './scenario-details.schema';
+import { saveScenarioDetails } from './scenario-details';
 
 /** A scenario as stored. */
 export type ScenarioRow = typeof scenarios.$inferSelect;
@@ -30,6 +36,8 @@ export const scenarioJson = (s: ScenarioRow) => ({
 	name: s.name,
 	description: s.description,
 	isBaseline: s.isBaseline,
+	status: s.status,
+	oneOffCosts: s.oneOffCosts,
 	archived: !!s.archivedAt,
 	tariff: s.tariffId ? { tariffId: s.tariffId, tariffVersion: s.tariffVersion } : null,
 	revision: s.revision,
@@ -45,7 +53,7 @@ export async function findScenario(scenarioId: string) {
 /** A blank scenario, or a copy of another one's equipment to try a change on. */
 export async function createScenario(
 	site: SiteRow,
-	input: { name: string; description: string | null },
+	input: { name: string; description: string | null; status?: ScenarioStatus },
 	fromId: string | null,
 	actor: Actor
 ) {
@@ -70,6 +78,7 @@ export async function createScenario(
 				name: input.name,
 				description: input.description,
 				position,
+				status: input.status ?? 'proposed',
 				tariffId: source?.tariffId ?? null,
 				tariffVersion: source?.tariffVersion ?? null
 			})
@@ -168,12 +177,20 @@ export const asksToRestore = (body: unknown) =>
 	!!body && typeof body === 'object' && (body as Record<string, unknown>).restored === true;
 
 const ONE_CHANGE =
-	'Send one change per request: name and description, archived, baseline, restored or tariff';
+	'Send one change per request: the details (name, description, status, one-off costs), archived, baseline, restored or tariff';
 
 /** The changes PATCH takes; the description also takes null (none). */
 const changeSchema = z.strictObject({
-	name: scenarioSchema.shape.name.optional(),
-	description: z.preprocess((v) => (v === null ? '' : v), scenarioSchema.shape.description),
+	expectedRevision: z
+		.number({ error: 'expectedRevision is the revision you edited, a whole number' })
+		.int('expectedRevision is the revision you edited, a whole number')
+		.min(0)
+		.max(MAX_REVISION)
+		.optional(),
+	name: nameSchema.optional(),
+	description: descriptionSchema,
+	status: statusSchema.optional(),
+	oneOffCosts: oneOffCostsSchema.optional(),
 	archived: z.boolean({ error: 'archived is true or false' }).optional(),
 	baseline: z
 		.literal(true, { error: 'Send baseline: true; to move the baseline, make another scenario it' })
@@ -193,12 +210,17 @@ const changeSchema = z.strictObject({
 		.optional()
 });
 
-/** Why a PATCH was refused: field issues (400), or a restore of a scenario that is not deleted (409). */
-export type PatchRefusal = { issues: RequestIssue[] } | { notDeleted: true };
+/**
+ * Why a PATCH was refused: field issues (400), a stale `expectedRevision` (409 with the current one), or a
+ * restore of a scenario that is not deleted (409).
+ */
+export type PatchRefusal = { issues: RequestIssue[] } | { conflict: number } | { notDeleted: true };
 
 /**
- * Applies a PATCH body to a scenario: exactly one change (name and description together count as one),
- * a baseline only of a live scenario, a restore only of a deleted one, a tariff the caller may choose.
+ * Applies a PATCH body to a scenario: exactly one change (the details — name, description, status and
+ * one-off costs — together count as one), a baseline only of a live scenario, a restore only of a
+ * deleted one, a tariff the caller may choose. The details and the tariff are saved against
+ * `expectedRevision` when it is sent, and recorded field by field in the trail.
  * Answers null when the change is saved, else why it was refused.
  */
 export async function patchScenario(
@@ -211,7 +233,7 @@ export async function patchScenario(
 	const change = parsed.data;
 	const has = (key: string) => Object.hasOwn(body as object, key);
 	const kinds = [
-		has('name') || has('description'),
+		['name', 'description', 'status', 'oneOffCosts'].some(has),
 		...['archived', 'baseline', 'restored', 'tariff'].map(has)
 	];
 	if (kinds.filter(Boolean).length !== 1) return { issues: [{ path: '', message: ONE_CHANGE }] };
@@ -225,18 +247,23 @@ export async function patchScenario(
 		if (scenario.archivedAt)
 			return { issues: [{ path: 'baseline', message: 'Bring the scenario back from the archive first' }] };
 		await changeScenario(site, scenario, { kind: 'baseline' }, user);
-	} else if (change.tariff !== undefined) {
-		const choice = {
-			tariffId: change.tariff?.tariffId ?? null,
-			tariffVersion: change.tariff?.tariffVersion ?? null
-		};
-		const issue = await tariffChoiceIssue(chooserFor(access, scenario), choice, 'tariff.');
-		if (issue) return { issues: [issue] };
-		await changeScenario(site, scenario, { kind: 'tariff', ...choice }, user);
 	} else {
-		const name = change.name ?? scenario.name;
-		const description = has('description') ? change.description : scenario.description;
-		await changeScenario(site, scenario, { kind: 'rename', name, description }, user);
+		const details: ScenarioDetails =
+			change.tariff !== undefined
+				? {
+						tariff: change.tariff && {
+							tariffId: change.tariff.tariffId,
+							tariffVersion: change.tariff.tariffVersion ?? null
+						}
+					}
+				: {
+						name: change.name,
+						description: has('description') ? change.description : undefined,
+						status: change.status,
+						oneOffCosts: change.oneOffCosts
+					};
+		const saved = await saveScenarioDetails(access, details, change.expectedRevision ?? null);
+		if ('conflict' in saved || 'issues' in saved) return saved;
 	}
 	return null;
 }

@@ -14,7 +14,7 @@ import {
 	scenarioJson,
 	UNDO_MS
 } from '$lib/server/sites/scenario.service';
-import { invalid, methodNotAllowed, PRIVATE } from '$lib/server/http/answers';
+import { conflict, invalid, methodNotAllowed, PRIVATE } from '$lib/server/http/answers';
 import type { RequestHandler } from './$types';
 
 /**
@@ -28,16 +28,20 @@ async function accessForUndo(event: RequestEvent, scenarioId: string) {
 	return { ...(await requireSiteAccess(event, found.siteId, 'editor')), scenario: found };
 }
 
-/** GET /api/v1/scenarios/:id — the scenario, with its tariff override (null: the site's tariff). */
+/**
+ * GET /api/v1/scenarios/:id — the scenario: its status ('installed': already paid for; 'proposed': bought
+ * now), one-off costs, and tariff override (null: the site's tariff).
+ */
 export const GET: RequestHandler = async (event) => {
 	const { scenario } = await requireScenarioAccess(event, event.params.scenarioId, 'viewer');
 	return json(scenarioJson(scenario), { headers: PRIVATE });
 };
 
 /**
- * PATCH — one change: `{ name?, description? }`, `{ archived: true|false }`, `{ baseline: true }`,
- * `{ tariff: { tariffId, tariffVersion? } | null }`, or `{ restored: true }` within the undo window of a
- * DELETE. Answers the scenario as it now is.
+ * PATCH — one change: the details `{ name?, description?, status?, oneOffCosts? }`, `{ archived:
+ * true|false }`, `{ baseline: true }`, `{ tariff: { tariffId, tariffVersion? } | null }`, or `{ restored:
+ * true }` within the undo window of a DELETE. The details and the tariff take `expectedRevision`: when
+ * someone saved since, 409 with the current revision. Answers the scenario as it now is.
  */
 export const PATCH: RequestHandler = async (event) => {
 	requireUser(event);
@@ -49,6 +53,7 @@ export const PATCH: RequestHandler = async (event) => {
 	const refused = await patchScenario(access, read.body);
 	if (refused && 'notDeleted' in refused)
 		return apiError(409, 'not_deleted', 'This scenario is not deleted.');
+	if (refused && 'conflict' in refused) return conflict(refused.conflict);
 	if (refused) return invalid(refused.issues);
 	const now = await findScenario(access.scenario.id);
 	return json(scenarioJson(now!), { status: 200 });

@@ -4,6 +4,7 @@ import { readJsonBody } from '$lib/server/http/body';
 import { requireSiteAccess } from '$lib/server/guard';
 import { createScenario, listScenarios } from '$lib/server/sites/scenario.service';
 import { scenarioSchema } from '$lib/forms/site.schema';
+import { statusSchema } from '$lib/server/sites/scenario-details.schema';
 import type { RequestHandler } from './$types';
 import { invalid } from '$lib/server/http/answers';
 
@@ -18,6 +19,8 @@ export const GET: RequestHandler = async (event) => {
 				name: s.name,
 				description: s.description,
 				isBaseline: s.isBaseline,
+				status: s.status,
+				oneOffCosts: s.oneOffCosts,
 				archived: !!s.archivedAt,
 				revision: s.revision
 			}))
@@ -26,12 +29,17 @@ export const GET: RequestHandler = async (event) => {
 	);
 };
 
-/** POST `{ name, description?, fromScenarioId? }` — a blank scenario or a duplicate. */
+/**
+ * POST `{ name, description?, status?, fromScenarioId? }` — a blank scenario or a duplicate; `status` is
+ * 'proposed' (bought now) unless it says 'installed' (already paid for).
+ */
 export const POST: RequestHandler = async (event) => {
 	const { site, user } = await requireSiteAccess(event, event.params.siteId, 'editor');
 	const read = await readJsonBody(event);
 	if (!read.ok) return read.response;
-	const parsed = scenarioSchema.extend({ fromScenarioId: z.uuid().optional() }).safeParse(read.body);
+	const parsed = scenarioSchema
+		.extend({ fromScenarioId: z.uuid().optional(), status: statusSchema.optional() })
+		.safeParse(read.body);
 	if (!parsed.success)
 		return invalid(parsed.error.issues.map((i) => ({ path: i.path.join('.'), message: i.message })));
 	const from = parsed.data.fromScenarioId;
@@ -39,7 +47,7 @@ export const POST: RequestHandler = async (event) => {
 		return invalid([{ path: 'fromScenarioId', message: 'Not a scenario of this site' }]);
 	const id = await createScenario(
 		site,
-		{ name: parsed.data.name, description: parsed.data.description },
+		{ name: parsed.data.name, description: parsed.data.description, status: parsed.data.status },
 		from ?? null,
 		user
 	);
