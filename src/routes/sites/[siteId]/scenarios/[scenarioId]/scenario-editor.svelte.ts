@@ -5,7 +5,11 @@ import { yearlyDifference } from './against-saved';
 
 export type Row = { key: string; spec: DeviceSpec };
 type Issue = { path: string; message: string };
-type Priced = CalculateResponse & { tariff?: { id: string; name: string; utility: string } };
+type Priced = CalculateResponse & {
+	tariff?: { id: string; name: string; utility: string };
+	/** Months priced on the tariff's first version because it starts later, in words. */
+	note?: string | null;
+};
 /** A list's yearly cost, keyed by the list's JSON, so a figure is only ever set against its own list. */
 type YearCost = { json: string; perYear: number };
 

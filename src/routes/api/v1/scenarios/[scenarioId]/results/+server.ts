@@ -14,7 +14,7 @@ const yearPeriod = () => ({ start: `${new Date().getUTCFullYear()}-01`, months: 
 function answer(priced: Awaited<ReturnType<typeof priceScenario>>) {
 	if (priced.ok)
 		return json(
-			{ ...priced.result, tariff: priced.tariff },
+			{ ...priced.result, tariff: priced.tariff, note: priced.note },
 			{ headers: { 'Cache-Control': 'private, no-store' } }
 		);
 	if (priced.invalid) return json({ ...priced.invalid, message: priced.message }, { status: 400 });
