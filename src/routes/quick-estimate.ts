@@ -83,20 +83,25 @@ export function toRequest(devices: QuickDevice[], rate: Rate, month: string, tim
 						fixedCharges: rate.perMonth !== 0 ? [{ label: 'Customer charge', perMonth: rate.perMonth }] : [],
 						energyCharges: [{ label: 'Energy', type: 'flat', perKwh: rate.perKwh }]
 					},
-		equipment: devices.map((d) => ({
-			name: d.name || 'Device',
-			category: 'other',
-			quantity: d.quantity,
-			power:
-				d.powerMode === 'watts'
-					? { watts: d.watts }
-					: { amps: d.amps, volts: d.volts, powerFactor: 1, phases: 1 },
-			schedule:
-				d.runMode === 'always'
-					? { type: 'always' }
-					: { type: 'hours', hoursPerDay: d.hoursPerDay, days: 'all' }
-		}))
+		equipment: toEquipment(devices)
 	};
+}
+
+/** The devices as the core's equipment (each unit's power and when it runs); a site keeps them as they are. */
+export function toEquipment(devices: QuickDevice[]) {
+	return devices.map((d) => ({
+		name: d.name || 'Device',
+		category: 'other' as const,
+		quantity: d.quantity,
+		power:
+			d.powerMode === 'watts'
+				? { watts: d.watts }
+				: { amps: d.amps, volts: d.volts, powerFactor: 1, phases: 1 },
+		schedule:
+			d.runMode === 'always'
+				? { type: 'always' as const }
+				: { type: 'hours' as const, hoursPerDay: d.hoursPerDay, days: 'all' as const }
+	}));
 }
 
 export type Issue = { path: string; message: string };
