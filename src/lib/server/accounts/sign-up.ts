@@ -109,7 +109,8 @@ export async function confirmationFor(token: string): Promise<string | null> {
 	return (await pendingSignUp(openToken(token, 'verify-email')))?.email ?? null;
 }
 
-export type Confirmation = { email: string; firstSite: FirstSite | null } | 'wrong-password' | 'closed';
+/** A confirmed sign-up: its address, and the first site when it carried a quick estimate. */
+export type Confirmation = { email: string; firstSite?: FirstSite } | 'wrong-password' | 'closed';
 
 /**
  * Confirms a sign-up: the link must be open and the password the one chosen in that same sign-up. Only
@@ -130,8 +131,8 @@ export async function confirmSignUp(token: string, password: string): Promise<Co
 		if (!user) return null;
 		await voidTokens(tx, pending!.userId, 'verify-email');
 		const estimate = readKeptEstimate(pending!.estimate);
-		const firstSite = estimate ? await createFirstSite(tx, user, estimate) : null;
-		return { email: user.email, firstSite };
+		if (!estimate) return { email: user.email };
+		return { email: user.email, firstSite: await createFirstSite(tx, user, estimate) };
 	});
 	return confirmed ?? 'closed';
 }
