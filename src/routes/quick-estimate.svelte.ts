@@ -1,8 +1,11 @@
 import type { CalculateResponse } from '$lib/calc';
 import { LatestRequest, RequestFailed } from '$lib/client/latest-request.svelte';
-import type { Issue } from './quick-estimate';
+import { requestIssues, type Issue, type toRequest } from './quick-estimate';
 
-/** Debounced, cancelling fetch of /api/v1/calculate: a newer edit aborts the request still in flight. */
+/**
+ * Debounced, cancelling fetch of /api/v1/calculate: a newer edit aborts the request still in flight.
+ * Entries the core's schema refuses are never sent: their messages show at once, by their fields.
+ */
 export class QuickEstimate {
 	issues = $state<Issue[]>([]);
 	#latest = new LatestRequest<unknown, CalculateResponse>({
@@ -37,7 +40,15 @@ export class QuickEstimate {
 		return this.#latest.pending;
 	}
 
-	request(body: unknown, delayMs = 250) {
+	/** Asks for the estimate of `body` after the pause, or, when it cannot be priced, marks its fields. */
+	request(body: ReturnType<typeof toRequest>, delayMs = 250) {
+		const issues = requestIssues(body);
+		if (issues.length) {
+			this.#latest.cancel();
+			this.issues = issues;
+			return;
+		}
+		this.issues = [];
 		this.#latest.request(body, delayMs);
 	}
 

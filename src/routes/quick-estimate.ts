@@ -1,13 +1,18 @@
-/** One line of the public quick estimate, as the person types it. */
+import { calculateRequestSchema, parseRequest } from '$lib/calc';
+
+/**
+ * One line of the public quick estimate, as the person types it. A number box left empty (or holding
+ * something that is not a number) reads null: it is sent as it is and refused with the field's message.
+ */
 export type QuickDevice = {
 	name: string;
-	quantity: number;
+	quantity: number | null;
 	powerMode: 'watts' | 'amps';
-	watts: number;
-	amps: number;
-	volts: number;
+	watts: number | null;
+	amps: number | null;
+	volts: number | null;
 	runMode: 'always' | 'hours';
-	hoursPerDay: number;
+	hoursPerDay: number | null;
 };
 
 export const newDevice = (): QuickDevice => ({
@@ -35,7 +40,8 @@ export type LibraryRate = {
 	holidays: unknown;
 	versionNumber: number;
 };
-export type Rate = { kind: 'flat'; perKwh: number; perMonth: number } | ({ kind: 'library' } & LibraryRate);
+export type Rate =
+	{ kind: 'flat'; perKwh: number | null; perMonth: number | null } | ({ kind: 'library' } & LibraryRate);
 
 type ExportedVersion = {
 	meta: { name: string; utility: string; timezone: string; holidays: unknown };
@@ -74,23 +80,73 @@ export function toRequest(devices: QuickDevice[], rate: Rate, month: string, tim
 				? rate.structure
 				: {
 						currency: 'USD',
-						fixedCharges: rate.perMonth > 0 ? [{ label: 'Customer charge', perMonth: rate.perMonth }] : [],
+						fixedCharges: rate.perMonth !== 0 ? [{ label: 'Customer charge', perMonth: rate.perMonth }] : [],
 						energyCharges: [{ label: 'Energy', type: 'flat', perKwh: rate.perKwh }]
 					},
-		equipment: devices.map((d) => ({
-			name: d.name || 'Device',
-			category: 'other',
-			quantity: d.quantity,
-			power:
-				d.powerMode === 'watts'
-					? { watts: d.watts }
-					: { amps: d.amps, volts: d.volts, powerFactor: 1, phases: 1 },
-			schedule:
-				d.runMode === 'always'
-					? { type: 'always' }
-					: { type: 'hours', hoursPerDay: d.hoursPerDay, days: 'all' }
-		}))
+		equipment: toEquipment(devices)
 	};
 }
 
+/** The devices as the core's equipment (each unit's power and when it runs); a site keeps them as they are. */
+export function toEquipment(devices: QuickDevice[]) {
+	return devices.map((d) => ({
+		name: d.name || 'Device',
+		category: 'other' as const,
+		quantity: d.quantity,
+		power:
+			d.powerMode === 'watts'
+				? { watts: d.watts }
+				: { amps: d.amps, volts: d.volts, powerFactor: 1, phases: 1 },
+		schedule:
+			d.runMode === 'always'
+				? { type: 'always' as const }
+				: { type: 'hours' as const, hoursPerDay: d.hoursPerDay, days: 'all' as const }
+	}));
+}
+
 export type Issue = { path: string; message: string };
+
+/**
+ * The problems the calculation API would answer for this request, found in the browser with the core's
+ * own schema, so an entry that cannot be priced is shown at its field and never sent (no 400).
+ */
+export function requestIssues(request: ReturnType<typeof toRequest>): Issue[] {
+	const parsed = parseRequest(calculateRequestSchema, request);
+	return parsed.success ? [] : parsed.error.issues;
+}
+
+/** The power of one unit in watts, as the person gave it; null while a box is empty. */
+export function unitWattsOf(d: QuickDevice): number | null {
+	if (d.powerMode === 'watts') return d.watts;
+	return d.amps === null || d.volts === null ? null : d.amps * d.volts;
+}
+
+/**
+ * A time zone in words a grower reads, with its IANA name for the record: "Central European Time
+ * (Europe/Berlin)", "Coordinated Universal Time (UTC)". Falls back to the bare name where the browser
+ * has no words for it.
+ */
+export function zoneWords(zone: string, at = new Date()): string {
+	const named = (style: 'longGeneric' | 'long') => {
+		try {
+			return new Intl.DateTimeFormat('en-US', { timeZone: zone, timeZoneName: style })
+				.formatToParts(at)
+				.find((part) => part.type === 'timeZoneName')?.value;
+		} catch {
+			return undefined;
+		}
+	};
+	// A zone without a generic name ("UTC") gets "GMT+00:00" from longGeneric; its long name reads better.
+	const generic = named('longGeneric');
+	const words = generic && !generic.startsWith('GMT') ? generic : (named('long') ?? generic);
+	const name = zone.replaceAll('_', ' ');
+	return words && words !== zone ? `${words} (${name})` : name;
+}
+
+/** "January 2027" for "2027-01". */
+export const monthName = (month: string) =>
+	new Date(`${month}-01T12:00:00Z`).toLocaleDateString('en-US', {
+		month: 'long',
+		year: 'numeric',
+		timeZone: 'UTC'
+	});

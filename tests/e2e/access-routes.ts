@@ -312,6 +312,10 @@ export const routes: Route[] = [
 		// Someone already signed in is sent on to their workspaces.
 		expect: [200, 303, 303, 303, 303, 303, 303]
 	})),
+	// Sign-in's landing sends everyone on (to sign-in, or to their sites); the welcome after a kept estimate
+	// reads its site through the guard.
+	{ method: 'GET', path: () => '/signin/landing', expect: [303, 303, 303, 303, 303, 303, 303] },
+	{ method: 'GET', path: () => `/signup/welcome?site=${SITE}`, expect: [303, 200, 200, 200, 404, 404, 200] },
 	...['/reset?token=x', '/signup/confirm?token=x', '/invite/not-a-real-invitation-token-000'].map((page) => ({
 		method: 'GET' as const,
 		path: () => page,

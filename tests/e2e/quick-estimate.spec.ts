@@ -9,7 +9,7 @@ test.describe('the public quick estimate', () => {
 		page
 	}) => {
 		await gotoReady(page, '/');
-		await page.getByLabel('Energy price (per kWh)').fill('0.34');
+		await page.getByLabel('Energy price (USD per kWh)').fill('0.34');
 		await page.getByLabel('Billing month').fill('2027-06');
 		const result = page.getByRole('region', { name: /Estimate for June 2027/ });
 		// 0.12 kW × 720 h = 86.4 kWh; × 0.34 = 29.376, rounded to the cent.
@@ -60,5 +60,58 @@ test.describe('the public quick estimate', () => {
 		await expect(result).toContainText('Residential time-of-use (Northmere Electric (invented)), version 1');
 		await page.getByLabel('Billing month').fill('2027-06');
 		await expect(page.getByRole('region', { name: /Estimate for June 2027/ })).toContainText('version 2');
+	});
+
+	test('says which month and time zone the hours are counted in', async ({ page }) => {
+		await gotoReady(page, '/?month=2027-01');
+		const result = page.getByRole('region', { name: 'Estimate for January 2027 (31 days)' });
+		// 31 days × 24 hours = 744 hours in UTC, which has no daylight-saving change.
+		await expect(result).toContainText('January 2027: 744 hours, on Coordinated Universal Time (UTC).');
+		await expect(result.getByRole('columnheader', { name: 'kWh in January 2027' })).toBeVisible();
+	});
+
+	test('holds an invalid entry back: its field is marked and no request is sent', async ({ page }) => {
+		await gotoReady(page, '/');
+		await expect(page.getByRole('row', { name: /Total/ })).toBeVisible();
+		const sent: string[] = [];
+		const refused: number[] = [];
+		page.on('request', (r) => {
+			if (r.url().endsWith('/api/v1/calculate')) sent.push(r.postData() ?? '');
+		});
+		page.on('response', (r) => {
+			if (r.url().endsWith('/api/v1/calculate') && r.status() >= 400) refused.push(r.status());
+		});
+		await page.getByLabel('Amps (A)').fill('');
+		// Marked at once, in the browser: before this change the mark came only with the server's 400.
+		await expect(page.getByLabel('Amps (A)')).toHaveAttribute('aria-invalid', 'true');
+		await expect(page.getByText('Amps must be a number')).toHaveCount(1);
+		await expect(page.getByText('Fix the highlighted fields to see the estimate.')).toBeVisible();
+		// Then a good value: its answer arrives, and it is the only request sent since the page settled.
+		const answered = page.waitForResponse((r) => r.url().endsWith('/api/v1/calculate') && r.ok());
+		await page.getByLabel('Amps (A)').fill('2');
+		await answered;
+		await expect(page.getByLabel('Amps (A)')).not.toHaveAttribute('aria-invalid', 'true');
+		expect(sent.map((body) => JSON.parse(body).equipment[0].power.amps)).toEqual([2]);
+		expect(refused).toEqual([]);
+	});
+
+	test('keeps the entries in the address: a reload and the link bring them back', async ({ page }) => {
+		await gotoReady(page, '/');
+		await page.getByLabel('Billing month').fill('2027-03');
+		await page.getByLabel('Name', { exact: true }).fill('Raft pump');
+		await page.getByRole('radio', { name: 'Watts' }).check();
+		await page.getByLabel('Watts (W)').fill('85');
+		await page.getByLabel('Energy price (USD per kWh)').fill('0.21');
+		await expect(page).toHaveURL(/month=2027-03/);
+		await expect(page).toHaveURL(/d=1_85W_always_Raft\+pump/);
+
+		await page.reload();
+		await expect(page.locator('body[data-hydrated="true"]')).toBeAttached();
+		await expect(page.getByLabel('Name', { exact: true })).toHaveValue('Raft pump');
+		await expect(page.getByLabel('Watts (W)')).toHaveValue('85');
+		await expect(page.getByLabel('Energy price (USD per kWh)')).toHaveValue('0.21');
+		await expect(page.getByRole('region', { name: /Estimate for March 2027/ })).toBeVisible();
+		const link = page.getByRole('link', { name: 'Link to this estimate' });
+		await expect(link).toHaveAttribute('href', /kwh=0\.21/);
 	});
 });

@@ -11,11 +11,13 @@ import { safeNext } from '$lib/safe-next';
 import type { Actions, PageServerLoad } from './$types';
 
 const NO_MATCH = 'That e-mail and password do not match an account.';
+/** With no page to return to, sign-in lands where the person's sites are (signin/landing). */
+const LANDING = '/signin/landing';
 
 export const load = (({ locals, url }) => {
-	if (locals.user) redirect(303, safeNext(url.searchParams.get('next')));
+	if (locals.user) redirect(303, safeNext(url.searchParams.get('next'), LANDING));
 	return {
-		next: safeNext(url.searchParams.get('next')),
+		next: safeNext(url.searchParams.get('next'), LANDING),
 		email: url.searchParams.get('email') ?? '',
 		passwordChanged: url.searchParams.has('reset')
 	};
@@ -47,7 +49,7 @@ export const actions = {
 			await recordSignInFailure(event, email);
 			return fail(400, { action: 'password', values, errors: { password: NO_MATCH } });
 		}
-		const next = String(form.get('next') ?? '');
+		const next = safeNext(String(form.get('next') ?? ''), LANDING);
 		if (!(await handOver(event, 'password', { email, password, next })))
 			return fail(400, { action: 'password', values, errors: { password: NO_MATCH } });
 	},
@@ -60,7 +62,7 @@ export const actions = {
 		const { email } = parsed.data;
 		if (await mailLinkLimiter.isLimited(event, email))
 			return fail(429, { action: 'link', values, errors: { form: TOO_MANY } });
-		await handOver(event, 'email', { email, next: String(form.get('next') ?? '') });
+		await handOver(event, 'email', { email, next: safeNext(String(form.get('next') ?? ''), LANDING) });
 		redirect(303, '/signin/check-email');
 	}
 } satisfies Actions;

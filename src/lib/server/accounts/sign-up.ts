@@ -4,6 +4,8 @@ import { userTokens, users } from '../db/schema';
 import { hashPassword, verifyPassword } from '../auth/password';
 import { sendMail } from '../mail';
 import { consumeToken, issueToken, openLinks, openToken, voidTokens } from './user-tokens';
+import { createFirstSite, type FirstSite } from './first-site';
+import { keptEstimateSchema, readKeptEstimate, type KeptEstimate } from './kept-estimate';
 
 /*
  * Pending sign-ups: proving an address never adopts a password someone else chose.
@@ -21,6 +23,8 @@ import { consumeToken, issueToken, openLinks, openToken, voidTokens } from './us
  *   every pending proposal: the account then has no password, or the one chosen with that proof.
  * - Both sign-up paths hash the password before branching and answer with the same page, so neither the
  *   answer nor its timing tells who has an account.
+ * - A sign-up may carry the home page's quick estimate (kept-estimate.ts); it waits on the same row and
+ *   becomes the account's first site in the confirmation's transaction (first-site.ts).
  */
 
 /**
@@ -29,8 +33,11 @@ import { consumeToken, issueToken, openLinks, openToken, voidTokens } from './us
  */
 export async function signUp(
 	input: { name: string; email: string; password: string },
-	origin: string
+	origin: string,
+	estimate: KeptEstimate | null = null
 ): Promise<void> {
+	// Checked again here, whoever calls: only a valid, size-capped estimate is stored.
+	const kept = estimate ? keptEstimateSchema.parse(estimate) : null;
 	// Before branching: an existing address must not answer faster than a new one.
 	const passwordHash = await hashPassword(input.password);
 	const [existing] = await db
@@ -57,7 +64,7 @@ export async function signUp(
 		}
 		// The newest sign-up's proposal replaces the earlier ones; their links stop working.
 		await voidTokens(tx, userId, 'verify-email');
-		return issueToken(tx, userId, 'verify-email', { name: input.name, passwordHash });
+		return issueToken(tx, userId, 'verify-email', { name: input.name, passwordHash, estimate: kept });
 	});
 	await mailConfirmation(input.email, token, origin);
 }
@@ -77,6 +84,7 @@ async function pendingSignUp(where: ReturnType<typeof and>) {
 			userId: userTokens.userId,
 			name: userTokens.name,
 			passwordHash: userTokens.passwordHash,
+			estimate: userTokens.estimate,
 			email: users.email
 		})
 		.from(userTokens)
@@ -101,11 +109,13 @@ export async function confirmationFor(token: string): Promise<string | null> {
 	return (await pendingSignUp(openToken(token, 'verify-email')))?.email ?? null;
 }
 
-export type Confirmation = { email: string } | 'wrong-password' | 'closed';
+/** A confirmed sign-up: its address, and the first site when it carried a quick estimate. */
+export type Confirmation = { email: string; firstSite?: FirstSite } | 'wrong-password' | 'closed';
 
 /**
  * Confirms a sign-up: the link must be open and the password the one chosen in that same sign-up. Only
- * then does the account get that password (and name) and count as confirmed; the link is used up.
+ * then does the account get that password (and name) and count as confirmed; the link is used up. A
+ * quick estimate the sign-up carried becomes the account's first site in the same transaction.
  */
 export async function confirmSignUp(token: string, password: string): Promise<Confirmation> {
 	const pending = await pendingSignUp(openToken(token, 'verify-email'));
@@ -117,12 +127,14 @@ export async function confirmSignUp(token: string, password: string): Promise<Co
 			.update(users)
 			.set({ passwordHash: pending!.passwordHash, name: pending!.name, emailVerified: new Date() })
 			.where(and(eq(users.id, pending!.userId), isNull(users.emailVerified)))
-			.returning({ email: users.email });
+			.returning({ id: users.id, email: users.email, name: users.name });
 		if (!user) return null;
 		await voidTokens(tx, pending!.userId, 'verify-email');
-		return user;
+		const estimate = readKeptEstimate(pending!.estimate);
+		if (!estimate) return { email: user.email };
+		return { email: user.email, firstSite: await createFirstSite(tx, user, estimate) };
 	});
-	return confirmed ? { email: confirmed.email } : 'closed';
+	return confirmed ?? 'closed';
 }
 
 export type PendingSignUp = NonNullable<Awaited<ReturnType<typeof pendingSignUp>>>;
@@ -143,7 +155,8 @@ export async function resendConfirmation(pending: PendingSignUp, origin: string)
 		await voidTokens(tx, pending.userId, 'verify-email');
 		return issueToken(tx, pending.userId, 'verify-email', {
 			name: pending.name,
-			passwordHash: pending.passwordHash!
+			passwordHash: pending.passwordHash!,
+			estimate: pending.estimate
 		});
 	});
 	await mailConfirmation(pending.email, token, origin);

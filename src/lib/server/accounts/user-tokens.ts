@@ -12,12 +12,15 @@ import { HOUR_MS, hashToken, newToken } from '../auth/tokens';
 export type Purpose = 'verify-email' | 'reset-password';
 const LIFETIME_MS: Record<Purpose, number> = { 'verify-email': 48 * HOUR_MS, 'reset-password': 1 * HOUR_MS };
 
-/** Stores a new link for the user (with the sign-up's pending name and password, if any) and returns its token. */
+/**
+ * Stores a new link for the user (with the sign-up's pending name and password, and the quick estimate it
+ * carries, if any) and returns its token.
+ */
 export async function issueToken(
 	tx: Tx | typeof db,
 	userId: string,
 	purpose: Purpose,
-	pending: { name: string | null; passwordHash: string } | null = null
+	pending: { name: string | null; passwordHash: string; estimate?: unknown } | null = null
 ): Promise<string> {
 	const { token, tokenHash } = newToken();
 	await tx.insert(userTokens).values({
@@ -26,7 +29,8 @@ export async function issueToken(
 		tokenHash,
 		expiresAt: new Date(Date.now() + LIFETIME_MS[purpose]),
 		name: pending?.name ?? null,
-		passwordHash: pending?.passwordHash ?? null
+		passwordHash: pending?.passwordHash ?? null,
+		estimate: pending?.estimate ?? null
 	});
 	return token;
 }

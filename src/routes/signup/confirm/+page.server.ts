@@ -39,7 +39,9 @@ export const actions = {
 			await recordSignInFailure(event, email);
 			return fail(400, { errors: { password: 'That is not the password chosen for this sign-up.' } });
 		}
-		await handOver(event, 'password', { email, password: parsed.data.password, next: '/workspaces' });
+		// A kept estimate is now the first site: the welcome page says so; else sign-in's usual landing.
+		const next = result.firstSite ? `/signup/welcome?site=${result.firstSite.siteId}` : '/signin/landing';
+		await handOver(event, 'password', { email, password: parsed.data.password, next });
 		redirect(303, `/signin?email=${encodeURIComponent(email)}`);
 	}
 } satisfies Actions;

@@ -1,4 +1,4 @@
-import { boolean, index, integer, pgTable, primaryKey, text, timestamp } from 'drizzle-orm/pg-core';
+import { boolean, index, integer, jsonb, pgTable, primaryKey, text, timestamp } from 'drizzle-orm/pg-core';
 
 // The tables @auth/drizzle-adapter expects, with Runrate's own columns on `user`.
 // Sessions are JWTs (the credentials provider requires it); the session table exists for the adapter.
@@ -76,7 +76,13 @@ export const userTokens = pgTable('user_token', {
 	/** The name a sign-up chose; applied when its link is confirmed with its password. */
 	name: text('name'),
 	/** The bcrypt hash of the password a sign-up chose; pending until confirmed. */
-	passwordHash: text('password_hash')
+	passwordHash: text('password_hash'),
+	/**
+	 * The home page's quick estimate a sign-up carried (accounts/kept-estimate.ts: checked with the core's
+	 * schemas and size-capped before it is stored, and again when read); it becomes the account's first
+	 * site when the sign-up is confirmed.
+	 */
+	estimate: jsonb('estimate').$type<unknown>()
 });
 
 /**

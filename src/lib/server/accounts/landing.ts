@@ -1,0 +1,20 @@
+import { eq } from 'drizzle-orm';
+import { db } from '../db';
+import { memberships } from '../db/schema';
+
+/** Where "Your workspaces" lives: the page for a person in none or several workspaces. */
+export const WORKSPACES_PAGE = '/workspaces';
+
+/**
+ * Where a person's sites are: the sites list of their only workspace, or the workspaces list when they
+ * are in none or several (they pick one there). Sign-in lands here and the main navigation's "Sites"
+ * link goes here outside a workspace, so a grower with one farm is one click from their equipment.
+ */
+export async function sitesHomeFor(userId: string): Promise<string> {
+	const rows = await db
+		.select({ workspaceId: memberships.workspaceId })
+		.from(memberships)
+		.where(eq(memberships.userId, userId))
+		.limit(2);
+	return rows.length === 1 ? `/w/${rows[0]!.workspaceId}/sites` : WORKSPACES_PAGE;
+}
