@@ -36,7 +36,7 @@ export function assumptionsOf(
 		'Simple payback is the extra capital cost over the baseline divided by the yearly saving; against what is installed, that is the proposal’s whole outlay.',
 		query.emissionKgPerKwh > 0
 			? `CO₂ is the year’s kWh × ${query.emissionKgPerKwh} kg per kWh (source: ${query.emissionSource || 'not given'}).`
-			: 'No emission factor was given, so CO₂ is shown as zero.',
+			: 'No emission factor was given, so CO₂ is “not set”: give one (kg CO₂ per kWh) and its source to see it.',
 		'What still runs if one unit fails assumes capacity is proportional to rated watts.',
 		'These are estimates from the equipment lists and the tariff, not a bill.'
 	];
