@@ -21,3 +21,9 @@ export const STATUS_SHORT: Record<ScenarioStatus, string> = {
 	installed: 'only its one-off costs count as capital; a device is bought again when its life ends.',
 	proposed: 'its equipment and one-off costs are its capital, which payback weighs against the saving.'
 };
+
+/** One word for a badge beside the scenario's name on the site page. */
+export const STATUS_BADGE: Record<ScenarioStatus, string> = {
+	installed: 'Installed',
+	proposed: 'Proposed'
+};

@@ -148,6 +148,7 @@ export async function priceScenarios(site: SiteRow, scenarios: ScenarioRow[], ye
 					name: s.name,
 					description: s.description,
 					isBaseline: s.isBaseline,
+					status: s.status,
 					archived: !!s.archivedAt,
 					deleted: !!s.deletedAt,
 					deviceCount: devices.length,
