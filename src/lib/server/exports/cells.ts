@@ -34,6 +34,12 @@ export function sumOf(parts: ReadonlyArray<string | null>): string {
 }
 
 const GREY = { argb: 'FF4B5563' };
+/** A column's width when none was set, in characters (the spreadsheets' default). */
+const DEFAULT_WIDTH_CHARS = 9;
+/** A bold character is about this many normal characters wide. */
+const BOLD_CHAR_WIDTH = 1.15;
+/** The height of one line of 11-point text, in points. */
+const LINE_HEIGHT_PT = 15;
 const WRAP: Partial<Alignment> = { wrapText: true, vertical: 'top' };
 const BOLD: Partial<Font> = { bold: true };
 const solid = (argb: string): Fill => ({ type: 'pattern', pattern: 'solid', fgColor: { argb } });
@@ -113,9 +119,22 @@ export class SheetWriter {
 		cell.style = this.style('plain', numFmt);
 	}
 
-	/** A header row: bold on a pale band, wrapped, with a rule beneath. */
+	/**
+	 * A header row: bold on a pale band, wrapped, with a rule beneath. The row is made tall enough for
+	 * its longest wrapped label (spreadsheets do not grow a row for wrapped text on opening, so a
+	 * printed header would otherwise run over the first row of figures). Set the widths first.
+	 */
 	headers(row: number, col: number, labels: readonly string[]): void {
 		labels.forEach((label, i) => this.text(row, col + i, label, 'header'));
+		const lines = Math.max(
+			1,
+			...labels.map((label, i) => {
+				const width = this.sheet.getColumn(col + i).width ?? DEFAULT_WIDTH_CHARS;
+				return Math.ceil((label.length * BOLD_CHAR_WIDTH) / Math.max(1, width - 1));
+			})
+		);
+		const current = this.sheet.getRow(row).height ?? 0;
+		if (lines > 1) this.sheet.getRow(row).height = Math.max(current, lines * LINE_HEIGHT_PT);
 	}
 
 	/** A line of text across `cols` columns (a title, a note). */
