@@ -91,6 +91,20 @@ const TARGETS: Record<string, Target> = {
 		}),
 		file: { field: 'sheet', sheet: () => sheets.equipment }
 	},
+	// A stale revision: the details are checked in full and then refused as changed by someone else.
+	'/sites/[siteId]/scenarios/[scenarioId]?/details': {
+		path: () => `${site()}/scenarios/${made.scenario}?/details`,
+		fields: () => ({
+			revision: '0',
+			name: 'Fuzz scenario (invented)',
+			description: 'Invented by the fuzz test',
+			status: 'proposed',
+			tariffId: '',
+			'oneOffCosts.0.label': 'Fuzz trench (invented)',
+			'oneOffCosts.0.amount': '250',
+			'oneOffCosts.0.note': ''
+		})
+	},
 	'/sites/[siteId]/bills?/add': { path: () => `${site()}/bills?/add`, fields: bill },
 	'/sites/[siteId]/bills?/import': {
 		path: () => `${site()}/bills?/import`,
