@@ -46,6 +46,38 @@ export type { Air, Pump, PumpingRequest, PumpingRequestInput } from './pumping.s
 export type * from './types';
 export { calculateAcrossVersions, NoVersionInForce, versionInForce } from './versions';
 export type { DatedTariff, VersionedResponse } from './versions';
+export {
+	airDesignSchema,
+	aerationDesignSchema,
+	airliftSchema,
+	airPumpSchema,
+	DEPTH_UNITS,
+	DIFFUSER_KINDS,
+	pumpPointSchema,
+	RISER_DIAMETER_UNITS,
+	transferFactorsShape
+} from './air-design.schema';
+export type {
+	AerationDesign,
+	AirDesign,
+	AirDesignInput,
+	Airlift,
+	AirPump,
+	AirPumpInput,
+	DiffuserKind,
+	PumpPoint
+} from './air-design.schema';
+export { EMPTY_SITE_WATER, siteWaterSchema, tankSchema, WATER_KINDS } from './site-water.schema';
+export type { SiteWater, SiteWaterInput, Tank, TankInput } from './site-water.schema';
+export {
+	barometricPressureAtm,
+	oxygenSaturationMgL,
+	SALINITY_G_PER_KG,
+	STANDARD_ATMOSPHERE_PA,
+	waterDensityKgPerM3,
+	waterVapourPressureAtm,
+	waterViscosityPaS
+} from './water';
 export { REFERENCE_WATTS, referenceMonthlyCost } from './reference';
 export { DUTY_OF, redundancy } from './redundancy';
 export type { Duty, DutyRedundancy } from './redundancy';

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { equipmentSchema, list } from '$lib/calc';
+import { amount, equipmentSchema, list } from '$lib/calc';
 import { MAX_REVISION, storableText, UNSTORABLE } from '$lib/forms/storable';
 
 /** A stored device: the core's equipment plus the safety flags; names must be unique within a scenario (the trail and charts name them). */
@@ -8,7 +8,10 @@ export const deviceSpecSchema = z.intersection(
 	z.object({
 		inWater: z.boolean().optional(),
 		outdoor: z.boolean().optional(),
-		notes: z.string().max(2000).refine(storableText, UNSTORABLE).optional()
+		notes: z.string().max(2000).refine(storableText, UNSTORABLE).optional(),
+		waterLpm: amount('Water moved', { min: 0, max: 10_000_000 }).optional(),
+		airLpm: amount('Air delivered', { min: 0, max: 10_000_000 }).optional(),
+		fromAirDesign: z.boolean().optional()
 	})
 );
 

@@ -11,7 +11,7 @@ import {
 	uuid
 } from 'drizzle-orm/pg-core';
 import { belongsTo, createdAt, updatedAt, uuidId } from './columns';
-import type { EquipmentInput, OneOffCost } from '$lib/calc';
+import type { AirDesign, EquipmentInput, OneOffCost, SiteWater } from '$lib/calc';
 import { belongsToUser, users } from './auth';
 import { tariffs } from './tariff';
 import { workspaces } from './workspace';
@@ -33,6 +33,8 @@ export const sites = pgTable(
 		tariffVersion: integer('tariff_version'),
 		currency: text('currency').notNull(),
 		notes: text('notes'),
+		/** The site's altitude and its tanks or ponds with their water and stock (core: siteWaterSchema). */
+		water: jsonb('water').$type<SiteWater>().notNull().default({ altitudeM: 0, tanks: [] }),
 		revision: integer('revision').notNull().default(1),
 		archivedAt: timestamp('archived_at', { mode: 'date' }),
 		createdAt: createdAt(),
@@ -56,6 +58,8 @@ export const scenarios = pgTable(
 			.default('proposed'),
 		/** Costs paid once when the scenario is carried out: a trench, an outdoor circuit, a visit. */
 		oneOffCosts: jsonb('one_off_costs').$type<OneOffCost[]>().notNull().default([]),
+		/** The air and water designer's last design for this scenario (core: airDesignSchema), kept to reopen. */
+		airDesign: jsonb('air_design').$type<AirDesign>(),
 		tariffId: uuid('tariff_id').references(() => tariffs.id, { onDelete: 'set null' }),
 		tariffVersion: integer('tariff_version'),
 		position: integer('position').notNull().default(0),
@@ -70,7 +74,19 @@ export const scenarios = pgTable(
 	(s) => [index('scenario_site_idx').on(s.siteId)]
 );
 
-export type DeviceSpec = EquipmentInput & { inWater?: boolean; outdoor?: boolean; notes?: string };
+/**
+ * A stored device: the core's equipment, the safety flags, and what the device delivers when known
+ * (`waterLpm` a water pump's flow at its duty point, `airLpm` an air pump's free air at its operating
+ * pressure, per unit). `fromAirDesign` marks the air pumps the designer put in the list.
+ */
+export type DeviceSpec = EquipmentInput & {
+	inWater?: boolean;
+	outdoor?: boolean;
+	notes?: string;
+	waterLpm?: number;
+	airLpm?: number;
+	fromAirDesign?: boolean;
+};
 
 /** A row of a scenario's equipment list: the core's Equipment shape plus the safety flags. */
 export const devices = pgTable(

@@ -1,5 +1,16 @@
-import { index, pgEnum, pgTable, primaryKey, text, timestamp, uuid } from 'drizzle-orm/pg-core';
-import { belongsTo, createdAt, uuidId } from './columns';
+import {
+	index,
+	doublePrecision,
+	jsonb,
+	pgEnum,
+	pgTable,
+	primaryKey,
+	text,
+	timestamp,
+	uuid
+} from 'drizzle-orm/pg-core';
+import type { PumpPoint } from '$lib/calc';
+import { belongsTo, createdAt, updatedAt, uuidId } from './columns';
 import { belongsToUser, users } from './auth';
 
 export const roleEnum = pgEnum('workspace_role', ['owner', 'editor', 'viewer']);
@@ -66,4 +77,21 @@ export const notices = pgTable(
 		createdAt: createdAt()
 	},
 	(n) => [index('notice_workspace_idx').on(n.workspaceId, n.createdAt)]
+);
+
+/** An air pump a workspace entered from its data sheet: flow against pressure, and its watts. */
+export const airPumps = pgTable(
+	'air_pump',
+	{
+		id: uuidId(),
+		workspaceId: belongsTo('workspace_id', () => workspaces.id),
+		name: text('name').notNull(),
+		points: jsonb('points').$type<PumpPoint[]>().notNull(),
+		/** Input watts at the rated pressure; null: the wire-to-air efficiency stands in. */
+		inputWatts: doublePrecision('input_watts'),
+		wireToAirPercent: doublePrecision('wire_to_air_percent').notNull().default(25),
+		createdAt: createdAt(),
+		updatedAt: updatedAt()
+	},
+	(p) => [index('air_pump_workspace_idx').on(p.workspaceId)]
 );
