@@ -49,15 +49,16 @@ describe('the Swamee–Jain friction factor', () => {
 		expect(swameeJainFrictionFactor(1e5, 1e-4)).toBeCloseTo(0.018452, 6);
 	});
 
-	// Swamee & Jain state about 1 %; at Re 5,000 the difference reaches 1.5 % (measured here).
-	it('stays within 2 % of Colebrook over its stated range (Swamee & Jain 1976: Re 5e3–1e8, ε/D 1e-6–1e-2)', () => {
+	// Swamee & Jain state about 1 %; measured here on a grid, the difference reaches 2.8 % at the corner
+	// Re 5,000, ε/D 0.01, and 2.1 % from Re 10,000 up.
+	it('stays within 3 % of Colebrook over its stated range (Swamee & Jain 1976: Re 5e3–1e8, ε/D 1e-6–1e-2)', () => {
 		fc.assert(
 			fc.property(
 				fc.double({ min: 5000, max: 1e8, noNaN: true }),
 				fc.double({ min: 1e-6, max: 0.01, noNaN: true }),
 				(reynolds, roughness) => {
 					const ratio = swameeJainFrictionFactor(reynolds, roughness) / colebrookFrictionFactor(reynolds, roughness);
-					expect(Math.abs(ratio - 1)).toBeLessThan(0.02);
+					expect(Math.abs(ratio - 1)).toBeLessThan(0.03);
 				}
 			)
 		);
