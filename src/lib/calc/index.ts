@@ -13,6 +13,15 @@ export {
 	pumping
 } from './pumping';
 export type { AirPressure, PumpPower, PumpingResponse } from './pumping';
+export { FITTING_K, FITTING_KINDS, fittingsHeadM } from './pipe-fittings';
+export type { FittingKind } from './pipe-fittings';
+export {
+	colebrookFrictionFactor,
+	darcyWeisbach,
+	reynoldsNumber,
+	ROUGHNESS_MM,
+	swameeJainFrictionFactor
+} from './pipe-friction';
 export { distinctBy, MAX_REPORTED_ISSUES, parseRequest, reportable } from './parse';
 export type { InvalidRequest, ParseResult, RequestIssue } from './parse';
 export { roundMoney } from './rounding';
@@ -41,8 +50,21 @@ export { EQUIPMENT_CATEGORIES, equipmentSchema, powerSchema, scheduleSchema } fr
 export type { Equipment, EquipmentInput, Power, Schedule } from './equipment.schema';
 export { tariffSchema } from './tariff.schema';
 export type { DemandCharge, EnergyCharge, FixedCharge, Tariff, TariffInput } from './tariff.schema';
-export { airSchema, pumpSchema, pumpingRequestSchema } from './pumping.schema';
-export type { Air, Pump, PumpingRequest, PumpingRequestInput } from './pumping.schema';
+export {
+	airSchema,
+	FRICTION_METHODS,
+	fittingSchema,
+	pumpSchema,
+	pumpingRequestSchema
+} from './pumping.schema';
+export type {
+	Air,
+	Fitting,
+	FrictionMethod,
+	Pump,
+	PumpingRequest,
+	PumpingRequestInput
+} from './pumping.schema';
 export type * from './types';
 export { calculateAcrossVersions, NoVersionInForce, versionInForce } from './versions';
 export type { DatedTariff, VersionedResponse } from './versions';

@@ -57,7 +57,8 @@ describe('the Swamee–Jain friction factor', () => {
 				fc.double({ min: 5000, max: 1e8, noNaN: true }),
 				fc.double({ min: 1e-6, max: 0.01, noNaN: true }),
 				(reynolds, roughness) => {
-					const ratio = swameeJainFrictionFactor(reynolds, roughness) / colebrookFrictionFactor(reynolds, roughness);
+					const ratio =
+						swameeJainFrictionFactor(reynolds, roughness) / colebrookFrictionFactor(reynolds, roughness);
 					expect(Math.abs(ratio - 1)).toBeLessThan(0.03);
 				}
 			)
@@ -105,7 +106,8 @@ describe('Darcy–Weisbach head loss', () => {
 	it('gives the Hagen–Poiseuille loss in laminar flow, the same as f = 64/Re', () => {
 		const result = darcyWeisbach(10, 1e-7, 0.01, 0.0015);
 		expect(result.reynoldsNumber).toBeLessThan(2300);
-		const viaFactor = ((64 / result.reynoldsNumber) * (10 / 0.01) * result.velocityMPerS ** 2) / (2 * 9.80665);
+		const viaFactor =
+			((64 / result.reynoldsNumber) * (10 / 0.01) * result.velocityMPerS ** 2) / (2 * 9.80665);
 		expect(result.headLossM).toBeCloseTo(viaFactor, 12);
 	});
 
@@ -126,11 +128,14 @@ describe('Darcy–Weisbach head loss', () => {
 		[10, 1],
 		[50, 2],
 		[200, 4]
-	])('agrees with Hazen–Williams (C 150) within 15 %% at %d gpm in %d-inch plastic pipe', (flowGpm, inches) => {
-		const d = inches * METERS_PER_INCH;
-		const darcy = darcyWeisbach(100, gpm(flowGpm), d, ROUGHNESS_MM.plastic).headLossM;
-		expect(Math.abs(hazenWilliamsHeadLossM(100, gpm(flowGpm), d, 150) / darcy - 1)).toBeLessThan(0.15);
-	});
+	])(
+		'agrees with Hazen–Williams (C 150) within 15 %% at %d gpm in %d-inch plastic pipe',
+		(flowGpm, inches) => {
+			const d = inches * METERS_PER_INCH;
+			const darcy = darcyWeisbach(100, gpm(flowGpm), d, ROUGHNESS_MM.plastic).headLossM;
+			expect(Math.abs(hazenWilliamsHeadLossM(100, gpm(flowGpm), d, 150) / darcy - 1)).toBeLessThan(0.15);
+		}
+	);
 
 	it('never gives NaN or Infinity for pipes and flows a grower might enter', () => {
 		fc.assert(

@@ -1,8 +1,20 @@
 import { z } from 'zod';
-import { amount, choice, record } from './fields';
+import { amount, choice, list, record } from './fields';
+import { FITTING_KINDS } from './pipe-fittings';
+import { ROUGHNESS_MM } from './pipe-friction';
 import { FLOW_UNITS } from './units';
 
 const FLUIDS = ['fresh', 'sea'] as const;
+
+/** How pipe friction is worked out; Hazen–Williams stays the default so older requests answer the same. */
+export const FRICTION_METHODS = ['hazen-williams', 'darcy-weisbach'] as const;
+export type FrictionMethod = (typeof FRICTION_METHODS)[number];
+
+/** One kind of fitting or valve on the pipe and how many of it. */
+export const fittingSchema = record('Fitting', {
+	kind: choice('Fitting kind', FITTING_KINDS),
+	count: amount('Number of fittings', { min: 1, max: 1000, integer: true })
+});
 
 /** A water pump's duty point and pipe, each quantity with its own unit. */
 export const pumpSchema = record('Pump', {
@@ -16,7 +28,13 @@ export const pumpSchema = record('Pump', {
 	innerDiameterUnit: choice('Inner diameter unit', ['in', 'mm']),
 	/** Hazen–Williams roughness; 150 suits smooth plastic pipe (common practice, no source). */
 	hazenWilliamsC: amount('Hazen–Williams C', { min: 1, max: 200 }).default(150),
-	efficiencyPercent: amount('Wire-to-water efficiency', { above: 0, max: 100 })
+	efficiencyPercent: amount('Wire-to-water efficiency', { above: 0, max: 100 }),
+	frictionMethod: choice('Friction method', FRICTION_METHODS).default('hazen-williams'),
+	/** Darcy–Weisbach only: the wall's absolute roughness; smooth plastic by default (Moody 1944). */
+	roughnessMm: amount('Pipe roughness', { min: 0, max: 10 }).default(ROUGHNESS_MM.plastic),
+	/** Darcy–Weisbach only: sets the water's viscosity and density (0–40 °C, the range of their equations). */
+	waterTemperatureC: amount('Water temperature', { min: 0, max: 40 }).default(20),
+	fittings: list('Fittings', fittingSchema, { max: 50 }).default([])
 });
 
 /** Where air is injected: the depth of the diffuser or air-lift foot below the water surface. */
@@ -36,6 +54,7 @@ export const pumpingRequestSchema = record('Request', {
 });
 
 export type Pump = z.output<typeof pumpSchema>;
+export type Fitting = z.output<typeof fittingSchema>;
 export type Air = z.output<typeof airSchema>;
 export type PumpingRequest = z.output<typeof pumpingRequestSchema>;
 export type PumpingRequestInput = z.input<typeof pumpingRequestSchema>;

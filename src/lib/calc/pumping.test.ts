@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { darcyWeisbach } from './pipe-friction';
 import { airInjectionPressure, hazenWilliamsHeadLossM, pumpInputPower, pumping } from './pumping';
 import { type Pump, pumpingRequestSchema } from './pumping.schema';
 import {
@@ -21,6 +22,10 @@ function pump(more: Partial<Pump> = {}): Pump {
 		innerDiameterUnit: 'in',
 		hazenWilliamsC: 150,
 		efficiencyPercent: 100,
+		frictionMethod: 'hazen-williams',
+		roughnessMm: 0.0015,
+		waterTemperatureC: 20,
+		fittings: [],
 		...more
 	};
 }
@@ -114,5 +119,113 @@ describe('the pumping request', () => {
 
 	it('refuses a request with neither a pump nor an air depth', () => {
 		expect(pumpingRequestSchema.safeParse({}).success).toBe(false);
+	});
+});
+
+describe('friction by Darcy–Weisbach and the fittings', () => {
+	// 10 US gpm up 5 ft through 50 ft of 1-inch pipe, the helper's own example (invented duty point).
+	const duty = { flow: 10, staticLift: 5, pipeLength: 50, innerDiameter: 1, efficiencyPercent: 25 };
+	const oldBody = {
+		fluid: 'fresh',
+		pump: { ...duty, flowUnit: 'gpm', staticLiftUnit: 'ft', pipeLengthUnit: 'ft', innerDiameterUnit: 'in' }
+	};
+
+	it('answers a body of before this change exactly as before: Hazen–Williams, no fittings', () => {
+		const request = pumpingRequestSchema.parse(oldBody);
+		const result = pumping(request).pump!;
+		expect(request.pump).toMatchObject({
+			frictionMethod: 'hazen-williams',
+			fittings: [],
+			waterTemperatureC: 20
+		});
+		expect(result.frictionHeadM).toBe(
+			hazenWilliamsHeadLossM(50 * METERS_PER_FOOT, result.flowM3PerS, METERS_PER_INCH, 150)
+		);
+		expect(result).toMatchObject({
+			frictionMethod: 'hazen-williams',
+			fittingsHeadM: 0,
+			frictionFactor: null
+		});
+		expect(result.totalHeadM).toBe(result.staticHeadM + result.frictionHeadM);
+		// About 64 W, the doc comment's example (derived from the equation).
+		expect(result.inputWatts).toBeCloseTo(64, 0);
+	});
+
+	it('works the pipe out by Darcy–Weisbach when asked, at the water temperature given', () => {
+		const request = pumpingRequestSchema.parse({
+			...oldBody,
+			pump: { ...oldBody.pump, frictionMethod: 'darcy-weisbach', waterTemperatureC: 10 }
+		});
+		const result = pumping(request).pump!;
+		const expected = darcyWeisbach(50 * METERS_PER_FOOT, result.flowM3PerS, METERS_PER_INCH, 0.0015, 10);
+		expect(result.frictionHeadM).toBe(expected.headLossM);
+		expect(result.frictionFactor).toBe(expected.frictionFactor);
+		expect(result.reynoldsNumber).toBe(expected.reynoldsNumber);
+	});
+
+	it('shows two standard elbows apart from the pipe and adds them to the total (EPANET K 0.9 each)', () => {
+		const result = pumpInputPower(pump({ fittings: [{ kind: 'elbow-90-short', count: 2 }] }), 'fresh');
+		expect(result.fittingsHeadM).toBeCloseTo((1.8 * result.velocityMPerS ** 2) / (2 * 9.80665), 12);
+		expect(result.totalHeadM).toBeCloseTo(
+			result.staticHeadM + result.frictionHeadM + result.fittingsHeadM,
+			12
+		);
+	});
+
+	it('uses the viscosity of sea water (35 g/kg) for the Reynolds number of sea water', () => {
+		const fresh = pumpInputPower(pump({ frictionMethod: 'darcy-weisbach' }), 'fresh').reynoldsNumber;
+		expect(pumpInputPower(pump({ frictionMethod: 'darcy-weisbach' }), 'sea').reynoldsNumber).toBeLessThan(
+			fresh
+		);
+	});
+});
+
+describe('the new fields, refused in words', () => {
+	const base = {
+		flow: 1,
+		flowUnit: 'gpm',
+		staticLift: 1,
+		staticLiftUnit: 'ft',
+		pipeLength: 1,
+		pipeLengthUnit: 'ft',
+		innerDiameter: 1,
+		innerDiameterUnit: 'in',
+		efficiencyPercent: 30
+	};
+	const messages = (pumpMore: Record<string, unknown>) => {
+		const parsed = pumpingRequestSchema.safeParse({ pump: { ...base, ...pumpMore } });
+		return parsed.success ? [] : parsed.error.issues.map((issue) => [issue.path.join('.'), issue.message]);
+	};
+
+	it.each([
+		[
+			{ frictionMethod: 'manning' },
+			'pump.frictionMethod',
+			'Friction method must be one of: hazen-williams, darcy-weisbach'
+		],
+		[{ roughnessMm: -1 }, 'pump.roughnessMm', 'Pipe roughness must be zero or more'],
+		[{ waterTemperatureC: 60 }, 'pump.waterTemperatureC', 'Water temperature must be at most 40'],
+		[
+			{ fittings: [{ kind: 'elbow-90-short', count: 1.5 }] },
+			'pump.fittings.0.count',
+			'Number of fittings must be a whole number'
+		],
+		[
+			{ fittings: [{ kind: 'bend', count: 1 }] },
+			'pump.fittings.0.kind',
+			expect.stringMatching(/^Fitting kind must be one of: elbow-90-short/)
+		],
+		[
+			{ fittings: [{ kind: 'exit', count: 0 }] },
+			'pump.fittings.0.count',
+			'Number of fittings must be at least 1'
+		],
+		[
+			{ fittings: Array.from({ length: 51 }, () => ({ kind: 'exit', count: 1 })) },
+			'pump.fittings',
+			'Fittings can have at most 50 entries'
+		]
+	])('refuses %j at its field', (more, path, message) => {
+		expect(messages(more)).toEqual([[path, message]]);
 	});
 });
