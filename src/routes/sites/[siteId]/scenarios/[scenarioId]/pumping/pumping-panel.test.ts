@@ -1,20 +1,23 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
+import { newFittingRow } from './friction-draft';
+import { fieldIssues } from './pumping-issues';
 import {
 	type PumpingDraft,
 	blankDraft,
 	efficiencyProblem,
-	fieldIssues,
-	metersIn,
 	missingPumpFields,
 	numberDraft,
+	pumpingRequest
+} from './pumping-panel';
+import {
+	metersIn,
 	plausibilityNote,
-	pumpingRequest,
 	readAnswer,
 	speedText,
 	usableWatts,
 	useButtonText
-} from './pumping-panel';
+} from './pumping-result';
 
 // Invented duty points for these tests only; no real pump or site.
 
@@ -81,7 +84,8 @@ describe('a filled-in pump', () => {
 				innerDiameter: 1,
 				innerDiameterUnit: 'mm',
 				hazenWilliamsC: 150,
-				efficiencyPercent: 25
+				efficiencyPercent: 25,
+				frictionMethod: 'hazen-williams'
 			}
 		});
 	});
@@ -147,6 +151,22 @@ describe('issues from the API', () => {
 			innerDiameter: ['Inner diameter unit must be one of: in, mm', 'Inner diameter must be more than 0'],
 			depth: ['Depth must be at most 1,000'],
 			fluid: ['Fluid must be one of: fresh, sea']
+		});
+		expect(other).toEqual([]);
+	});
+
+	it('puts a fitting’s message at its row, and the list’s at the list', () => {
+		const { byField, byFittingRow, other } = fieldIssues([
+			{ path: 'pump.fittings.1.count', message: 'Number of fittings must be a whole number' },
+			{ path: 'pump.fittings', message: 'Fittings can have at most 50 entries' },
+			{ path: 'pump.roughnessMm', message: 'Pipe roughness must be zero or more' },
+			{ path: 'pump.waterTemperatureC', message: 'Water temperature must be at most 40' }
+		]);
+		expect(byFittingRow).toEqual({ 1: ['Number of fittings must be a whole number'] });
+		expect(byField).toEqual({
+			fittings: ['Fittings can have at most 50 entries'],
+			roughnessMm: ['Pipe roughness must be zero or more'],
+			waterTemperatureC: ['Water temperature must be at most 40']
 		});
 		expect(other).toEqual([]);
 	});
@@ -281,5 +301,54 @@ describe('putting the watts into a device', () => {
 	it('names the chosen device on the button', () => {
 		expect(useButtonText(50.8, { name: 'Small pump' })).toBe('Use 50.8 W for Small pump');
 		expect(useButtonText(312, { name: 'device 2' })).toBe('Use 312 W for device 2');
+	});
+});
+
+describe('the friction method and the fittings', () => {
+	it('starts on Hazen–Williams with no fittings, so the request reads as before this choice existed', () => {
+		expect(blankDraft()).toMatchObject({ frictionMethod: 'hazen-williams', fittings: [] });
+		expect(pumpingRequest(filled())?.pump).not.toHaveProperty('fittings');
+	});
+
+	it('sends roughness and water temperature, not C, for Darcy–Weisbach', () => {
+		const pump = pumpingRequest(
+			filled({
+				frictionMethod: 'darcy-weisbach',
+				roughnessMm: '0.15',
+				waterTemperatureC: '12',
+				hazenWilliamsC: 'x'
+			})
+		)?.pump;
+		expect(pump).toMatchObject({
+			frictionMethod: 'darcy-weisbach',
+			roughnessMm: 0.15,
+			waterTemperatureC: 12
+		});
+		expect(pump).not.toHaveProperty('hazenWilliamsC');
+	});
+
+	it('sends C, not roughness or temperature, for Hazen–Williams', () => {
+		const pump = pumpingRequest(filled({ roughnessMm: 'rough', waterTemperatureC: '' }))?.pump;
+		expect(pump).toMatchObject({ hazenWilliamsC: 150 });
+		expect(pump).not.toHaveProperty('roughnessMm');
+		expect(pump).not.toHaveProperty('waterTemperatureC');
+	});
+
+	it('sends each fitting row as its kind and count, and a row with an empty count without one', () => {
+		const first = newFittingRow([]);
+		const second = { ...newFittingRow([first]), kind: 'ball-valve' as const, count: '' };
+		const third = { ...newFittingRow([first, second]), count: '2.5' };
+		expect([first.id, second.id, third.id]).toEqual([1, 2, 3]);
+		expect(
+			pumpingRequest(filled({ fittings: [{ ...first, count: '2' }, second, third] }))?.pump?.fittings
+		).toEqual([
+			{ kind: 'elbow-90-short', count: 2 },
+			{ kind: 'ball-valve' },
+			{ kind: 'elbow-90-short', count: 2.5 }
+		]);
+	});
+
+	it('gives a new row an id no row of the list has, after a removal too', () => {
+		expect(newFittingRow([{ id: 4, kind: 'exit', count: '1' }]).id).toBe(5);
 	});
 });

@@ -1,15 +1,10 @@
-import {
-	type FlowUnit,
-	type Fluid,
-	METERS_PER_FOOT,
-	type PumpingResponse,
-	type RequestIssue
-} from '$lib/calc';
+import { type FlowUnit, type Fluid, type FrictionMethod } from '$lib/calc';
 import { figure } from '$lib/text/numbers';
+import type { FittingRow } from './friction-draft';
 
 /**
- * The pumping helper's form as typed, the request it posts to /api/v1/pumping, and the answer read
- * back. Boxes hold text; a number goes out as a number, text that is not one goes out as typed so the
+ * The pumping helper's form as typed and the request it posts to /api/v1/pumping (the answer is read by
+ * pumping-result.ts, its issues placed by pumping-issues.ts). Boxes hold text; a number goes out as a number, text that is not one goes out as typed so the
  * API names the problem at its field ("Flow must be a number"). Nothing here can produce NaN.
  */
 
@@ -29,14 +24,23 @@ export interface PumpingDraft {
 	innerDiameterUnit: DiameterUnit;
 	hazenWilliamsC: string;
 	efficiencyPercent: string;
+	frictionMethod: FrictionMethod;
+	/** Darcy–Weisbach only. */
+	roughnessMm: string;
+	/** Darcy–Weisbach only. */
+	waterTemperatureC: string;
+	fittings: FittingRow[];
 	depth: string;
 	depthUnit: DepthUnit;
 }
 
 /** The boxes that hold numbers. */
-export type NumberField = Exclude<keyof PumpingDraft, `${string}Unit` | 'fluid'>;
-/** Where a message is shown: a number box (its unit's messages with it), or the fluid choice. */
-export type PanelField = NumberField | 'fluid';
+export type NumberField = Exclude<
+	keyof PumpingDraft,
+	`${string}Unit` | 'fluid' | 'frictionMethod' | 'fittings'
+>;
+/** Where a message is shown: a number box (its unit's messages with it), a choice, or the fittings list. */
+export type PanelField = NumberField | 'fluid' | 'frictionMethod' | 'fittings';
 
 /** The pump's boxes; C may stay empty (the API then takes 150). */
 export const PUMP_FIELDS = [
@@ -60,6 +64,10 @@ export function blankDraft(): PumpingDraft {
 		innerDiameterUnit: 'in',
 		hazenWilliamsC: '150',
 		efficiencyPercent: '',
+		frictionMethod: 'hazen-williams',
+		roughnessMm: '0.0015',
+		waterTemperatureC: '20',
+		fittings: [],
 		depth: '',
 		depthUnit: 'ft'
 	};
@@ -82,10 +90,19 @@ export function missingPumpFields(draft: PumpingDraft): Array<(typeof PUMP_FIELD
 	return PUMP_FIELDS.filter((field) => draft[field].trim() === '');
 }
 
+type FittingBody = { kind: string; count?: number | string };
+
 export interface PumpingBody {
 	fluid: Fluid;
-	pump?: Record<string, number | string>;
+	pump?: Record<string, number | string | FittingBody[]>;
 	air?: Record<string, number | string>;
+}
+
+/** The boxes the chosen friction method reads; the other method's boxes stay out of the request. */
+function frictionFields(draft: PumpingDraft) {
+	return draft.frictionMethod === 'darcy-weisbach'
+		? (['roughnessMm', 'waterTemperatureC'] as const)
+		: (['hazenWilliamsC'] as const);
 }
 
 /**
@@ -108,8 +125,8 @@ export function pumpingRequest(draft: PumpingDraft): PumpingBody | null {
 	const body: PumpingBody = { fluid: draft.fluid };
 	// An efficiency typed as a fraction is refused at its box before anything is asked.
 	if (missingPumpFields(draft).length === 0 && !efficiencyProblem(draft)) {
-		const pump: Record<string, number | string> = {};
-		for (const field of [...PUMP_FIELDS, 'hazenWilliamsC'] as const) {
+		const pump: Record<string, number | string | FittingBody[]> = {};
+		for (const field of [...PUMP_FIELDS, ...frictionFields(draft)]) {
 			const value = numberDraft(draft[field]);
 			if (value !== undefined) pump[field] = value;
 		}
@@ -118,100 +135,18 @@ export function pumpingRequest(draft: PumpingDraft): PumpingBody | null {
 			flowUnit: draft.flowUnit,
 			staticLiftUnit: draft.staticLiftUnit,
 			pipeLengthUnit: draft.pipeLengthUnit,
-			innerDiameterUnit: draft.innerDiameterUnit
+			innerDiameterUnit: draft.innerDiameterUnit,
+			frictionMethod: draft.frictionMethod
 		};
+		// An empty count goes out without one, so the API says at that row that it is needed.
+		if (draft.fittings.length) {
+			body.pump.fittings = draft.fittings.map(({ kind, count }) => {
+				const value = numberDraft(count);
+				return value === undefined ? { kind } : { kind, count: value };
+			});
+		}
 	}
 	const depth = numberDraft(draft.depth);
 	if (depth !== undefined) body.air = { depth, depthUnit: draft.depthUnit };
 	return body.pump || body.air ? body : null;
-}
-
-const FIELD_OF: Record<string, PanelField> = {
-	fluid: 'fluid',
-	'air.depth': 'depth',
-	'air.depthUnit': 'depth',
-	...Object.fromEntries(
-		(['flow', 'staticLift', 'pipeLength', 'innerDiameter'] as const).flatMap((field) => [
-			[`pump.${field}`, field],
-			[`pump.${field}Unit`, field]
-		])
-	),
-	'pump.hazenWilliamsC': 'hazenWilliamsC',
-	'pump.efficiencyPercent': 'efficiencyPercent'
-};
-
-/** The API's issues at the boxes they concern; any other (a whole part, the request) in `other`. */
-export function fieldIssues(issues: readonly RequestIssue[]): {
-	byField: Partial<Record<PanelField, string[]>>;
-	other: string[];
-} {
-	const byField: Partial<Record<PanelField, string[]>> = {};
-	const other: string[] = [];
-	for (const issue of issues) {
-		const field = FIELD_OF[issue.path];
-		if (field) (byField[field] ??= []).push(issue.message);
-		else other.push(issue.message);
-	}
-	return { byField, other };
-}
-
-export type PumpingAnswer =
-	| { kind: 'result'; result: PumpingResponse }
-	| { kind: 'issues'; issues: RequestIssue[] }
-	| { kind: 'failure'; message: string };
-
-/** What the endpoint answered: the result, the fields to fix (400), or a sentence to show. */
-export async function readAnswer(response: Response): Promise<PumpingAnswer> {
-	const body: unknown = await response.json().catch(() => null);
-	const record = body && typeof body === 'object' ? (body as Record<string, unknown>) : {};
-	if (response.ok && body) return { kind: 'result', result: body as PumpingResponse };
-	if (response.status === 400 && Array.isArray(record.issues) && record.issues.length > 0)
-		return { kind: 'issues', issues: record.issues as RequestIssue[] };
-	const message = typeof record.message === 'string' ? record.message : null;
-	return { kind: 'failure', message: message ?? `The helper could not answer (status ${response.status}).` };
-}
-
-/** The watts the button offers and hands over: whole watts, or tenths below 10 W. */
-export function usableWatts(inputWatts: number): number {
-	const step = Math.abs(inputWatts) < 10 ? 10 : 1;
-	return Math.round(inputWatts * step) / step;
-}
-
-/** A head or depth in metres, in the unit the person chose for the lift. */
-export function metersIn(meters: number, unit: LiftUnit): number {
-	return unit === 'ft' ? meters / METERS_PER_FOOT : meters;
-}
-
-/** A water speed in the unit system of the inputs: ft/s after US units only, m/s after metric only, both when mixed. */
-export function speedText(velocityMPerS: number, draft: PumpingDraft): string {
-	const units = [draft.flowUnit, draft.staticLiftUnit, draft.pipeLengthUnit, draft.innerDiameterUnit];
-	const us = units.filter((unit) => ['gpm', 'gph', 'ft', 'in'].includes(unit)).length;
-	const feet = `${figure(velocityMPerS / METERS_PER_FOOT, 2)} ft/s`;
-	const meters = `${figure(velocityMPerS, 2)} m/s`;
-	if (us === units.length) return feet;
-	if (us === 0) return meters;
-	return `${meters} (${feet})`;
-}
-
-/** How many times the largest device in the list a result may be before the helper questions it. */
-export const FAR_BEYOND_FACTOR = 3;
-
-/**
- * A note when the watts worked out are far beyond every device in the list (more than three times the
- * largest): most often a unit or an efficiency typed wrong. Null when plausible or the list has no watts.
- */
-export function plausibilityNote(watts: number, listWatts: readonly (number | undefined)[]): string | null {
-	const known = listWatts.filter((w): w is number => typeof w === 'number' && Number.isFinite(w) && w > 0);
-	if (!known.length) return null;
-	const largest = Math.max(...known);
-	if (watts <= largest * FAR_BEYOND_FACTOR) return null;
-	return `That is about ${figure(watts / largest, 0)} times the largest device in this list (${figure(largest, 0)} W). Check the flow and its unit, the head and the efficiency before using it.`;
-}
-
-/**
- * The words of the button that puts the watts into a device: it names the device the person chose,
- * and there is no button (null) until they choose one, so no row is written by default.
- */
-export function useButtonText(watts: number, target: { name: string } | null): string | null {
-	return target ? `Use ${figure(watts, 1)} W for ${target.name}` : null;
 }
