@@ -56,6 +56,46 @@ test.describe('the public calculation API', () => {
 		expect(pumping.status()).toBe(200);
 		// About 2 psi to inject air 4.6 ft deep in fresh water (common practice, no source).
 		expect((await pumping.json()).air.psi).toBeCloseTo(2, 1);
+		// A pump body from before the friction choice: Hazen–Williams, no fittings, about 64 W for 10 gpm
+		// up 5 ft through 50 ft of 1-inch pipe at 25 % (derived from the equations).
+		const pipe = {
+			flow: 10,
+			flowUnit: 'gpm',
+			staticLift: 5,
+			staticLiftUnit: 'ft',
+			pipeLength: 50,
+			pipeLengthUnit: 'ft',
+			innerDiameter: 1,
+			innerDiameterUnit: 'in',
+			efficiencyPercent: 25
+		};
+		const old = await (await request.post('/api/v1/pumping', { data: { pump: pipe } })).json();
+		expect(old.pump).toMatchObject({
+			frictionMethod: 'hazen-williams',
+			fittingsHeadM: 0,
+			frictionFactor: null
+		});
+		expect(old.pump.inputWatts).toBeCloseTo(64, 0);
+		expect(old.pump.totalHeadM).toBeCloseTo(old.pump.staticHeadM + old.pump.frictionHeadM, 12);
+		// Darcy–Weisbach with two standard elbows (EPANET K 0.9 each): f ≈ 0.0234 at Re ≈ 31,500,
+		// elbows 1.8 × (1.245 m/s)² ÷ 2g ≈ 0.142 m (derived from the equations).
+		const darcy = await request.post('/api/v1/pumping', {
+			data: {
+				pump: { ...pipe, frictionMethod: 'darcy-weisbach', fittings: [{ kind: 'elbow-90-short', count: 2 }] }
+			}
+		});
+		expect(darcy.status()).toBe(200);
+		const { pump } = await darcy.json();
+		expect(pump.frictionFactor).toBeCloseTo(0.0234, 3);
+		expect(pump.fittingsHeadM).toBeCloseTo(0.142, 3);
+		expect(pump.totalHeadM).toBeCloseTo(pump.staticHeadM + pump.frictionHeadM + pump.fittingsHeadM, 12);
+		const refused = await request.post('/api/v1/pumping', {
+			data: { pump: { ...pipe, fittings: [{ kind: 'elbow-90-short', count: 0.5 }] } }
+		});
+		expect(refused.status()).toBe(400);
+		expect((await refused.json()).issues).toEqual([
+			{ path: 'pump.fittings.0.count', message: 'Number of fittings must be a whole number' }
+		]);
 		const compare = await request.post('/api/v1/compare', {
 			data: {
 				...body,

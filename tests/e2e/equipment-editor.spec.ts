@@ -7,7 +7,7 @@ import { PUBLIC_TARIFF, baselineOf, createSite } from './site-setup';
  * to amps × volts use 240 V; a water pump asks "Is it in the water?" in its row and a yes shows the
  * caution at once; an invalid entry is marked at its field and sends no request that fails; a change
  * shows its yearly cost against the saved list; the pumping helper refuses 0.3 % and puts its watts
- * only into the device the person names.
+ * only into the device the person names, and works the pipe out by Darcy–Weisbach with two elbows.
  */
 
 /** Every answer of the results endpoint that failed, and every error in the console, while the page is open. */
@@ -123,4 +123,26 @@ test('the pumping helper refuses 0.3 % and puts its watts only into the device n
 	const first = page.getByRole('group', { name: 'Water pump, device 1 of 2' });
 	await expect(second.getByRole('textbox', { name: 'Watts' })).toHaveValue(offered);
 	await expect(first.getByRole('textbox', { name: 'Watts' })).toHaveValue('100');
+
+	// Darcy–Weisbach at 20 °C and two standard elbows (EPANET K 0.9 each), derived from the equations:
+	// 10 gpm in a 1-inch pipe runs at 1.245 m/s; 50 ft of plastic pipe loses 1.109 m = 3.64 ft, the
+	// elbows 1.8 × 1.245² ÷ 2g = 0.142 m = 0.47 ft; with the 5 ft lift the total is 9.1 ft.
+	const helper = page.getByRole('region', { name: 'Pumping helper' });
+	const line = (term: string) =>
+		helper.locator('dt', { hasText: term }).locator('xpath=following-sibling::dd[1]');
+	await helper.getByRole('radio', { name: /^Darcy–Weisbach with the Colebrook friction factor/ }).check();
+	await expect(helper.getByLabel('Water temperature', { exact: true })).toHaveValue('20');
+	await expect(line('Pipe friction')).toContainText('3.64 ft (Darcy–Weisbach)');
+	await expect(line('Fittings and valves')).toHaveText('0 ft');
+	await helper.getByRole('button', { name: 'Add a fitting' }).click();
+	const fitting = helper.getByRole('group', { name: 'Fitting 1' });
+	await fitting.getByLabel('Kind').selectOption({ label: '90° elbow, standard (K 0.9)' });
+	await fitting.getByLabel('How many').fill('2');
+	await expect(line('Fittings and valves')).toHaveText('0.47 ft');
+	await expect(line('Pipe friction')).toContainText('3.64 ft');
+	await expect(line('Total head')).toHaveText('9.1 ft');
+	// A count that is not whole is refused at its row, in words.
+	await fitting.getByLabel('How many').fill('1.5');
+	await expect(fitting.getByLabel('How many')).toHaveAttribute('aria-invalid', 'true');
+	await expect(fitting.getByText('Number of fittings must be a whole number')).toBeVisible();
 });
