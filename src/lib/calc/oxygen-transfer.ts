@@ -74,6 +74,7 @@ export function fieldToStandardRatio(c: FieldConditions): { ratio: number; satur
 /**
  * Oxygen an air flow transfers from diffusers at a depth: standard transfer = air (as standard air) ×
  * 277.6 g/m³ × SOTE, SOTE = %/m × depth (at most 100 %); field transfer = standard × AOTR/SOTR.
+ * Example: 100 L/min (6 m³/h) through fine diffusers (6 %/m) 1 m deep at sea level → 99.9 g O₂/h standard.
  */
 export function oxygenFromAir(
 	freeAirLpm: number,
