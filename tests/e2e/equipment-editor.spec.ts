@@ -145,4 +145,23 @@ test('the pumping helper refuses 0.3 % and puts its watts only into the device n
 	await fitting.getByLabel('How many').fill('1.5');
 	await expect(fitting.getByLabel('How many')).toHaveAttribute('aria-invalid', 'true');
 	await expect(fitting.getByText('Number of fittings must be a whole number')).toBeVisible();
+
+	// At the tank on a phone: 390 px wide, no sideways scroll, and each control of a row 44 px or more.
+	await page.setViewportSize({ width: 390, height: 844 });
+	await helper.getByRole('button', { name: 'Add a fitting' }).click();
+	await expect(helper.getByRole('group', { name: 'Fitting 2' })).toBeVisible();
+	expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+	for (const control of [
+		fitting.getByLabel('Kind'),
+		fitting.getByLabel('How many'),
+		fitting.getByRole('button', { name: 'Remove fitting 1' }),
+		helper.getByRole('button', { name: 'Add a fitting' }),
+		// A radio's target is its whole label.
+		helper.locator('label', { hasText: /^\s*Hazen–Williams \(water near room temperature\)\s*$/ })
+	]) {
+		expect((await control.boundingBox())?.height ?? 0).toBeGreaterThanOrEqual(44);
+	}
+	await fitting.getByRole('button', { name: 'Remove fitting 1' }).click();
+	await expect(helper.getByRole('group', { name: 'Fitting 2' })).toHaveCount(0);
+	await expect(helper.getByRole('group', { name: 'Fitting 1' }).getByLabel('How many')).toHaveValue('1');
 });
