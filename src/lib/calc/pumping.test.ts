@@ -1,3 +1,4 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { darcyWeisbach } from './pipe-friction';
 import { airInjectionPressure, hazenWilliamsHeadLossM, pumpInputPower, pumping } from './pumping';
@@ -227,5 +228,90 @@ describe('the new fields, refused in words', () => {
 		]
 	])('refuses %j at its field', (more, path, message) => {
 		expect(messages(more)).toEqual([[path, message]]);
+	});
+});
+
+describe('any pump the schema accepts', () => {
+	const numbers = (value: unknown): number[] =>
+		typeof value === 'number'
+			? [value]
+			: value && typeof value === 'object'
+				? Object.values(value).flatMap(numbers)
+				: [];
+	// Ordinary figures most of the time, the schema's extremes now and then.
+	const figure = (min: number, max: number, ...edges: number[]) =>
+		fc.oneof(
+			{ weight: 4, arbitrary: fc.double({ min, max, noNaN: true }) },
+			{ weight: 1, arbitrary: fc.constantFrom(...edges) }
+		);
+
+	it('answers in finite numbers only: no NaN, no Infinity (property)', () => {
+		let answered = 0;
+		fc.assert(
+			fc.property(
+				fc.record({
+					flow: figure(0, 1000, 0, 5e-324, 1e-9, 10_000_000),
+					flowUnit: fc.constantFrom('gpm', 'gph', 'lpm', 'm3h'),
+					staticLift: figure(0, 100, 0, 10_000),
+					staticLiftUnit: fc.constantFrom('ft', 'm'),
+					pipeLength: figure(0, 1000, 0, 1_000_000),
+					pipeLengthUnit: fc.constantFrom('ft', 'm'),
+					innerDiameter: figure(0.5, 500, 1e-300, 5e-324, 10_000),
+					innerDiameterUnit: fc.constantFrom('in', 'mm'),
+					efficiencyPercent: figure(0.01, 100, 0.01, 100),
+					frictionMethod: fc.constantFrom('hazen-williams', 'darcy-weisbach'),
+					roughnessMm: figure(0, 10, 0, 10),
+					waterTemperatureC: figure(0, 40, 0, 40),
+					fittings: fc.array(
+						fc.record({
+							kind: fc.constantFrom('elbow-90-short', 'globe-valve'),
+							count: fc.integer({ min: 1, max: 1000 })
+						}),
+						{ maxLength: 3 }
+					)
+				}),
+				fc.constantFrom('fresh', 'sea'),
+				(pump, fluid) => {
+					const parsed = pumpingRequestSchema.safeParse({ fluid, pump });
+					if (!parsed.success) return;
+					answered++;
+					expect(numbers(pumping(parsed.data)).every(Number.isFinite)).toBe(true);
+				}
+			),
+			{ numRuns: 500 }
+		);
+		expect(answered).toBeGreaterThan(100);
+	});
+
+	it('refuses water faster than 100 m/s at the inner diameter, in words', () => {
+		const parsed = pumpingRequestSchema.safeParse({
+			pump: { ...pump(), flow: 1000, innerDiameter: 1e-300 }
+		});
+		expect(parsed.success ? [] : parsed.error.issues.map((i) => [i.path.join('.'), i.message])).toEqual([
+			[
+				'pump.innerDiameter',
+				'At this flow the water would run through this pipe faster than 100 m/s; check the flow, the inner diameter and their units'
+			]
+		]);
+	});
+
+	it('refuses, for Darcy–Weisbach, a roughness past the Moody diagram (ε/D 0.05)', () => {
+		const parsed = pumpingRequestSchema.safeParse({
+			pump: {
+				...pump(),
+				innerDiameter: 10,
+				innerDiameterUnit: 'mm',
+				roughnessMm: 0.6,
+				frictionMethod: 'darcy-weisbach'
+			}
+		});
+		expect(parsed.success ? [] : parsed.error.issues.map((i) => i.path.join('.'))).toEqual([
+			'pump.roughnessMm'
+		]);
+	});
+
+	it('says only what is wrong with a box that is not a number, not the speed as well', () => {
+		const parsed = pumpingRequestSchema.safeParse({ pump: { ...pump(), flow: 'ten' } });
+		expect(parsed.success ? [] : parsed.error.issues.map((i) => i.path.join('.'))).toEqual(['pump.flow']);
 	});
 });
