@@ -6,12 +6,33 @@ import { DIFFUSER_TRANSFER_PERCENT_PER_M, type AerationInput } from './aeration'
 import type { AerationRequest } from './aeration.schema';
 import type { AirliftInput } from './airlift';
 import type { AirliftRequest } from './airlift.schema';
-import { type FlowUnit, flowToCubicMetersPerSecond, lengthToMeters } from './units';
+import {
+	type FlowUnit,
+	flowToCubicMetersPerSecond,
+	lengthToMeters,
+	PASCALS_PER_INCH_OF_WATER,
+	PASCALS_PER_PSI
+} from './units';
 import { SALINITY_G_PER_KG } from './water';
 
 /** A flow in any of the pumping helper's units, in litres per minute. */
 export function flowToLpm(flow: number, unit: FlowUnit): number {
 	return flowToCubicMetersPerSecond(flow, unit) * 60_000;
+}
+
+/** Units an air pump's data sheet gives pressure in: kilopascals, psi, inches of water. */
+export const PRESSURE_UNITS = ['kPa', 'psi', 'inH2O'] as const;
+export type PressureUnit = (typeof PRESSURE_UNITS)[number];
+
+const PASCALS: Record<PressureUnit, number> = {
+	kPa: 1000,
+	psi: PASCALS_PER_PSI,
+	inH2O: PASCALS_PER_INCH_OF_WATER
+};
+
+/** A gauge pressure in any of PRESSURE_UNITS, in kPa. Example: 2 psi → 13.79 kPa; 40 inH₂O → 9.96 kPa. */
+export function pressureToKPa(pressure: number, unit: PressureUnit): number {
+	return (pressure * PASCALS[unit]) / 1000;
 }
 
 /**

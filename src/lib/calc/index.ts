@@ -47,7 +47,14 @@ export { airliftRequestSchema } from './airlift.schema';
 export type { AirliftRequest, AirliftRequestInput } from './airlift.schema';
 export { aerationRequestSchema } from './aeration.schema';
 export type { AerationRequest, AerationRequestInput } from './aeration.schema';
-export { aerationInputFrom, airliftInputFrom, flowToLpm } from './air-requests';
+export {
+	aerationInputFrom,
+	airliftInputFrom,
+	flowToLpm,
+	PRESSURE_UNITS,
+	pressureToKPa
+} from './air-requests';
+export type { PressureUnit } from './air-requests';
 export type * from './types';
 export { calculateAcrossVersions, NoVersionInForce, versionInForce } from './versions';
 export type { DatedTariff, VersionedResponse } from './versions';
