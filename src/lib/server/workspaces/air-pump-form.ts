@@ -18,7 +18,7 @@ function numberOrText(value: FormDataEntryValue | null): unknown {
 const blank = (value: FormDataEntryValue | null) => typeof value !== 'string' || value.trim() === '';
 
 export type PumpFormResult =
-	| { ok: true; pump: AirPump }
+	| { ok: true; pump: AirPump; values: Record<string, string> }
 	| { ok: false; errors: Record<string, string>; values: Record<string, string> };
 
 /**
@@ -48,7 +48,7 @@ export function readPumpForm(form: FormData): PumpFormResult {
 		inputWatts: blank(form.get('inputWatts')) ? null : numberOrText(form.get('inputWatts')),
 		wireToAirPercent: numberOrText(form.get('wireToAirPercent'))
 	});
-	if (parsed.success) return { ok: true, pump: parsed.data };
+	if (parsed.success) return { ok: true, pump: parsed.data, values };
 	const errors: Record<string, string> = {};
 	for (const [path, message] of Object.entries(fieldErrors(parsed.error))) {
 		const [head, index, field] = path.split('.');
