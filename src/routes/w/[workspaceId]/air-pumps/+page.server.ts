@@ -19,6 +19,8 @@ export const load = (async (event) => {
 	};
 }) satisfies PageServerLoad;
 
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
 const gone = (action: string) =>
 	fail(404, { action, errors: { form: 'This pump is no longer in the workspace; reload the page.' } });
 
@@ -48,6 +50,7 @@ export const actions = {
 	delete: async (event) => {
 		const { workspace } = await requireRole(event, event.params.workspaceId, 'editor');
 		const pumpId = String((await event.request.formData()).get('pumpId') ?? '');
+		if (!UUID.test(pumpId)) return fail(400, { action: 'delete', errors: { form: 'Choose a pump to delete.' } });
 		if (!(await deleteAirPump(workspace.id, pumpId))) return gone('delete');
 		return { action: 'delete', ok: true };
 	}
