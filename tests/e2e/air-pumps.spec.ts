@@ -11,7 +11,9 @@ const POINTS_PSI: [string, string][] = [
 	['3', '50']
 ];
 
-test('an editor adds a pump with three points on a phone and sees it listed with its curve', async ({ page }) => {
+test('an editor adds a pump with three points on a phone and sees it listed with its curve', async ({
+	page
+}) => {
 	const name = `Phone pump ${Date.now()} (invented)`;
 	await signInWithPassword(page, 'editor@example.org');
 	await page.goto(`/w/${DEMO_WS.id}`);

@@ -169,7 +169,10 @@ const TARGETS: Record<string, Target> = {
 	},
 	'/w/[workspaceId]/sites/new': { path: () => `${ws()}/sites/new`, fields: siteFields },
 	// Pumps of the throwaway workspace; valid posts add pumps until its 100 are reached (then 409).
-	'/w/[workspaceId]/air-pumps?/create': { path: () => `${ws()}/air-pumps?/create`, fields: () => pumpFields() },
+	'/w/[workspaceId]/air-pumps?/create': {
+		path: () => `${ws()}/air-pumps?/create`,
+		fields: () => pumpFields()
+	},
 	'/w/[workspaceId]/air-pumps?/update': {
 		path: () => `${ws()}/air-pumps?/update`,
 		fields: () => ({ ...pumpFields(), pumpId: made.airPump })

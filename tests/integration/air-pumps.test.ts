@@ -94,7 +94,12 @@ describe("a workspace's air pumps through the API", () => {
 		expect(listed.status).toBe(200);
 		expect(listed.body.airPumps).toEqual([{ id: pumpId, ...SIXTY_CLASS, wireToAirPercent: 25 }]);
 
-		const changed = { ...SIXTY_CLASS, name: 'Invented linear pump 60, checked', inputWatts: null, wireToAirPercent: 22 };
+		const changed = {
+			...SIXTY_CLASS,
+			name: 'Invented linear pump 60, checked',
+			inputWatts: null,
+			wireToAirPercent: 22
+		};
 		const put = await call(pumpRoute.PUT, apiEvent('editor', 'PUT', { workspaceId: wsA, pumpId }, changed));
 		expect(put.status).toBe(200);
 		expect(put.body).toEqual({ id: pumpId, ...changed });
@@ -112,7 +117,10 @@ describe("a workspace's air pumps through the API", () => {
 		pumpId = created.body.id;
 		const writes = [
 			call(listRoute.POST, apiEvent('viewer', 'POST', { workspaceId: wsA }, SIXTY_CLASS)),
-			call(pumpRoute.PUT, apiEvent('viewer', 'PUT', { workspaceId: wsA, pumpId }, { ...SIXTY_CLASS, name: 'x' })),
+			call(
+				pumpRoute.PUT,
+				apiEvent('viewer', 'PUT', { workspaceId: wsA, pumpId }, { ...SIXTY_CLASS, name: 'x' })
+			),
 			call(pumpRoute.DELETE, apiEvent('viewer', 'DELETE', { workspaceId: wsA, pumpId }))
 		];
 		expect((await Promise.all(writes)).map((answer) => answer.status)).toEqual([403, 403, 403]);
@@ -142,7 +150,10 @@ describe("a workspace's air pumps through the API", () => {
 			]
 		};
 		const cases: [unknown, { path: string; message: string }][] = [
-			[falling, { path: 'points.1.pressureKPa', message: 'Each pressure must be higher than the one before' }],
+			[
+				falling,
+				{ path: 'points.1.pressureKPa', message: 'Each pressure must be higher than the one before' }
+			],
 			[
 				{ ...SIXTY_CLASS, points: [{ pressureKPa: 10, airLpm: 60 }] },
 				{ path: 'points', message: 'Flow against pressure needs at least 2 entries' }
@@ -151,7 +162,10 @@ describe("a workspace's air pumps through the API", () => {
 				{ ...SIXTY_CLASS, points: [{ pressureKPa: -1, airLpm: 60 }, { pressureKPa: 5 }] },
 				{ path: 'points.0.pressureKPa', message: 'Pressure must be zero or more' }
 			],
-			[{ ...SIXTY_CLASS, name: '' }, { path: 'name', message: 'Pump name must not be empty' }]
+			[
+				{ ...SIXTY_CLASS, name: '' },
+				{ path: 'name', message: 'Pump name must not be empty' }
+			]
 		];
 		for (const [body, issue] of cases) {
 			const answer = await call(listRoute.POST, apiEvent('editor', 'POST', { workspaceId: wsA }, body));

@@ -17,10 +17,14 @@ function numbersOf(value: unknown): number[] {
 function answer(kind: 'airlift' | 'aeration', json: unknown) {
 	if (kind === 'airlift') {
 		const parsed = parseRequest(airliftRequestSchema, json);
-		return parsed.success ? { status: 200, body: airlift(airliftInputFrom(parsed.data)) } : { status: 400, body: parsed.error };
+		return parsed.success
+			? { status: 200, body: airlift(airliftInputFrom(parsed.data)) }
+			: { status: 400, body: parsed.error };
 	}
 	const parsed = parseRequest(aerationRequestSchema, json);
-	return parsed.success ? { status: 200, body: aeration(aerationInputFrom(parsed.data)) } : { status: 400, body: parsed.error };
+	return parsed.success
+		? { status: 200, body: aeration(aerationInputFrom(parsed.data)) }
+		: { status: 400, body: parsed.error };
 }
 
 function expectFinite(body: unknown) {
@@ -61,7 +65,9 @@ const airliftArb: fc.Arbitrary<AirliftRequestInput> = fc
 		efficiencyPercent: within(10, 60)
 	})
 	.map(({ flow, flowUnit: unit, givesWater, ...rest }) =>
-		givesWater ? { ...rest, waterFlow: flow, waterFlowUnit: unit } : { ...rest, airFlow: flow, airFlowUnit: unit }
+		givesWater
+			? { ...rest, waterFlow: flow, waterFlowUnit: unit }
+			: { ...rest, airFlow: flow, airFlowUnit: unit }
 	);
 
 const demandArb: fc.Arbitrary<AerationRequestInput['demand']> = fc.oneof(
@@ -95,7 +101,9 @@ const aerationArb: fc.Arbitrary<AerationRequestInput> = fc.record(
 		wireToAirPercent: positive(100),
 		demand: demandArb
 	},
-	{ requiredKeys: ['temperatureC', 'targetDoMgL', 'diffuserDepth', 'diffuserDepthUnit', 'diffuser', 'demand'] }
+	{
+		requiredKeys: ['temperatureC', 'targetDoMgL', 'diffuserDepth', 'diffuserDepthUnit', 'diffuser', 'demand']
+	}
 );
 
 /** Hostile JSON: anything at all, and objects of the requests' own keys holding wrong or boundary values. */
@@ -106,8 +114,41 @@ const hostileValue = fc.oneof(
 );
 const keysOf = (arb: 'airlift' | 'aeration') =>
 	arb === 'airlift'
-		? ['fluid', 'temperatureC', 'riserInnerDiameter', 'riserInnerDiameterUnit', 'submergence', 'submergenceUnit', 'lift', 'liftUnit', 'waterFlow', 'waterFlowUnit', 'airFlow', 'airFlowUnit', 'efficiencyPercent', 'salinityGPerKg', 'altitudeM']
-		: ['temperatureC', 'salinityGPerKg', 'altitudeM', 'targetDoMgL', 'diffuserDepth', 'diffuserDepthUnit', 'diffuser', 'transferPercentPerM', 'alpha', 'beta', 'fouling', 'theta', 'depthCorrection', 'extraPressureKPa', 'wireToAirPercent', 'demand'];
+		? [
+				'fluid',
+				'temperatureC',
+				'riserInnerDiameter',
+				'riserInnerDiameterUnit',
+				'submergence',
+				'submergenceUnit',
+				'lift',
+				'liftUnit',
+				'waterFlow',
+				'waterFlowUnit',
+				'airFlow',
+				'airFlowUnit',
+				'efficiencyPercent',
+				'salinityGPerKg',
+				'altitudeM'
+			]
+		: [
+				'temperatureC',
+				'salinityGPerKg',
+				'altitudeM',
+				'targetDoMgL',
+				'diffuserDepth',
+				'diffuserDepthUnit',
+				'diffuser',
+				'transferPercentPerM',
+				'alpha',
+				'beta',
+				'fouling',
+				'theta',
+				'depthCorrection',
+				'extraPressureKPa',
+				'wireToAirPercent',
+				'demand'
+			];
 /** A valid body with one to three of its values swapped for hostile ones. */
 const spoiled = <T extends object>(valid: fc.Arbitrary<T>, keys: string[]) =>
 	fc
@@ -131,7 +172,11 @@ describe.each(['airlift', 'aeration'] as const)('POST /api/v1/%s', (kind) => {
 	});
 
 	it('answers any JSON with 200 and finite numbers, or 400 with field paths and words', () => {
-		const anyJson = fc.oneof(fc.jsonValue(), spoiled(valid, keysOf(kind)), fc.dictionary(fc.constantFrom(...keysOf(kind)), hostileValue));
+		const anyJson = fc.oneof(
+			fc.jsonValue(),
+			spoiled(valid, keysOf(kind)),
+			fc.dictionary(fc.constantFrom(...keysOf(kind)), hostileValue)
+		);
 		fc.assert(
 			fc.property(anyJson, (json) => {
 				const result = answer(kind, json);

@@ -40,7 +40,10 @@ export function readPumpForm(form: FormData): PumpFormResult {
 		if (blank(pressure) && blank(air)) continue;
 		const typed = numberOrText(pressure);
 		rows.push(row);
-		points.push({ pressureKPa: typeof typed === 'number' ? pressureToKPa(typed, unit) : typed, airLpm: numberOrText(air) });
+		points.push({
+			pressureKPa: typeof typed === 'number' ? pressureToKPa(typed, unit) : typed,
+			airLpm: numberOrText(air)
+		});
 	}
 	const parsed = airPumpSchema.safeParse({
 		name: form.get('name') ?? undefined,

@@ -22,7 +22,13 @@ const columns = {
 	wireToAirPercent: airPumps.wireToAirPercent
 };
 
-type Row = { id: string; name: string; points: AirPump['points']; inputWatts: number | null; wireToAirPercent: number };
+type Row = {
+	id: string;
+	name: string;
+	points: AirPump['points'];
+	inputWatts: number | null;
+	wireToAirPercent: number;
+};
 
 const shaped = ({ id, ...pump }: Row): WorkspaceAirPump => ({ id, pump });
 
@@ -49,7 +55,10 @@ export async function findAirPump(workspaceId: string, pumpId: string): Promise<
 /** Stores a validated pump; 'full' when the workspace already keeps MAX_AIR_PUMPS. */
 export async function createAirPump(workspaceId: string, pump: AirPump): Promise<{ id: string } | 'full'> {
 	return db.transaction(async (tx) => {
-		const [kept] = await tx.select({ n: count() }).from(airPumps).where(eq(airPumps.workspaceId, workspaceId));
+		const [kept] = await tx
+			.select({ n: count() })
+			.from(airPumps)
+			.where(eq(airPumps.workspaceId, workspaceId));
 		if ((kept?.n ?? 0) >= MAX_AIR_PUMPS) return 'full' as const;
 		const [row] = await tx
 			.insert(airPumps)

@@ -50,7 +50,8 @@ export const actions = {
 	delete: async (event) => {
 		const { workspace } = await requireRole(event, event.params.workspaceId, 'editor');
 		const pumpId = String((await event.request.formData()).get('pumpId') ?? '');
-		if (!UUID.test(pumpId)) return fail(400, { action: 'delete', errors: { form: 'Choose a pump to delete.' } });
+		if (!UUID.test(pumpId))
+			return fail(400, { action: 'delete', errors: { form: 'Choose a pump to delete.' } });
 		if (!(await deleteAirPump(workspace.id, pumpId))) return gone('delete');
 		return { action: 'delete', ok: true };
 	}

@@ -23,7 +23,11 @@ export const POST: RequestHandler = async (event) => {
 	if (!parsed.success) return invalid(parsed.error.issues);
 	const created = await createAirPump(workspace.id, parsed.data);
 	if (created === 'full')
-		return apiError(409, 'too_many', `A workspace keeps at most ${MAX_AIR_PUMPS} air pumps; delete one first.`);
+		return apiError(
+			409,
+			'too_many',
+			`A workspace keeps at most ${MAX_AIR_PUMPS} air pumps; delete one first.`
+		);
 	const stored = await findAirPump(workspace.id, created.id);
 	return json(airPumpJson(stored!), {
 		status: 201,
