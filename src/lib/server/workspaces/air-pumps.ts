@@ -96,3 +96,6 @@ const fields = (pump: AirPump) => ({
 	inputWatts: pump.inputWatts,
 	wireToAirPercent: pump.wireToAirPercent
 });
+
+/** A pump as the API answers it: its id beside the data sheet's fields (pressures in kPa gauge, air in L/min). */
+export const airPumpJson = ({ id, pump }: WorkspaceAirPump) => ({ id, ...pump });

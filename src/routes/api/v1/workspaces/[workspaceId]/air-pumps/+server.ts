@@ -4,8 +4,13 @@ import { requireRole } from '$lib/server/guard';
 import { PRIVATE, invalid, methodNotAllowed } from '$lib/server/http/answers';
 import { readJsonBody } from '$lib/server/http/body';
 import { apiError } from '$lib/server/http/json';
-import { createAirPump, findAirPump, listAirPumps, MAX_AIR_PUMPS } from '$lib/server/workspaces/air-pumps';
-import { airPumpJson } from './air-pump-json';
+import {
+	airPumpJson,
+	createAirPump,
+	findAirPump,
+	listAirPumps,
+	MAX_AIR_PUMPS
+} from '$lib/server/workspaces/air-pumps';
 import type { RequestHandler } from './$types';
 
 /** GET — the workspace's own air pumps, by name. */

@@ -3,8 +3,7 @@ import { airPumpSchema, parseRequest } from '$lib/calc';
 import { requireRole } from '$lib/server/guard';
 import { PRIVATE, invalid, methodNotAllowed, notFound } from '$lib/server/http/answers';
 import { readJsonBody } from '$lib/server/http/body';
-import { deleteAirPump, findAirPump, updateAirPump } from '$lib/server/workspaces/air-pumps';
-import { airPumpJson } from '../air-pump-json';
+import { airPumpJson, deleteAirPump, findAirPump, updateAirPump } from '$lib/server/workspaces/air-pumps';
 import type { RequestHandler } from './$types';
 
 /** GET — one of the workspace's pumps. */
