@@ -53,9 +53,9 @@ const airliftArb: fc.Arbitrary<AirliftRequestInput> = fc
 		salinityGPerKg: fc.option(within(0, 45), { nil: undefined }),
 		temperatureC: within(0, 40),
 		altitudeM: within(-500, 6000),
-		riserInnerDiameter: positive(1000),
+		riserInnerDiameter: fc.oneof(positive(1000), fc.constantFrom(3, 0.1182, 39.37)),
 		riserInnerDiameterUnit: fc.constantFrom('mm' as const, 'in' as const),
-		submergence: positive(100),
+		submergence: fc.oneof(positive(100), fc.constantFrom(0.01, 1, 0.3938, 0.0329)),
 		submergenceUnit: depthUnit,
 		lift: within(0, 100),
 		liftUnit: depthUnit,
@@ -64,11 +64,14 @@ const airliftArb: fc.Arbitrary<AirliftRequestInput> = fc
 		givesWater: fc.boolean(),
 		efficiencyPercent: within(10, 60)
 	})
-	.map(({ flow, flowUnit: unit, givesWater, ...rest }) =>
+	.map(({ flow, flowUnit: unit, givesWater, ...rest }): AirliftRequestInput =>
 		givesWater
 			? { ...rest, waterFlow: flow, waterFlowUnit: unit }
 			: { ...rest, airFlow: flow, airFlowUnit: unit }
-	);
+	)
+	// The bounds that depend on the unit (a riser of 3 mm to 1 m, at least 1 cm of submergence) are the
+	// schema's own; this property is about every body it accepts.
+	.filter((body) => airliftRequestSchema.safeParse(body).success);
 
 const demandArb: fc.Arbitrary<AerationRequestInput['demand']> = fc.oneof(
 	fc.record(

@@ -2,10 +2,11 @@
  * The API's air requests, in the units people type, turned into the core's SI inputs: lengths in
  * metres, flows in litres per minute, salinity from the kind of water unless given.
  */
-import { DIFFUSER_TRANSFER_PERCENT_PER_M, type AerationInput } from './aeration';
+import type { AerationInput } from './aeration';
 import type { AerationRequest } from './aeration.schema';
 import type { AirliftInput } from './airlift';
 import type { AirliftRequest } from './airlift.schema';
+import { DIFFUSER_TRANSFER_PERCENT_PER_M } from './oxygen-transfer';
 import {
 	type FlowUnit,
 	flowToCubicMetersPerSecond,
