@@ -111,6 +111,18 @@ export function hostileBodies(maxBytes = BODY_LIMIT_BYTES - 1024) {
 		'POST /api/v1/pumping': fillTo(maxBytes, (n) => ({
 			pump: Object.fromEntries(Array.from({ length: n }, (_, i) => [`k${i}`, {}]))
 		})),
+		'POST /api/v1/airlift': fillTo(maxBytes, (n) => ({
+			waterFlow: {},
+			...Object.fromEntries(Array.from({ length: n }, (_, i) => [`k${i}`, {}]))
+		})),
+		'POST /api/v1/aeration': fillTo(maxBytes, (n) => ({
+			demand: Object.fromEntries(Array.from({ length: n }, (_, i) => [`k${i}`, {}]))
+		})),
+		'POST /api/v1/workspaces/:id/air-pumps': fillTo(
+			maxBytes,
+			(n) => ({ name: 'x'.repeat(n), points: Array(20).fill({}) }),
+			2 ** 20
+		),
 		'PUT /api/v1/scenarios/:id/equipment': fillTo(
 			maxBytes,
 			(n) => ({

@@ -26,6 +26,9 @@ let throwaway = '';
 /** A bill of the demo site and its attached PDF (invented), made for this test. */
 let bill = '';
 let attachment = '';
+/** An air pump of the demo workspace (invented), made for this test. */
+let airPump = '';
+const airPumpsApi = `/api/v1/workspaces/${DEMO_WS.id}/air-pumps`;
 
 export type Route = {
 	method: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
@@ -115,6 +118,28 @@ export const routes: Route[] = [
 		path: () => '/api/v1/tariffs',
 		json: { workspaceId: null },
 		expect: [401, 403, 403, 403, 403, 400, 403]
+	},
+	// The workspace's own air pumps: viewers read, editors write.
+	{ method: 'GET', path: () => `${ws}/air-pumps`, expect: [303, 200, 200, 200, 404, 404, 404] },
+	...['create', 'update', 'delete'].map((action) => ({
+		method: 'POST' as const,
+		path: () => `${ws}/air-pumps?/${action}`,
+		form: { name: '', pressureUnit: 'kPa', pumpId: 'x' },
+		expect: [401, 403, 400, 400, 404, 404, 404]
+	})),
+	{ method: 'GET', path: () => airPumpsApi, expect: [401, 200, 200, 200, 404, 404, 404] },
+	{ method: 'POST', path: () => airPumpsApi, json: {}, expect: [401, 403, 400, 400, 404, 404, 404] },
+	{ method: 'GET', path: () => `${airPumpsApi}/${airPump}`, expect: [401, 200, 200, 200, 404, 404, 404] },
+	{
+		method: 'PUT',
+		path: () => `${airPumpsApi}/${airPump}`,
+		json: {},
+		expect: [401, 403, 400, 400, 404, 404, 404]
+	},
+	{
+		method: 'DELETE',
+		path: () => `${airPumpsApi}/00000000-0000-4000-8000-000000000000`,
+		expect: [401, 403, 404, 404, 404, 404, 404]
 	},
 	// Sites, scenarios and equipment (a demo site of the owner's workspace).
 	{ method: 'GET', path: () => `${ws}/sites`, expect: [303, 200, 200, 200, 404, 404, 404] },
@@ -321,7 +346,7 @@ export const routes: Route[] = [
 		path: () => page,
 		expect: [200, 200, 200, 200, 200, 200, 200]
 	})),
-	...['/api/v1/calculate', '/api/v1/pumping'].map((api) => ({
+	...['/api/v1/calculate', '/api/v1/pumping', '/api/v1/airlift', '/api/v1/aeration'].map((api) => ({
 		method: 'POST' as const,
 		path: () => api,
 		json: {},
@@ -486,4 +511,15 @@ export async function makeFixtures(owner: APIRequestContext, baseURL: string) {
 	});
 	expect(attached.status()).toBe(201);
 	attachment = (await attached.json()).id;
+	const pump = await owner.post(airPumpsApi, {
+		data: {
+			name: 'Matrix test pump (invented)',
+			points: [
+				{ pressureKPa: 10, airLpm: 60 },
+				{ pressureKPa: 20, airLpm: 45 }
+			]
+		}
+	});
+	expect(pump.status()).toBe(201);
+	airPump = (await pump.json()).id;
 }

@@ -113,4 +113,81 @@ test.describe('the public calculation API', () => {
 		const result = await compare.json();
 		expect(result.scenarios[1].savingsPerYear).toBeGreaterThan(0);
 	});
+	test('answers the air-lift and aeration endpoints with the worked examples', async ({ request }) => {
+		const airlift = await request.post('/api/v1/airlift', {
+			data: {
+				fluid: 'fresh',
+				temperatureC: 20,
+				riserInnerDiameter: 25,
+				riserInnerDiameterUnit: 'mm',
+				submergence: 0.7,
+				submergenceUnit: 'm',
+				lift: 30,
+				liftUnit: 'cm',
+				waterFlow: 20,
+				waterFlowUnit: 'lpm'
+			}
+		});
+		expect(airlift.status()).toBe(200);
+		const lifted = await airlift.json();
+		// Derived from Nicklin's (1963) equation: Q_a = ρ·g·Q_w·h / (η·p_a·ln(p_in/p_a)), η 30 % by default.
+		expect(lifted.airFlowLpm).toBeCloseTo(29.5, 1);
+		expect(lifted.injectionPressureKPa).toBeCloseTo(6.9, 1);
+		expect(lifted.waterFlowLpm).toBeCloseTo(20, 9);
+		expect(lifted.submergenceRatio).toBeCloseTo(0.7, 9);
+		expect(lifted.curve.length).toBeGreaterThan(2);
+		for (const key of ['airToWaterRatio', 'hydraulicWatts', 'isothermalAirWatts', 'maxWaterFlowLpm'])
+			expect(Number.isFinite(lifted[key]), key).toBe(true);
+		expect(Array.isArray(lifted.warnings)).toBe(true);
+
+		const aeration = await request.post('/api/v1/aeration', {
+			data: {
+				temperatureC: 20,
+				targetDoMgL: 2,
+				diffuserDepth: 1,
+				diffuserDepthUnit: 'm',
+				diffuser: 'fine',
+				alpha: 1,
+				beta: 1,
+				fouling: 1,
+				depthCorrection: 0,
+				demand: { oxygenGramsPerHour: 10 }
+			}
+		});
+		expect(aeration.status()).toBe(200);
+		const aerated = await aeration.json();
+		// Metcalf & Eddy's correction in clean water at 20 °C and sea level: (9.092 − 2) / 9.092 = 0.780
+		// (issue 18's check; 9.092 mg/L by Benson & Krause 1984 via Standard Methods 4500-O).
+		expect(aerated.fieldToStandardRatio).toBeCloseTo(0.78, 3);
+		expect(aerated.doSaturationMgL).toBeCloseTo(9.092, 3);
+		expect(aerated.oxygenDemandGramsPerHour).toBe(10);
+		expect(aerated.standardTransferGramsPerHour).toBeCloseTo(10 / 0.78, 1);
+	});
+
+	test('refuses an air-lift with both flows or neither in one worded message', async ({ request }) => {
+		const riser = {
+			temperatureC: 20,
+			riserInnerDiameter: 1,
+			riserInnerDiameterUnit: 'in',
+			submergence: 2,
+			submergenceUnit: 'ft',
+			lift: 6,
+			liftUnit: 'in'
+		};
+		const both = { ...riser, waterFlow: 5, waterFlowUnit: 'gpm', airFlow: 1, airFlowUnit: 'm3h' };
+		for (const [data, message] of [
+			[both, 'Give either the water flow or the air flow, not both'],
+			[riser, 'Give the water flow you want lifted or the air flow you have']
+		] as const) {
+			const res = await request.post('/api/v1/airlift', { data });
+			expect(res.status()).toBe(400);
+			expect((await res.json()).issues).toEqual([{ path: 'waterFlow', message }]);
+		}
+		const bad = await request.post('/api/v1/aeration', {
+			data: { temperatureC: 50, targetDoMgL: 5, diffuserDepth: 1, diffuserDepthUnit: 'yd', demand: {} }
+		});
+		expect(bad.status()).toBe(400);
+		const paths = (await bad.json()).issues.map((i: { path: string }) => i.path);
+		expect(paths).toEqual(expect.arrayContaining(['temperatureC', 'diffuserDepthUnit', 'demand']));
+	});
 });

@@ -28,7 +28,7 @@ const publicTariff = (
 ).tariffs[0]!.id;
 
 let owner: APIRequestContext;
-const made = { workspace: '', site: '', scenario: '', bill: '', tariff: '' };
+const made = { workspace: '', site: '', scenario: '', bill: '', tariff: '', airPump: '' };
 const sheets = { bills: '', equipment: '', tariffs: '', xlsx: [] as Buffer[] };
 
 type Entry = [string, string | FilePart];
@@ -61,6 +61,20 @@ const bill = () => ({
 	lineItems: 'Energy | 170.50\nCustomer charge | 10',
 	notes: 'Invented by the fuzz test',
 	confirmOverlap: 'yes'
+});
+/** An air pump's data sheet as its form posts it; `points` names the rows together (too few, too many). */
+const pumpFields = () => ({
+	name: 'Fuzz air pump (invented)',
+	pressureUnit: 'psi',
+	'pressure.0': '1',
+	'airLpm.0': '70',
+	'pressure.1': '2',
+	'airLpm.1': '62',
+	'pressure.2': '3',
+	'airLpm.2': '50',
+	inputWatts: '45',
+	wireToAirPercent: '25',
+	points: undefined
 });
 const siteFields = () => ({
 	name: 'Fuzz site (invented)',
@@ -154,6 +168,20 @@ const TARGETS: Record<string, Target> = {
 		fields: () => ({ scenarioId: made.scenario, undo: undefined, confirm: 'yes' })
 	},
 	'/w/[workspaceId]/sites/new': { path: () => `${ws()}/sites/new`, fields: siteFields },
+	// Pumps of the throwaway workspace; valid posts add pumps until its 100 are reached (then 409).
+	'/w/[workspaceId]/air-pumps?/create': {
+		path: () => `${ws()}/air-pumps?/create`,
+		fields: () => pumpFields()
+	},
+	'/w/[workspaceId]/air-pumps?/update': {
+		path: () => `${ws()}/air-pumps?/update`,
+		fields: () => ({ ...pumpFields(), pumpId: made.airPump })
+	},
+	// The first valid post deletes the throwaway pump; the rest find it gone (404).
+	'/w/[workspaceId]/air-pumps?/delete': {
+		path: () => `${ws()}/air-pumps?/delete`,
+		fields: () => ({ pumpId: made.airPump })
+	},
 	// The public tariff is only read; its copies land in the throwaway workspace.
 	'/tariffs/[tariffId]?/copy': {
 		path: () => `/tariffs/${publicTariff}?/copy`,
@@ -484,6 +512,17 @@ test.beforeAll(async ({ browser, baseURL }) => {
 	});
 	expect(billed.status()).toBe(201);
 	made.bill = (await billed.json()).id;
+	const pump = await owner.post(`/api/v1/workspaces/${made.workspace}/air-pumps`, {
+		data: {
+			name: 'Fuzz throwaway pump (invented)',
+			points: [
+				{ pressureKPa: 10, airLpm: 60 },
+				{ pressureKPa: 20, airLpm: 45 }
+			]
+		}
+	});
+	expect(pump.status()).toBe(201);
+	made.airPump = (await pump.json()).id;
 	sheets.bills = await (await owner.get(`${site()}/bills/template.csv`)).text();
 	sheets.equipment = await (
 		await owner.get(`${site()}/scenarios/${made.scenario}/import/template.csv`)

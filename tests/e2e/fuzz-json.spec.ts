@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { expect, test } from '@playwright/test';
 import { readFileSync } from 'node:fs';
-import { signInWithPassword } from './helpers';
+import { DEMO_WS, signInWithPassword } from './helpers';
 
 // Hostile JSON against the JSON endpoints: random values, boundary numbers, NaN-like strings, deep
 // nesting, long and unicode strings, wrong types. The answer is never a 500 and never a stack trace.
@@ -43,7 +43,11 @@ const body = fc.oneof(
 			'amount',
 			'devices',
 			'expectedRevision',
-			'name'
+			'name',
+			'temperatureC',
+			'waterFlow',
+			'demand',
+			'points'
 		),
 		nasty
 	),
@@ -54,6 +58,9 @@ const ENDPOINTS = [
 	['POST', '/api/v1/calculate'],
 	['POST', '/api/v1/compare'],
 	['POST', '/api/v1/pumping'],
+	['POST', '/api/v1/airlift'],
+	['POST', '/api/v1/aeration'],
+	['POST', `/api/v1/workspaces/${DEMO_WS.id}/air-pumps`],
 	['POST', '/api/v1/sites'],
 	['POST', `/api/v1/sites/${site.id}/bills`],
 	['POST', `/api/v1/sites/${site.id}/scenarios`],
@@ -63,7 +70,7 @@ const ENDPOINTS = [
 
 test('hostile JSON never gets a 500 or a stack trace from any JSON endpoint', async ({ page }) => {
 	test.setTimeout(120_000);
-	// An editor's requests reach validation. 25 runs × 8 endpoints stay well inside a member's 600 a minute.
+	// An editor's requests reach validation. 25 runs × 11 endpoints stay well inside a member's 600 a minute.
 	await signInWithPassword(page, 'editor@example.org');
 	for (const [method, path] of ENDPOINTS) {
 		await fc.assert(

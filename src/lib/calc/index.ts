@@ -65,6 +65,18 @@ export type {
 	PumpingRequest,
 	PumpingRequestInput
 } from './pumping.schema';
+export { airliftRequestSchema } from './airlift.schema';
+export type { AirliftRequest, AirliftRequestInput } from './airlift.schema';
+export { aerationRequestSchema } from './aeration.schema';
+export type { AerationRequest, AerationRequestInput } from './aeration.schema';
+export {
+	aerationInputFrom,
+	airliftInputFrom,
+	flowToLpm,
+	PRESSURE_UNITS,
+	pressureToKPa
+} from './air-requests';
+export type { PressureUnit } from './air-requests';
 export type * from './types';
 export { calculateAcrossVersions, NoVersionInForce, versionInForce } from './versions';
 export type { DatedTariff, VersionedResponse } from './versions';

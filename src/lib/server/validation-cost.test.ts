@@ -1,6 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { z } from 'zod';
 import {
+	aerationRequestSchema,
+	airliftRequestSchema,
+	airPumpSchema,
 	calculateRequestSchema,
 	compareRequestSchema,
 	MAX_REPORTED_ISSUES,
@@ -17,6 +20,9 @@ const SCHEMAS: Record<string, z.ZodType> = {
 	'POST /api/v1/calculate': calculateRequestSchema,
 	'POST /api/v1/compare': compareRequestSchema,
 	'POST /api/v1/pumping': pumpingRequestSchema,
+	'POST /api/v1/airlift': airliftRequestSchema,
+	'POST /api/v1/aeration': aerationRequestSchema,
+	'POST /api/v1/workspaces/:id/air-pumps': airPumpSchema,
 	'PUT /api/v1/scenarios/:id/equipment': equipmentListSchema,
 	'POST /api/v1/scenarios/:id/results': previewSchema,
 	'PUT /api/v1/scenarios/:id/equipment/:position': deviceRowSchema,
