@@ -1,13 +1,6 @@
 import { z } from 'zod';
-import { DEPTH_UNITS, DIFFUSER_KINDS, transferFactorsShape } from './air-design.schema';
+import { checkDiffuserDepth, DEPTH_UNITS, DIFFUSER_KINDS, transferFactorsShape } from './air-design.schema';
 import { amount, choice, record } from './fields';
-import { lengthToMeters } from './units';
-
-/**
- * The shallowest diffuser the request takes, m: shallower than a few centimetres its bubbles transfer
- * next to nothing, and the air needed grows without bound.
- */
-const MIN_DIFFUSER_DEPTH_M = 0.05;
 
 /** Oxygen demand from the day's feed: fish respiration plus nitrification of the feed's ammonia. */
 const feedDemandSchema = record('Demand', {
@@ -38,21 +31,6 @@ export const aerationRequestSchema = record('Request', {
 	diffuser: choice('Diffuser', DIFFUSER_KINDS).optional(),
 	transferPercentPerM: amount('Transfer efficiency per metre', { min: 0.5, max: 20 }).optional(),
 	...transferFactorsShape,
-	// Floors on the factors the correction divides by, so the answer stays finite: below them the figure
-	// would describe no aquaculture water (α about 0.8–1.0 there, 0.3–0.5 in raw sewage; β about 0.95–0.99;
-	// F 0.9–1.0 for diffusers in service, per Metcalf & Eddy's ranges).
-	alpha: transferFactorsShape.alpha
-		.removeDefault()
-		.min(0.2, { error: 'Alpha (α) must be at least 0.2' })
-		.default(0.9),
-	beta: transferFactorsShape.beta
-		.removeDefault()
-		.min(0.5, { error: 'Beta (β) must be at least 0.5' })
-		.default(0.98),
-	fouling: transferFactorsShape.fouling
-		.removeDefault()
-		.min(0.5, { error: 'Fouling factor must be at least 0.5' })
-		.default(0.9),
 	/** Diffuser and tubing loss on top of the water column, kPa. */
 	extraPressureKPa: amount('Diffuser and line loss', { min: 0, max: 50 }).default(2),
 	wireToAirPercent: amount('Wire-to-air efficiency', { min: 1, max: 100 }).default(25),
@@ -63,12 +41,7 @@ export const aerationRequestSchema = record('Request', {
 				: 'Give the demand as daily feed and protein, or as grams of oxygen an hour'
 	})
 }).superRefine((request, ctx) => {
-	if (lengthToMeters(request.diffuserDepth, request.diffuserDepthUnit) < MIN_DIFFUSER_DEPTH_M)
-		ctx.addIssue({
-			code: 'custom',
-			path: ['diffuserDepth'],
-			message: 'Diffuser depth must be at least 5 cm (2 in)'
-		});
+	checkDiffuserDepth(request, ctx);
 	if (!request.diffuser && request.transferPercentPerM === undefined)
 		ctx.addIssue({
 			code: 'custom',

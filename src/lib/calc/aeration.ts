@@ -10,6 +10,9 @@ import {
 } from './oxygen-transfer';
 import { barometricPressureAtm, STANDARD_ATMOSPHERE_PA, waterDensityKgPerM3 } from './water';
 
+/** Below this field-to-standard ratio the target sits so near saturation that the air needed runs away. */
+const NEAR_SATURATION_RATIO = 0.1;
+
 export interface AerationInput extends FieldConditions {
 	transferPercentPerM: number;
 	/** Diffuser and line losses on top of the water column, kPa. */
@@ -61,6 +64,11 @@ export function aeration(input: AerationInput): AerationResult {
 		warnings.push({
 			code: 'target-above-saturation',
 			message: `Water at this temperature, salt and altitude holds at most about ${saturationMgL.toFixed(1)} mg/L at the diffusers (after the β and depth corrections); a target of ${input.targetDoMgL} mg/L cannot be reached with air. Lower the target.`
+		});
+	else if (ratio < NEAR_SATURATION_RATIO)
+		warnings.push({
+			code: 'near-saturation',
+			message: `The target is close to the most this water holds at the diffusers (about ${saturationMgL.toFixed(1)} mg/L at the surface): the air needed climbs steeply near it. A lower target cuts the air many times over.`
 		});
 	if (demandGramsPerHour === 0)
 		warnings.push({

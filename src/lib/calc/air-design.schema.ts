@@ -1,11 +1,58 @@
 import { z } from 'zod';
 import { amount, choice, list, record, text } from './fields';
-import { FLOW_UNITS } from './units';
+import { FLOW_UNITS, lengthToMeters } from './units';
 
 /** Units a depth, submergence or lift may be typed in. */
 export const DEPTH_UNITS = ['m', 'ft', 'cm', 'in'] as const;
 export const RISER_DIAMETER_UNITS = ['mm', 'in'] as const;
 export const DIFFUSER_KINDS = ['fine', 'coarse'] as const;
+
+/**
+ * What the air models can answer, in metres, whatever unit was typed: risers narrower than a few
+ * millimetres are ruled by surface tension, which neither Nicklin's efficiency nor Stenning & Martin's
+ * momentum balance includes (Reinemann et al. 1990 studied such small tubes apart); an injection or a
+ * diffuser a hair's breadth under the surface pushes no air (ln(p_in/p_a) → 0).
+ */
+const RISER_M = { min: 0.003, max: 1 };
+const MIN_SUBMERGENCE_M = 0.01;
+const MIN_DIFFUSER_DEPTH_M = 0.05;
+
+type Lengths = {
+	riserInnerDiameter: number;
+	riserInnerDiameterUnit: (typeof RISER_DIAMETER_UNITS)[number];
+	submergence: number;
+	submergenceUnit: (typeof DEPTH_UNITS)[number];
+};
+
+/** The riser and submergence bounds in metres, for the design and for `POST /api/v1/airlift` alike. */
+export function checkAirliftLengths(airlift: Lengths, ctx: z.RefinementCtx) {
+	const riserM = lengthToMeters(airlift.riserInnerDiameter, airlift.riserInnerDiameterUnit);
+	if (riserM < RISER_M.min || riserM > RISER_M.max)
+		ctx.addIssue({
+			code: 'custom',
+			path: ['riserInnerDiameter'],
+			message: 'Riser inner diameter must be from 3 mm to 1,000 mm (0.12 in to 39 in)'
+		});
+	if (lengthToMeters(airlift.submergence, airlift.submergenceUnit) < MIN_SUBMERGENCE_M)
+		ctx.addIssue({
+			code: 'custom',
+			path: ['submergence'],
+			message: 'Submergence must be at least 1 cm (0.4 in): the air must go in below the surface'
+		});
+}
+
+/** The diffuser depth's floor in metres, for the design and for `POST /api/v1/aeration` alike. */
+export function checkDiffuserDepth(
+	aeration: { diffuserDepth: number; diffuserDepthUnit: (typeof DEPTH_UNITS)[number] },
+	ctx: z.RefinementCtx
+) {
+	if (lengthToMeters(aeration.diffuserDepth, aeration.diffuserDepthUnit) < MIN_DIFFUSER_DEPTH_M)
+		ctx.addIssue({
+			code: 'custom',
+			path: ['diffuserDepth'],
+			message: 'Diffuser depth must be at least 5 cm (2 in)'
+		});
+}
 
 /** One kind of air-lift in a design: `count` identical risers, each lifting `waterFlow`. */
 export const airliftSchema = record('Air-lift', {
@@ -20,16 +67,20 @@ export const airliftSchema = record('Air-lift', {
 	waterFlow: amount('Water flow', { above: 0, max: 1_000_000 }),
 	waterFlowUnit: choice('Water flow unit', FLOW_UNITS),
 	efficiencyPercent: amount('Air-lift efficiency', { min: 10, max: 60 }).default(30)
-});
+}).superRefine(checkAirliftLengths);
 
-/** The correction factors between clean-water standard transfer and the tank (Metcalf & Eddy). */
+/**
+ * The correction factors between clean-water standard transfer and the tank (Metcalf & Eddy). The
+ * floors keep the answer finite and still describe water: α about 0.8–1.0 in aquaculture water (0.3–0.5
+ * in raw sewage), β about 0.95–0.99, F 0.9–1.0 for diffusers in service.
+ */
 export const transferFactorsShape = {
 	/** Field ÷ clean-water transfer coefficient; clean aquaculture water about 0.8–1.0. */
-	alpha: amount('Alpha (α)', { above: 0, max: 1.5 }).default(0.9),
+	alpha: amount('Alpha (α)', { min: 0.2, max: 1.5 }).default(0.9),
 	/** Field ÷ clean-water saturation for what salt does not already account for; about 0.95–0.99. */
-	beta: amount('Beta (β)', { above: 0, max: 1.2 }).default(0.98),
+	beta: amount('Beta (β)', { min: 0.5, max: 1.2 }).default(0.98),
 	/** Diffuser fouling, 0.9–1.0. */
-	fouling: amount('Fouling factor', { above: 0, max: 1 }).default(0.9),
+	fouling: amount('Fouling factor', { min: 0.5, max: 1 }).default(0.9),
 	theta: amount('Temperature factor (θ)', { min: 1, max: 1.1 }).default(1.024),
 	/** Mid-depth factor d_e for the saturation at depth, 0.25–0.45; 0 ignores depth. */
 	depthCorrection: amount('Mid-depth factor', { min: 0, max: 1 }).default(0.4)
@@ -41,11 +92,11 @@ export const aerationDesignSchema = record('Aeration', {
 	targetDoMgL: amount('Target dissolved oxygen', { above: 0, max: 20 }).default(5),
 	diffuser: choice('Diffuser', DIFFUSER_KINDS).default('fine'),
 	/** Standard oxygen transfer efficiency per metre of depth; when absent, the diffuser kind's default. */
-	transferPercentPerM: amount('Transfer efficiency per metre', { above: 0, max: 20 }).optional(),
+	transferPercentPerM: amount('Transfer efficiency per metre', { min: 0.5, max: 20 }).optional(),
 	diffuserDepth: amount('Diffuser depth', { above: 0, max: 100 }),
 	diffuserDepthUnit: choice('Diffuser depth unit', DEPTH_UNITS),
 	...transferFactorsShape
-});
+}).superRefine(checkDiffuserDepth);
 
 /** One point of an air pump's curve: the free air it delivers against a gauge pressure. */
 export const pumpPointSchema = record('Curve point', {

@@ -1,16 +1,7 @@
 import { z } from 'zod';
-import { DEPTH_UNITS, RISER_DIAMETER_UNITS } from './air-design.schema';
+import { checkAirliftLengths, DEPTH_UNITS, RISER_DIAMETER_UNITS } from './air-design.schema';
 import { amount, choice, record } from './fields';
-import { FLOW_UNITS, lengthToMeters } from './units';
-
-/**
- * What the air-lift models can answer, in metres, whatever unit was typed: risers narrower than a few
- * millimetres are ruled by surface tension, which neither Nicklin's efficiency nor Stenning & Martin's
- * momentum balance includes (Reinemann et al. 1990 studied such small tubes apart), and an injection a
- * hair's breadth under the surface pushes no air (ln(p_in/p_a) → 0).
- */
-const RISER_M = { min: 0.003, max: 1 };
-const MIN_SUBMERGENCE_M = 0.01;
+import { FLOW_UNITS } from './units';
 
 /**
  * The body of `POST /api/v1/airlift`: one riser, each length and flow with its own unit, and exactly
@@ -36,19 +27,7 @@ export const airliftRequestSchema = record('Request', {
 	airFlowUnit: choice('Air flow unit', FLOW_UNITS).optional(),
 	efficiencyPercent: amount('Air-lift efficiency', { min: 10, max: 60 }).default(30)
 }).superRefine((request, ctx) => {
-	const riserM = lengthToMeters(request.riserInnerDiameter, request.riserInnerDiameterUnit);
-	if (riserM < RISER_M.min || riserM > RISER_M.max)
-		ctx.addIssue({
-			code: 'custom',
-			path: ['riserInnerDiameter'],
-			message: 'Riser inner diameter must be from 3 mm to 1,000 mm (0.12 in to 39 in)'
-		});
-	if (lengthToMeters(request.submergence, request.submergenceUnit) < MIN_SUBMERGENCE_M)
-		ctx.addIssue({
-			code: 'custom',
-			path: ['submergence'],
-			message: 'Submergence must be at least 1 cm (0.4 in): the air must go in below the surface'
-		});
+	checkAirliftLengths(request, ctx);
 	const water = request.waterFlow !== undefined;
 	const air = request.airFlow !== undefined;
 	// One message whichever way the pair is wrong: the person fixes one thing.

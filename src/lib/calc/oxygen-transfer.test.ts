@@ -90,6 +90,13 @@ describe('aeration for a demand', () => {
 		}
 	});
 
+	it('warns when the target is close to what the water can hold', () => {
+		// At 26 °C fresh water holds 8.11 mg/L (Benson & Krause); 7.5 mg/L leaves a ratio under 0.1 (derived).
+		const result = aeration({ ...fishTank, targetDoMgL: 7.5 });
+		expect(result.fieldToStandardRatio).toBeLessThan(0.1);
+		expect(result.warnings.map((w) => w.code)).toEqual(['near-saturation']);
+	});
+
 	it('says so when the target is above what the water can hold', () => {
 		const result = aeration({ ...fishTank, targetDoMgL: 12 });
 		expect(result.warnings.map((w) => w.code)).toEqual(['target-above-saturation']);
