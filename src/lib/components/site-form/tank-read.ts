@@ -1,0 +1,102 @@
+// Reads the site form's water (as typed) into the core's siteWaterSchema: volumes to litres, depths to
+// metres, twelve monthly temperatures or one, and every message keyed by the box it belongs to.
+import { MONTH_NAMES, siteWaterSchema, type SiteWater } from '$lib/calc';
+import { type NumberDraft, numberDraft } from '$lib/components/fields/number-text';
+import type { TankDraft, WaterDraft } from './tank-form';
+import { newTankId } from './tank-form';
+import {
+	litersFrom,
+	metersFrom,
+	TANK_DEPTH_UNITS,
+	type TankDepthUnit,
+	VOLUME_UNITS,
+	type VolumeUnit
+} from './tank-units';
+
+const TANK_ID = /^[A-Za-z0-9_-]{1,40}$/;
+
+/** A typed number in a unit, converted; text that is not a number goes on for the schema to name. */
+function converted<U extends string>(
+	text: string,
+	unit: string,
+	units: readonly U[],
+	to: (n: number, u: U) => number
+) {
+	const draft = numberDraft(text);
+	return typeof draft === 'number' && (units as readonly string[]).includes(unit)
+		? to(draft, unit as U)
+		: draft;
+}
+
+/**
+ * The one temperature stored beside twelve monthly ones: their mean, held within the schema's bounds
+ * so a bad month is named at its own box and not again at the (hidden) single box.
+ */
+function yearTemperature(months: NumberDraft[]): number {
+	const numbers = months.filter((m): m is number => typeof m === 'number');
+	const mean = numbers.length ? numbers.reduce((a, b) => a + b, 0) / numbers.length : 20;
+	return Math.min(40, Math.max(0, mean));
+}
+
+/** A tank row as the schema's input; an id the form did not make (missing, malformed, repeated) is made anew. */
+function tankInput(tank: TankDraft, seen: Set<string>) {
+	const id = TANK_ID.test(tank.id) && !seen.has(tank.id) ? tank.id : newTankId();
+	seen.add(id);
+	const months = tank.monthlyTemperatureC.map(numberDraft);
+	const optional = (text: string) => numberDraft(text);
+	return {
+		id,
+		name: tank.name,
+		volumeLiters: converted<VolumeUnit>(tank.volume, tank.volumeUnit, VOLUME_UNITS, litersFrom),
+		depthM: converted<TankDepthUnit>(tank.depth, tank.depthUnit, TANK_DEPTH_UNITS, metersFrom),
+		water: tank.water,
+		salinityGPerKg: optional(tank.salinityGPerKg),
+		temperatureC: tank.byMonth ? yearTemperature(months) : numberDraft(tank.temperatureC),
+		monthlyTemperatureC: tank.byMonth ? months : null,
+		fishKg: optional(tank.fishKg),
+		feedKgPerDay: optional(tank.feedKgPerDay),
+		proteinPercent: optional(tank.proteinPercent)
+	};
+}
+
+/** The form's box for a schema path: `tanks.0.volumeLiters` is typed in `tanks.0.volume`. */
+const BOX: Record<string, string> = { volumeLiters: 'volume', depthM: 'depth' };
+
+/** Where a problem shows: at its box, or above the form for one about the whole list. */
+function boxOf(path: PropertyKey[]): string {
+	const [first, index, field, month] = path.map(String);
+	if (first !== 'tanks') return first ?? 'form';
+	if (index === undefined || field === undefined) return 'form';
+	return [first, index, BOX[field] ?? field, ...(month === undefined ? [] : [month])].join('.');
+}
+
+/** "Monthly water temperature must be…" said of the month it is: "March water temperature must be…". */
+function worded(path: PropertyKey[], message: string): string {
+	const month = path[2] === 'monthlyTemperatureC' ? MONTH_NAMES[Number(path[3])] : undefined;
+	return month ? message.replace('Monthly water temperature', `${month} water temperature`) : message;
+}
+
+/**
+ * The site's water from the form, in litres, metres and °C; or the messages by box name
+ * ("tanks.0.volume": "Volume must be more than 0"), one a box.
+ */
+export function readWaterDraft(
+	draft: WaterDraft
+): { ok: true; water: SiteWater } | { ok: false; errors: Record<string, string> } {
+	const errors: Record<string, string> = {};
+	draft.tanks.forEach((tank, i) => {
+		if (!(VOLUME_UNITS as readonly string[]).includes(tank.volumeUnit))
+			errors[`tanks.${i}.volumeUnit`] = 'Pick the volume’s unit: litres, US gallons or m³';
+		if (!(TANK_DEPTH_UNITS as readonly string[]).includes(tank.depthUnit))
+			errors[`tanks.${i}.depthUnit`] = 'Pick the depth’s unit: metres or feet';
+	});
+	const seen = new Set<string>();
+	const parsed = siteWaterSchema.safeParse({
+		altitudeM: numberDraft(draft.altitudeM),
+		tanks: draft.tanks.map((tank) => tankInput(tank, seen))
+	});
+	if (!parsed.success)
+		for (const issue of parsed.error.issues) errors[boxOf(issue.path)] ??= worded(issue.path, issue.message);
+	if (!parsed.success || Object.keys(errors).length) return { ok: false, errors };
+	return { ok: true, water: parsed.data };
+}
