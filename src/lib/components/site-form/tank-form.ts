@@ -7,6 +7,8 @@ import { numberText } from '$lib/components/fields/number-text';
 
 /** One tank or pond as typed. Numbers stay text; the units say what the volume and depth are in. */
 export type TankDraft = {
+	/** The row's number in the post ("tanks.3.…"), so a message goes back to the row it came from. */
+	row?: number;
 	id: string;
 	name: string;
 	volume: string;
@@ -100,7 +102,7 @@ const TEXT_FIELDS = [
 ] as const;
 
 /** Whether a row holds nothing a person typed (a row added and left blank is dropped, not refused). */
-function isBlank(tank: TankDraft): boolean {
+export function isBlank(tank: TankDraft): boolean {
 	const boxes = [tank.name, tank.volume, tank.depth, tank.temperatureC, tank.fishKg, tank.feedKgPerDay];
 	return (
 		boxes.every((text) => !text.trim()) && (!tank.byMonth || tank.monthlyTemperatureC.every((t) => !t.trim()))
@@ -108,8 +110,9 @@ function isBlank(tank: TankDraft): boolean {
 }
 
 /**
- * The water a form posted, as typed: the altitude box and the tank rows in the order of their numbers
- * (a gap in the numbers, left by a removed row, closes up). Fields the form does not have are ignored.
+ * The water a form posted, as typed: the altitude box and the tank rows in the order of their numbers,
+ * each knowing its number. Blank rows stay (the reader drops them), so the rows shown again after a
+ * refusal are the rows posted. Fields the form does not have are ignored.
  */
 export function waterDraftFrom(values: Iterable<[string, unknown]>): WaterDraft {
 	const rows = new Map<number, TankDraft>();
@@ -120,7 +123,7 @@ export function waterDraftFrom(values: Iterable<[string, unknown]>): WaterDraft 
 		const match = ROW.exec(key);
 		if (!match) continue;
 		const index = Number(match[1]);
-		const tank = rows.get(index) ?? { ...blankTank(''), proteinPercent: '' };
+		const tank = rows.get(index) ?? { ...blankTank(''), row: index, proteinPercent: '' };
 		const field = match[2]!;
 		if (field === 'monthlyTemperatureC' && match[3] !== undefined) {
 			if (Number(match[3]) < 12) tank.monthlyTemperatureC[Number(match[3])] = value;
@@ -130,9 +133,6 @@ export function waterDraftFrom(values: Iterable<[string, unknown]>): WaterDraft 
 			tank[field as (typeof TEXT_FIELDS)[number]] = value;
 		rows.set(index, tank);
 	}
-	const tanks = [...rows.entries()]
-		.sort(([a], [b]) => a - b)
-		.map(([, tank]) => tank)
-		.filter((tank) => !isBlank(tank));
+	const tanks = [...rows.entries()].sort(([a], [b]) => a - b).map(([, tank]) => tank);
 	return { altitudeM, tanks };
 }

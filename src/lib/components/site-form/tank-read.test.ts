@@ -189,3 +189,19 @@ describe('a stored site’s water in the form', () => {
 		expect(readWaterDraft(waterDraftFrom([]))).toEqual({ ok: true, water: EMPTY_SITE_WATER });
 	});
 });
+
+describe('a refusal after a blank row', () => {
+	it('names the row as it was posted, so the message lands on the row the person sees', () => {
+		const fields = {
+			'tanks.0.id': 'blankrow',
+			'tanks.0.water': 'fresh',
+			'tanks.0.proteinPercent': '35',
+			...Object.fromEntries(Object.entries(growOut).map(([k, v]) => [k.replace('.0.', '.1.'), v])),
+			'tanks.1.volume': '-5'
+		};
+		expect(readWaterDraft(waterDraftFrom(post(fields)))).toEqual({
+			ok: false,
+			errors: { 'tanks.1.volume': 'Volume must be more than 0' }
+		});
+	});
+});

@@ -2,8 +2,7 @@
 // metres, twelve monthly temperatures or one, and every message keyed by the box it belongs to.
 import { MONTH_NAMES, siteWaterSchema, type SiteWater } from '$lib/calc';
 import { type NumberDraft, numberDraft } from '$lib/components/fields/number-text';
-import type { TankDraft, WaterDraft } from './tank-form';
-import { newTankId } from './tank-form';
+import { isBlank, newTankId, type TankDraft, type WaterDraft } from './tank-form';
 import {
 	litersFrom,
 	metersFrom,
@@ -62,12 +61,16 @@ function tankInput(tank: TankDraft, seen: Set<string>) {
 /** The form's box for a schema path: `tanks.0.volumeLiters` is typed in `tanks.0.volume`. */
 const BOX: Record<string, string> = { volumeLiters: 'volume', depthM: 'depth' };
 
-/** Where a problem shows: at its box, or above the form for one about the whole list. */
-function boxOf(path: PropertyKey[]): string {
+/**
+ * Where a problem shows: at its box, or above the form for one about the whole list. `rows` are the
+ * posted row numbers of the tanks checked (blank rows were left out), by their place in the list.
+ */
+function boxOf(path: PropertyKey[], rows: number[]): string {
 	const [first, index, field, month] = path.map(String);
 	if (first !== 'tanks') return first ?? 'form';
 	if (index === undefined || field === undefined) return 'form';
-	return [first, index, BOX[field] ?? field, ...(month === undefined ? [] : [month])].join('.');
+	const row = rows[Number(index)] ?? index;
+	return ['tanks', row, BOX[field] ?? field, ...(month === undefined ? [] : [month])].join('.');
 }
 
 /** "Monthly water temperature must be…" said of the month it is: "March water temperature must be…". */
@@ -84,19 +87,22 @@ export function readWaterDraft(
 	draft: WaterDraft
 ): { ok: true; water: SiteWater } | { ok: false; errors: Record<string, string> } {
 	const errors: Record<string, string> = {};
-	draft.tanks.forEach((tank, i) => {
+	const tanks = draft.tanks.filter((tank) => !isBlank(tank));
+	const rows = tanks.map((tank, i) => tank.row ?? i);
+	tanks.forEach((tank, i) => {
 		if (!(VOLUME_UNITS as readonly string[]).includes(tank.volumeUnit))
-			errors[`tanks.${i}.volumeUnit`] = 'Pick the volume’s unit: litres, US gallons or m³';
+			errors[`tanks.${rows[i]}.volumeUnit`] = 'Pick the volume’s unit: litres, US gallons or m³';
 		if (!(TANK_DEPTH_UNITS as readonly string[]).includes(tank.depthUnit))
-			errors[`tanks.${i}.depthUnit`] = 'Pick the depth’s unit: metres or feet';
+			errors[`tanks.${rows[i]}.depthUnit`] = 'Pick the depth’s unit: metres or feet';
 	});
 	const seen = new Set<string>();
 	const parsed = siteWaterSchema.safeParse({
 		altitudeM: numberDraft(draft.altitudeM),
-		tanks: draft.tanks.map((tank) => tankInput(tank, seen))
+		tanks: tanks.map((tank) => tankInput(tank, seen))
 	});
 	if (!parsed.success)
-		for (const issue of parsed.error.issues) errors[boxOf(issue.path)] ??= worded(issue.path, issue.message);
+		for (const issue of parsed.error.issues)
+			errors[boxOf(issue.path, rows)] ??= worded(issue.path, issue.message);
 	if (!parsed.success || Object.keys(errors).length) return { ok: false, errors };
 	return { ok: true, water: parsed.data };
 }
