@@ -4,6 +4,7 @@ import { MONTH_NAMES, siteWaterSchema, type SiteWater } from '$lib/calc';
 import { type NumberDraft, numberDraft } from '$lib/components/fields/number-text';
 import { isBlank, newTankId, type TankDraft, type WaterDraft } from './tank-form';
 import {
+	isUnit,
 	litersFrom,
 	metersFrom,
 	TANK_DEPTH_UNITS,
@@ -90,9 +91,9 @@ export function readWaterDraft(
 	const tanks = draft.tanks.filter((tank) => !isBlank(tank));
 	const rows = tanks.map((tank, i) => tank.row ?? i);
 	tanks.forEach((tank, i) => {
-		if (!(VOLUME_UNITS as readonly string[]).includes(tank.volumeUnit))
+		if (!isUnit(VOLUME_UNITS, tank.volumeUnit))
 			errors[`tanks.${rows[i]}.volumeUnit`] = 'Pick the volume’s unit: litres, US gallons or m³';
-		if (!(TANK_DEPTH_UNITS as readonly string[]).includes(tank.depthUnit))
+		if (!isUnit(TANK_DEPTH_UNITS, tank.depthUnit))
 			errors[`tanks.${rows[i]}.depthUnit`] = 'Pick the depth’s unit: metres or feet';
 	});
 	const seen = new Set<string>();

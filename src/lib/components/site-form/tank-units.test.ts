@@ -22,7 +22,7 @@ describe('the units a tank is typed in', () => {
 		[1, 'L', 1, 'definition'],
 		[100, 'gal', 378.5411784, 'NIST SP 811: 1 gal (US) = 3.785 411 784 L'],
 		[2.5, 'm3', 2500, 'SI: 1 m³ = 1000 L']
-	] as const)('reads %d %s as %d L (%s)', (volume, unit, liters) => {
+	] as const)('reads %d %s as %d L (%s)', (volume, unit, liters, _source) => {
 		expect(litersFrom(volume, unit)).toBeCloseTo(liters, 9);
 	});
 

@@ -38,6 +38,10 @@ export const usGallonsFrom = (liters: number): number => liters / LITERS_PER_US_
 /** Metres as feet. */
 export const feetFrom = (meters: number): number => meters / METERS_PER_FOOT;
 
+/** Whether `unit` is one of `units` (a posted unit may be anything). */
+export const isUnit = <U extends string>(units: readonly U[], unit: string): unit is U =>
+	(units as readonly string[]).includes(unit);
+
 /** The number a box's text stands for, or null while it is empty or not a number. */
 function typed(text: string): number | null {
 	const draft = numberDraft(text);
@@ -45,17 +49,17 @@ function typed(text: string): number | null {
 }
 
 /** Beside the volume: the other unit ("= 264.2 US gal" for litres, "= 3,785.4 L" for gallons). */
-export function volumeEcho(text: string, unit: VolumeUnit): string | undefined {
+export function volumeEcho(text: string, unit: string): string | undefined {
 	const volume = typed(text);
-	if (volume === null) return undefined;
+	if (volume === null || !isUnit(VOLUME_UNITS, unit)) return undefined;
 	const liters = litersFrom(volume, unit);
 	return unit === 'L' ? `= ${figure(usGallonsFrom(liters), 1)} US gal` : `= ${figure(liters, 1)} L`;
 }
 
 /** Beside the depth: metres as feet, feet as metres. */
-export function depthEcho(text: string, unit: TankDepthUnit): string | undefined {
+export function depthEcho(text: string, unit: string): string | undefined {
 	const depth = typed(text);
-	if (depth === null) return undefined;
+	if (depth === null || !isUnit(TANK_DEPTH_UNITS, unit)) return undefined;
 	return unit === 'm' ? `= ${figure(feetFrom(depth), 2)} ft` : `= ${figure(metersFrom(depth, 'ft'), 2)} m`;
 }
 
