@@ -84,6 +84,8 @@ const siteFields = () => ({
 	'tanks.0.depthUnit': 'm',
 	'tanks.0.water': 'fresh',
 	'tanks.0.salinityGPerKg': '',
+	// Read only while the months are off (a swapped switch): then it is the one temperature.
+	'tanks.0.temperatureC': '18',
 	'tanks.0.byMonth': 'on',
 	...Object.fromEntries(
 		Array.from({ length: 12 }, (_, m) => [`tanks.0.monthlyTemperatureC.${m}`, String(14 + (m % 6))])
