@@ -26,7 +26,7 @@ const water: SiteWater = {
 			volumeLiters: 1000,
 			depthM: 1.2,
 			water: 'fresh',
-			temperatureC: 17,
+			temperatureC: 26,
 			monthlyTemperatureC: [10, 10, 12, 14, 18, 22, 26, 26, 22, 18, 14, 12],
 			fishKg: 40,
 			feedKgPerDay: 0.8,

@@ -62,7 +62,7 @@ describe('reading the water of a site form', () => {
 		expect(read.water.tanks[0]!.depthM).toBeCloseTo(1.2192, 12);
 	});
 
-	it('keeps twelve monthly temperatures, with their mean as the year’s one (derived: mean of the twelve)', () => {
+	it('keeps twelve monthly temperatures, with the warmest as the one the designer uses (warm water holds the least oxygen)', () => {
 		const months = [10, 10, 12, 14, 18, 22, 26, 26, 22, 18, 14, 12];
 		const fields: Record<string, string> = {
 			...growOut,
@@ -73,7 +73,7 @@ describe('reading the water of a site form', () => {
 		const read = readWaterDraft(waterDraftFrom(post(fields)));
 		if (!read.ok) throw new Error(JSON.stringify(read.errors));
 		expect(read.water.tanks[0]!.monthlyTemperatureC).toEqual(months);
-		expect(read.water.tanks[0]!.temperatureC).toBeCloseTo(17, 12);
+		expect(read.water.tanks[0]!.temperatureC).toBe(26);
 	});
 
 	it('fills what the schema defaults: no altitude is sea level, no fish or feed is zero, protein 35 %', () => {
@@ -170,7 +170,7 @@ describe('a stored site’s water in the form', () => {
 			depthM: 1.2192,
 			water: 'sea',
 			salinityGPerKg: 32,
-			temperatureC: 17,
+			temperatureC: 26,
 			monthlyTemperatureC: [10, 10, 12, 14, 18, 22, 26, 26, 22, 18, 14, 12],
 			fishKg: 0,
 			feedKgPerDay: 0,

@@ -29,13 +29,14 @@ function converted<U extends string>(
 }
 
 /**
- * The one temperature stored beside twelve monthly ones: their mean, held within the schema's bounds
- * so a bad month is named at its own box and not again at the (hidden) single box.
+ * The one temperature stored beside twelve monthly ones: the warmest month's, since warm water holds
+ * the least oxygen and the designer sizes the air for it when no month is named (`designConditions`).
+ * Held within the schema's bounds, so a bad month is named at its own box and not again at the
+ * (hidden) single box.
  */
 function yearTemperature(months: NumberDraft[]): number {
 	const numbers = months.filter((m): m is number => typeof m === 'number');
-	const mean = numbers.length ? numbers.reduce((a, b) => a + b, 0) / numbers.length : 20;
-	return Math.min(40, Math.max(0, mean));
+	return Math.min(40, Math.max(0, numbers.length ? Math.max(...numbers) : 20));
 }
 
 /** A tank row as the schema's input; an id the form did not make (missing, malformed, repeated) is made anew. */
@@ -43,19 +44,18 @@ function tankInput(tank: TankDraft, seen: Set<string>) {
 	const id = TANK_ID.test(tank.id) && !seen.has(tank.id) ? tank.id : newTankId();
 	seen.add(id);
 	const months = tank.monthlyTemperatureC.map(numberDraft);
-	const optional = (text: string) => numberDraft(text);
 	return {
 		id,
 		name: tank.name,
 		volumeLiters: converted<VolumeUnit>(tank.volume, tank.volumeUnit, VOLUME_UNITS, litersFrom),
 		depthM: converted<TankDepthUnit>(tank.depth, tank.depthUnit, TANK_DEPTH_UNITS, metersFrom),
 		water: tank.water,
-		salinityGPerKg: optional(tank.salinityGPerKg),
+		salinityGPerKg: numberDraft(tank.salinityGPerKg),
 		temperatureC: tank.byMonth ? yearTemperature(months) : numberDraft(tank.temperatureC),
 		monthlyTemperatureC: tank.byMonth ? months : null,
-		fishKg: optional(tank.fishKg),
-		feedKgPerDay: optional(tank.feedKgPerDay),
-		proteinPercent: optional(tank.proteinPercent)
+		fishKg: numberDraft(tank.fishKg),
+		feedKgPerDay: numberDraft(tank.feedKgPerDay),
+		proteinPercent: numberDraft(tank.proteinPercent)
 	};
 }
 
