@@ -87,7 +87,26 @@ const siteFields = () => ({
 	tariffId: made.tariff,
 	tariffVersion: '1',
 	currency: 'USD',
-	notes: ''
+	notes: '',
+	// The site's water: one tank whose temperature varies by month (invented).
+	altitudeM: '250',
+	'tanks.0.id': 'fuzztank1',
+	'tanks.0.name': 'Fuzz grow-out (invented)',
+	'tanks.0.volume': '1000',
+	'tanks.0.volumeUnit': 'L',
+	'tanks.0.depth': '1.2',
+	'tanks.0.depthUnit': 'm',
+	'tanks.0.water': 'fresh',
+	'tanks.0.salinityGPerKg': '',
+	// Read only while the months are off (a swapped switch): then it is the one temperature.
+	'tanks.0.temperatureC': '18',
+	'tanks.0.byMonth': 'on',
+	...Object.fromEntries(
+		Array.from({ length: 12 }, (_, m) => [`tanks.0.monthlyTemperatureC.${m}`, String(14 + (m % 6))])
+	),
+	'tanks.0.fishKg': '40',
+	'tanks.0.feedKgPerDay': '0.8',
+	'tanks.0.proteinPercent': '40'
 });
 
 // In the order they run: the scenario import before the scenario can be deleted, a bill's update before

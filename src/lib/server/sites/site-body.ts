@@ -1,6 +1,6 @@
 // The machine API's site bodies: the site form's schema with the server's checks.
 import { z } from 'zod';
-import { holidaysSchema, timezoneSchema } from '$lib/calc';
+import { holidaysSchema, siteWaterSchema, timezoneSchema } from '$lib/calc';
 import { siteSchema } from '$lib/forms/site.schema';
 import { MAX_REVISION } from '$lib/forms/storable';
 
@@ -14,13 +14,19 @@ function checkHolidays(s: { country: string; region?: string | null }, ctx: z.Re
 		});
 }
 
+/** The site's water (altitude, tanks and ponds), optional on POST and PUT: see `SiteFields`. */
+const water = siteWaterSchema.optional();
+
 /** POST /api/v1/sites: the site form's fields, a real time zone and a known holiday calendar. */
-export const siteCreateSchema = siteSchema.extend({ timezone: timezoneSchema }).superRefine(checkHolidays);
+export const siteCreateSchema = siteSchema
+	.extend({ timezone: timezoneSchema, water })
+	.superRefine(checkHolidays);
 
 /** PUT /api/v1/sites/:id: as POST, plus the revision edited. */
 export const siteUpdateSchema = siteSchema
 	.extend({
 		timezone: timezoneSchema,
+		water,
 		expectedRevision: z
 			.number({ error: 'Send the revision you edited (expectedRevision)' })
 			.int()

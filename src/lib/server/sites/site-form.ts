@@ -1,23 +1,34 @@
 import { fail, type RequestEvent } from '@sveltejs/kit';
 import { holidaysSchema, timezoneSchema } from '$lib/calc';
-import { siteSchema, type SiteInput } from '$lib/forms/site.schema';
+import { siteSchema } from '$lib/forms/site.schema';
 import { fieldErrors, keepValues } from '$lib/forms/errors';
 import { revisionOf } from '$lib/forms/storable';
+import { waterDraftFrom } from '$lib/components/site-form/tank-form';
+import { readWaterDraft } from '$lib/components/site-form/tank-read';
 import { tariffChoiceProblem, type TariffChooser } from '../tariffs/usable';
+import type { SiteFields } from './site.service';
 
 export { tariffChoices } from '../tariffs/usable';
 
-/** Validates a site form: the shared schema, then what needs the server's data (time zone, holiday region, tariff). */
+/**
+ * Validates a site form: the shared schema, the water (altitude and tank rows, `tank-read.ts`), then
+ * what needs the server's data (time zone, holiday region, tariff). A form that has the altitude box
+ * sends the whole water (no tank rows: no tanks); a post without it (an older page) leaves it as stored.
+ */
 export async function readSiteForm(
 	event: RequestEvent,
 	chooser: TariffChooser
 ): Promise<
-	{ ok: true; input: SiteInput; revision: number } | { ok: false; failure: ReturnType<typeof fail> }
+	{ ok: true; input: SiteFields; revision: number } | { ok: false; failure: ReturnType<typeof fail> }
 > {
 	const form = await event.request.formData();
 	const values = keepValues(form, []);
 	const parsed = siteSchema.safeParse(Object.fromEntries(form));
-	const errors = parsed.success ? {} : fieldErrors(parsed.error);
+	const water = form.has('altitudeM') ? readWaterDraft(waterDraftFrom(form)) : null;
+	const errors = {
+		...(parsed.success ? {} : fieldErrors(parsed.error)),
+		...(water?.ok === false ? water.errors : {})
+	};
 	if (!timezoneSchema.safeParse(values.timezone).success)
 		errors.timezone ??= 'Time zone must be an IANA name such as America/Chicago';
 	if (parsed.success) {
@@ -32,7 +43,11 @@ export async function readSiteForm(
 		const tariff = await tariffChoiceProblem(chooser, parsed.data);
 		if (tariff) errors[tariff.field] ??= tariff.message;
 	}
-	if (!parsed.success || Object.keys(errors).length)
+	if (!parsed.success || water?.ok === false || Object.keys(errors).length)
 		return { ok: false, failure: fail(400, { values, errors }) };
-	return { ok: true, input: parsed.data, revision: revisionOf(values.revision ?? 0) };
+	return {
+		ok: true,
+		input: { ...parsed.data, ...(water?.ok ? { water: water.water } : {}) },
+		revision: revisionOf(values.revision ?? 0)
+	};
 }

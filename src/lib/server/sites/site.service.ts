@@ -3,13 +3,21 @@ import { and, asc, eq, inArray, isNull, or } from 'drizzle-orm';
 import type { SiteInput } from '$lib/forms/site.schema';
 import { db } from '../db';
 import { scenarios, sites, workspaces } from '../db/schema';
-import type { RequestIssue } from '$lib/calc';
+import type { RequestIssue, SiteWater } from '$lib/calc';
 import { audit, changedFields, type Actor } from '../workspaces/audit';
 import { chooserFor } from '../tariffs/usable';
 import { tariffChoiceIssue } from './tariff-choice';
+import { waterChangeWords } from './water-change-words';
 
 /** A site as stored. */
 export type SiteRow = typeof sites.$inferSelect;
+
+/**
+ * A site's fields as the form and the API give them. `water` (altitude and tanks) is optional: left
+ * out, a new site starts with none and an edited one keeps what it has, so a caller that does not know
+ * about tanks never erases them.
+ */
+export type SiteFields = SiteInput & { water?: SiteWater };
 
 /** A write based on a stale copy: someone else saved first. */
 export class StaleWrite extends Error {
@@ -43,7 +51,7 @@ export async function siteWorkspace(site: SiteRow) {
 }
 
 /** A new site starts with an empty baseline scenario, so there is always one to compare against. */
-export async function createSite(workspaceId: string, input: SiteInput, actor: Actor): Promise<string> {
+export async function createSite(workspaceId: string, input: SiteFields, actor: Actor): Promise<string> {
 	return db.transaction(async (tx) => {
 		const [site] = await tx
 			.insert(sites)
@@ -73,23 +81,31 @@ export async function createSite(workspaceId: string, input: SiteInput, actor: A
 	});
 }
 
-/** Saves a site's fields if nobody saved since `expectedRevision`; the trail records what changed. */
-export async function updateSite(site: SiteRow, expectedRevision: number, input: SiteInput, actor: Actor) {
+/**
+ * Saves a site's fields if nobody saved since `expectedRevision`; the trail records what changed, the
+ * water in words (each tank added, removed or changed). Without `water` the stored one stays.
+ */
+export async function updateSite(site: SiteRow, expectedRevision: number, input: SiteFields, actor: Actor) {
+	const { water, ...fields } = input;
 	await db.transaction(async (tx) => {
 		const [row] = await tx
 			.update(sites)
-			.set({ ...input, revision: site.revision + 1, updatedAt: new Date() })
+			.set({ ...fields, ...(water ? { water } : {}), revision: site.revision + 1, updatedAt: new Date() })
 			.where(and(eq(sites.id, site.id), eq(sites.revision, expectedRevision)))
 			.returning({ id: sites.id });
 		if (!row) throw new StaleWrite(site.revision);
-		const changes = changedFields(site as unknown as Record<string, unknown>, input);
+		const changes = changedFields(site as unknown as Record<string, unknown>, fields);
+		const waterWords = water ? waterChangeWords(site.water, water) : [];
+		if (waterWords.length) changes.water = { from: site.water, to: water };
+		const named = Object.keys(changes).filter((key) => key !== 'water');
+		const summary = [...(named.length ? [`Changed ${named.join(', ')}`] : []), ...waterWords];
 		await audit(tx, actor, {
 			workspaceId: site.workspaceId,
 			siteId: site.id,
 			entity: 'site',
 			entityId: site.id,
 			action: 'updated',
-			summary: `Changed ${Object.keys(changes).join(', ') || 'nothing'}`,
+			summary: summary.join('; ') || 'Changed nothing',
 			changes
 		});
 	});
@@ -142,7 +158,7 @@ export async function tariffUsage(tariffId: string, workspaceIds: string[]) {
 export async function changeSite(
 	access: { site: SiteRow; user: Actor; viaGrant: boolean },
 	expectedRevision: number,
-	input: SiteInput
+	input: SiteFields
 ): Promise<
 	{ ok: true; revision: number } | { ok: false; issues: RequestIssue[] } | { ok: false; conflict: number }
 > {

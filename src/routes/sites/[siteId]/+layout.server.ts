@@ -21,6 +21,7 @@ export const load = (async (event) => {
 			tariffVersion: site.tariffVersion,
 			currency: site.currency,
 			notes: site.notes,
+			water: site.water,
 			revision: site.revision
 		},
 		siteRole: role,

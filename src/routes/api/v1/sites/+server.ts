@@ -22,7 +22,10 @@ export const GET: RequestHandler = async (event) => {
 	);
 };
 
-/** POST /api/v1/sites `{ workspaceId, …site }` — creates the site with an empty baseline scenario. */
+/**
+ * POST /api/v1/sites `{ workspaceId, …site, water? }` — creates the site with an empty baseline scenario;
+ * without `water`, the site starts at sea level with no tanks.
+ */
 export const POST: RequestHandler = async (event) => {
 	const read = await readJsonBody(event);
 	if (!read.ok) return read.response;

@@ -7,15 +7,17 @@ import { siteUpdateSchema, withoutNulls } from '$lib/server/sites/site-body';
 import { invalid, methodNotAllowed, PRIVATE, refusal } from '$lib/server/http/answers';
 import type { RequestHandler } from './$types';
 
-/** GET /api/v1/sites/:id — the site, with the revision to send back when updating it. */
+/** GET /api/v1/sites/:id — the site with its water (altitude, tanks), and the revision to send back when updating it. */
 export const GET: RequestHandler = async (event) => {
 	const { site } = await requireSiteAccess(event, event.params.siteId, 'viewer');
 	return json(site, { headers: PRIVATE });
 };
 
 /**
- * PUT /api/v1/sites/:id `{ expectedRevision, …site }` — replaces the site's fields (a field left out is
- * cleared, as in the form). A stale `expectedRevision` gets 409 and nothing is written.
+ * PUT /api/v1/sites/:id `{ expectedRevision, …site, water? }` — replaces the site's fields (a field left
+ * out is cleared, as in the form), except `water`: sent, it replaces the altitude and every tank (this and
+ * POST are how a site's water from an export comes back in); left out or null, the stored water stays.
+ * A stale `expectedRevision` gets 409 and nothing is written.
  */
 export const PUT: RequestHandler = async (event) => {
 	const access = await requireSiteAccess(event, event.params.siteId, 'editor');
