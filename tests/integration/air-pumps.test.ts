@@ -3,6 +3,7 @@ import { client, db } from '$lib/server/db';
 import { memberships } from '$lib/server/db/schema';
 import { createWorkspace } from '$lib/server/workspaces/workspace.service';
 import { listAirPumps } from '$lib/server/workspaces/air-pumps';
+import { exportWorkspace } from '$lib/server/workspaces/export';
 import * as listRoute from '../../src/routes/api/v1/workspaces/[workspaceId]/air-pumps/+server';
 import * as pumpRoute from '../../src/routes/api/v1/workspaces/[workspaceId]/air-pumps/[pumpId]/+server';
 import { actions } from '../../src/routes/w/[workspaceId]/air-pumps/+page.server';
@@ -93,6 +94,8 @@ describe("a workspace's air pumps through the API", () => {
 		const listed = await call(listRoute.GET, apiEvent('viewer', 'GET', { workspaceId: wsA }));
 		expect(listed.status).toBe(200);
 		expect(listed.body.airPumps).toEqual([{ id: pumpId, ...SIXTY_CLASS, wireToAirPercent: 25 }]);
+		// The workspace's export carries its pumps with everything else it holds.
+		expect((await exportWorkspace(wsA))?.airPumps.map((p) => p.pump.name)).toEqual([SIXTY_CLASS.name]);
 
 		const changed = {
 			...SIXTY_CLASS,

@@ -13,6 +13,7 @@ import {
 	workspaces
 } from '../db/schema';
 import { listMembers } from './membership';
+import { listAirPumps } from './air-pumps';
 
 export const EXPORT_FORMAT = 'runrate-workspace-export';
 export const EXPORT_VERSION = 1;
@@ -134,7 +135,7 @@ async function exportPrivateTariffs(workspaceId: string) {
 /**
  * Everything a workspace holds, as one JSON-ready object: members (name, e-mail, role — never password
  * hashes or tokens), sites with their scenarios, equipment, bills and a usage summary, private tariffs
- * with every version, and the audit trail.
+ * with every version, the air pumps entered from data sheets, and the audit trail.
  */
 export async function exportWorkspace(workspaceId: string, now = new Date()) {
 	const [workspace] = await db
@@ -157,6 +158,7 @@ export async function exportWorkspace(workspaceId: string, now = new Date()) {
 		members,
 		sites: await exportSites(workspaceId),
 		privateTariffs: await exportPrivateTariffs(workspaceId),
+		airPumps: await listAirPumps(workspaceId),
 		auditEvents: audit
 	};
 }
