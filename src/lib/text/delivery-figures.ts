@@ -83,3 +83,14 @@ export function deliveryCells(d: Delivery) {
 				: `${oxygenText(fails.oxygenSuppliedGramsPerHour)}${fails.oxygenUnit ? ` without one “${fails.oxygenUnit}”` : ''}`
 	} satisfies Record<DeliveryLabel, string>;
 }
+
+/** A delivery with nothing known (no flows given, no design, no tanks): for fixtures and old reports. */
+export const DELIVERY_NOT_KNOWN: Delivery = {
+	waterLpm: null,
+	turnoversPerHour: null,
+	oxygenSuppliedGramsPerHour: null,
+	oxygenDemandGramsPerHour: null,
+	targetDoMgL: null,
+	mainsDevicesInWater: 0,
+	ifLargestFails: { waterLpm: null, waterUnit: null, oxygenSuppliedGramsPerHour: null, oxygenUnit: null }
+};

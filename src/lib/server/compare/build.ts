@@ -16,6 +16,7 @@ import { requireScenarioAccess } from '$lib/server/guard';
 import { equipmentOf, tariffFor } from '$lib/server/sites/results.service';
 import { TARIFF_UNAVAILABLE, usableTariff } from '$lib/server/tariffs/usable';
 import { listDevices } from '$lib/server/sites/equipment.service';
+import { deliveryOf } from '$lib/server/sites/delivery';
 import type { ScenarioRow } from '$lib/server/sites/scenario.service';
 import type { SiteRow } from '$lib/server/sites/site.service';
 import { assumptionsOf } from './assumptions';
@@ -170,7 +171,9 @@ export async function buildComparison(event: RequestEvent, query: ComparisonQuer
 		deviceCount: l.specs.length,
 		kwhByCategory: kwhByCategory(l.specs, result.scenarios[i]?.periods ?? []),
 		redundancy: redundancy(parsed.data.scenarios[i]?.equipment ?? []),
-		caution: needsElectricalCaution(l.specs)
+		caution: needsElectricalCaution(l.specs),
+		// From the rows already read through the guard above: no further query.
+		delivery: deliveryOf(l.specs, l.scenario.airDesign, l.site.water)
 	}));
 	const report: ComparisonReport = {
 		query,

@@ -1,3 +1,4 @@
+import { DELIVERY_NOT_KNOWN } from '$lib/text/delivery-figures';
 import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
 import { compare, compareRequestSchema } from '$lib/calc';
@@ -42,7 +43,8 @@ describe('the comparison and monthly CSV tables', () => {
 			deviceCount: 3,
 			kwhByCategory: {},
 			redundancy: [],
-			caution: false
+			caution: false,
+			delivery: DELIVERY_NOT_KNOWN
 		})),
 		result: compare(request),
 		assumptions: []
