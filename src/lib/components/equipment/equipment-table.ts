@@ -3,7 +3,15 @@ import { type FieldIssue, messagesAt } from '$lib/components/fields/field-issues
 import { powerForm, writeField } from './device-fields';
 
 /** A stored device: the core's Equipment plus the safety flags and notes (as `devices.spec` holds it). */
-export type DeviceSpec = EquipmentInput & { inWater?: boolean; outdoor?: boolean; notes?: string };
+export type DeviceSpec = EquipmentInput & {
+	inWater?: boolean;
+	outdoor?: boolean;
+	notes?: string;
+	/** What one unit delivers, when known: a water pump's flow, an air pump's free air (L/min). */
+	waterLpm?: number;
+	airLpm?: number;
+	fromAirDesign?: boolean;
+};
 
 /** One row of the table; `key` stays with the device through moves (a database id or a client uuid). */
 export interface EquipmentRow {

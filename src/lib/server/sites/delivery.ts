@@ -6,23 +6,11 @@ import {
 	siteWaterSchema,
 	type AirDesign,
 	type Delivery,
-	type DeliveryDevice,
 	type SiteWater
 } from '$lib/calc';
+import { deliveryDevice } from '$lib/compare/delivery-device';
 import { db } from '$lib/server/db';
 import { devices, scenarios, sites, type DeviceSpec } from '$lib/server/db/schema';
-
-/** What the core's `scenarioDelivery` reads of a stored device: its duty, count and what one unit moves. */
-export function deliveryDevice(spec: DeviceSpec): DeliveryDevice {
-	return {
-		name: spec.name,
-		category: spec.category ?? 'other',
-		quantity: spec.quantity ?? 1,
-		...(spec.inWater !== undefined ? { inWater: spec.inWater } : {}),
-		...(spec.waterLpm !== undefined ? { waterLpm: spec.waterLpm } : {}),
-		...(spec.airLpm !== undefined ? { airLpm: spec.airLpm } : {})
-	};
-}
 
 /**
  * The stored design and water as the core's schemas read them today: a design or water that no longer
