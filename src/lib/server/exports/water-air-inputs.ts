@@ -13,8 +13,10 @@ export function waterAirScenarios(
 ): WaterAirScenario[] {
 	return report.scenarios.map((s, i) => {
 		const { airDesign, water } = stored[i] ?? { airDesign: null, water: { altitudeM: 0, tanks: [] } };
-		const volume = water.tanks.reduce((sum, tank) => sum + tank.volumeLiters, 0);
-		const conditions = airDesign ? designConditions(water, airDesign.aeration?.tankId ?? null) : null;
+		// The volume the core's turnovers use: the aerated tank's when the design names one, else all tanks.
+		const tankConditions = designConditions(water, airDesign?.aeration?.tankId ?? null);
+		const volume = tankConditions.tankVolumeLiters ?? 0;
+		const conditions = airDesign ? tankConditions : null;
 		return {
 			name: s.name,
 			delivery: s.delivery,
