@@ -52,7 +52,8 @@ export function oxygenEnough(
 ) {
 	const { oxygenSuppliedGramsPerHour: supplied, oxygenDemandGramsPerHour: demand } = delivery;
 	if (supplied === null || demand === null) return null;
-	return supplied >= demand;
+	// A design sized to the demand supplies it exactly: rounding must not call that short.
+	return supplied >= demand * (1 - 1e-9);
 }
 
 /** The target dissolved oxygen the demand is held at: the design's, else the designer's default 5 mg/L. */

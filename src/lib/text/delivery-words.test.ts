@@ -32,6 +32,15 @@ describe('the plain-words line on what scenarios deliver', () => {
 		).toBe('Both keep the fish above 5 mg/L; “Small pump with air-lifts” has no mains power in the water.');
 	});
 
+	it('counts a design sized exactly to the demand as enough, whatever the last digit', () => {
+		expect(
+			deliverySentence([
+				delivered('A', [14.065870833333333, 14.065870833333335], 1),
+				delivered('B', [21, 14], 0)
+			])
+		).toMatch(/^Both keep the fish above 5 mg\/L/);
+	});
+
 	it('names the scenario that falls short of the demand, with both figures', () => {
 		expect(deliverySentence([delivered('Pump A', [40, 60], 0), delivered('Pump B', [90, 60], 0)])).toBe(
 			'“Pump B” keeps the fish above 5 mg/L; “Pump A” falls short: 40 g O₂/h supplied against 60 g O₂/h needed at 5 mg/L; neither has mains power in the water.'
