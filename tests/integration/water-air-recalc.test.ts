@@ -60,18 +60,18 @@ const small = [
 	{ name: 'Small in-tank pump', category: 'water-pump', quantity: 1, inWater: true, waterLpm: 60 },
 	{ name: 'Air pump', category: 'air-pump', quantity: 2, airLpm: 62 }
 ];
-const volume = water.tanks.reduce((sum, tank) => sum + tank.volumeLiters, 0);
 const waterAir: WaterAirScenario[] = [
 	{
 		name: 'Today: one large blower',
 		delivery: scenarioDelivery([deliveryDevice(bigPump)], null, water),
-		tankVolumeLiters: volume,
+		// The core's turnovers: all the tanks without a design, the aerated tank with one.
+		tankVolumeLiters: designConditions(water, null).tankVolumeLiters,
 		design: null
 	},
 	{
 		name: 'Small pump and air-lifts',
 		delivery: scenarioDelivery(small.map(deliveryDevice), design, water),
-		tankVolumeLiters: volume,
+		tankVolumeLiters: conditions.tankVolumeLiters,
 		design: { design, conditions, result }
 	}
 ];

@@ -15,7 +15,7 @@ const usable = (n: number | undefined) =>
 
 /**
  * What the core's `scenarioDelivery` reads of a device: its duty, count and what one unit moves. A
- * figure still being typed (empty, not a number) counts as not given. Browser-safe: the scenario page
+ * figure still being typed (empty, not a number) counts as not given; a quantity as one. Browser-safe: the scenario page
  * shows the delivery of the list as edited, the server that of the list as saved.
  */
 export function deliveryDevice(device: Delivering): DeliveryDevice {
@@ -24,7 +24,8 @@ export function deliveryDevice(device: Delivering): DeliveryDevice {
 	return {
 		name: device.name,
 		category: device.category ?? 'other',
-		quantity: usable(device.quantity) ?? 0,
+		// An empty quantity is the schema's default, one unit.
+		quantity: usable(device.quantity) ?? 1,
 		...(device.inWater !== undefined ? { inWater: device.inWater } : {}),
 		...(waterLpm !== undefined ? { waterLpm } : {}),
 		...(airLpm !== undefined ? { airLpm } : {})
