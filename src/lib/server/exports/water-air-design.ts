@@ -1,12 +1,17 @@
-import type { AirDesign, AirDesignResult, DesignConditions } from '$lib/calc';
+import {
+	barometricPressureAtm,
+	isothermalAirWatts,
+	oxygenSaturationMgL,
+	STANDARD_ATMOSPHERE_PA,
+	waterDensityKgPerM3,
+	waterVapourPressureAtm,
+	type AirDesign,
+	type AirDesignResult,
+	type DesignConditions
+} from '$lib/calc';
 import { a1, type SheetWriter } from './cells';
+import { writeAirliftTable } from './water-air-airlifts';
 import * as F from './water-air-formulas';
-
-/** Metres in one unit of a depth as the designer takes it (international inch and foot, 1959: exact). */
-const METERS_PER = { m: 1, cm: 0.01, ft: 0.3048, in: 0.0254 } as const;
-const MM_PER = { mm: 1, in: 25.4 } as const;
-/** L/min in one unit of flow (US gallon 3.785411784 L, NIST Handbook 44). */
-const LPM_PER = { lpm: 1, gpm: 3.785411784, gph: 3.785411784 / 60, m3h: 1000 / 60 } as const;
 
 /** One scenario's air design with the conditions it was worked out for and the core's answer. */
 export interface DesignBlock {
@@ -26,20 +31,6 @@ export interface DesignCells {
 	isothermalWatts: string;
 }
 
-const AIRLIFT_HEADERS = [
-	'Air-lift',
-	'Count',
-	'Riser inner diameter (mm)',
-	'Submergence (m)',
-	'Lift (m)',
-	'Water per riser (L/min)',
-	'Efficiency (%)',
-	'Air pressure at the foot, gauge (kPa)',
-	'Free air per riser (L/min)',
-	'Free air, all risers (L/min)',
-	'Most the riser carries (L/min)'
-];
-
 /**
  * Writes one scenario's air design from `row`: its conditions, the water's properties (formulas), each
  * air-lift's free air by Nicklin's equation (formula), the aeration and pump as Runrate worked them
@@ -54,15 +45,26 @@ export function writeDesignBlock(
 	let row = from;
 	out.text(row++, 1, `“${block.name}”: the air design`, 'heading');
 	const ref = new Map<string, string>();
-	const pair = (key: string, label: string, value: number | string, note: string, numFmt = '0.000') => {
+	// A formula's cached result is the core's figure, for programs that show a file without recalculating.
+	const pair = (
+		key: string,
+		label: string,
+		value: number | string,
+		note: string,
+		numFmt = '0.000',
+		cached: number | null = null
+	) => {
 		out.text(row, 1, label, 'bold');
 		if (typeof value === 'number') out.number(row, 2, value, numFmt, 'input');
-		else out.formula(row, 2, value, null, numFmt);
+		else out.formula(row, 2, value, cached, numFmt);
 		out.text(row, 3, note, 'note');
 		ref.set(key, a1(2, row, true));
 		row++;
 	};
 	const r = (key: string) => ref.get(key) ?? '0';
+	const { temperatureC: t, salinityGPerKg: salt } = conditions;
+	const atm = barometricPressureAtm(conditions.altitudeM);
+	const ambientPa = atm * STANDARD_ATMOSPHERE_PA;
 	pair(
 		't',
 		'Water temperature (°C)',
@@ -72,59 +74,49 @@ export function writeDesignBlock(
 	);
 	pair('s', 'Salinity (g/kg)', conditions.salinityGPerKg, 'Fresh water 0, sea water about 35', '0.0');
 	pair('z', 'Altitude (m)', conditions.altitudeM, 'The site’s altitude', '0');
-	pair('p', 'Barometric pressure (atm)', F.barometricAtm(r('z')), 'US Standard Atmosphere (1976)', '0.0000');
-	pair('pa', 'Air pressure around the pump (Pa)', `${r('p')}*101325`, '1 atm = 101,325 Pa', '#,##0');
+	pair(
+		'p',
+		'Barometric pressure (atm)',
+		F.barometricAtm(r('z')),
+		'US Standard Atmosphere (1976)',
+		'0.0000',
+		atm
+	);
+	pair(
+		'pa',
+		'Air pressure around the pump (Pa)',
+		`${r('p')}*101325`,
+		'1 atm = 101,325 Pa',
+		'#,##0',
+		ambientPa
+	);
 	pair(
 		'rho',
 		'Water density (kg/m³)',
 		F.densityKgPerM3(r('t'), r('s')),
 		'Millero & Poisson (1981), UNESCO EOS-80',
-		'0.00'
+		'0.00',
+		waterDensityKgPerM3(t, salt)
 	);
-	pair('pwv', 'Water vapour pressure (atm)', F.vapourAtm(r('t')), 'Benson & Krause (1984)', '0.00000');
+	pair(
+		'pwv',
+		'Water vapour pressure (atm)',
+		F.vapourAtm(r('t')),
+		'Benson & Krause (1984)',
+		'0.00000',
+		waterVapourPressureAtm(t)
+	);
 	pair(
 		'sat',
 		'Oxygen saturation (mg/L)',
 		F.saturationMgL(r('t'), r('s'), r('p'), r('pwv')),
 		'Benson & Krause (1984), APHA Standard Methods 4500-O, with the Green & Carritt pressure correction',
-		'0.000'
+		'0.000',
+		oxygenSaturationMgL(t, salt, atm)
 	);
-	const airliftAirLpm: string[] = [];
-	const allRisers: string[] = [];
-	if (design.airlifts.length) {
-		row++;
-		out.headers(row++, 1, AIRLIFT_HEADERS);
-		design.airlifts.forEach((lift, i) => {
-			const core = result.airlifts[i];
-			const c = (col: number) => a1(col, row);
-			out.text(row, 1, lift.name);
-			out.number(row, 2, lift.count, '0', 'input');
-			out.number(row, 3, lift.riserInnerDiameter * MM_PER[lift.riserInnerDiameterUnit], '0.0', 'input');
-			out.number(row, 4, lift.submergence * METERS_PER[lift.submergenceUnit], '0.000', 'input');
-			out.number(row, 5, lift.lift * METERS_PER[lift.liftUnit], '0.000', 'input');
-			out.number(row, 6, lift.waterFlow * LPM_PER[lift.waterFlowUnit], '0.0', 'input');
-			out.number(row, 7, lift.efficiencyPercent, '0', 'input');
-			out.formula(row, 8, F.columnKPa(r('rho'), c(4)), core?.injectionPressureKPa ?? null, '0.00');
-			out.formula(
-				row,
-				9,
-				F.nicklinAirLpm(r('rho'), c(6), c(5), c(4), c(7), r('pa')),
-				core?.airFlowLpm ?? null,
-				'0.0'
-			);
-			out.formula(row, 10, `${c(2)}*${c(9)}`, core?.totalAirLpm ?? null, '0.0');
-			out.number(row, 11, core?.maxWaterFlowLpm ?? null, '0.0');
-			airliftAirLpm.push(c(9));
-			allRisers.push(c(10));
-			row++;
-		});
-		out.line(
-			row++,
-			'The most a riser carries comes from the two-phase momentum model of Stenning & Martin (1968) with Griffith–Wallis slip, solved by Runrate: a value, not a formula.',
-			8,
-			'note'
-		);
-	}
+	const lifts = writeAirliftTable(out, design, result, { density: r('rho'), ambientPa: r('pa') }, row);
+	row = lifts.row;
+	const { airliftAirLpm, allRisers } = lifts;
 	row++;
 	const aeration = result.aeration;
 	if (aeration) {
@@ -156,7 +148,8 @@ export function writeDesignBlock(
 		'Free air in all (L/min)',
 		`SUM(${parts.join(',') || '0'})`,
 		'The air-lifts’ air plus the aeration’s',
-		'0.0'
+		'0.0',
+		result.totalAirLpm
 	);
 	pair(
 		'g',
@@ -170,7 +163,8 @@ export function writeDesignBlock(
 		'Isothermal air power (W)',
 		F.isothermalWatts(r('pa'), r('q'), r('g')),
 		'p₁·Q₁·ln(p₂/p₁): the least power that compresses this air',
-		'0.0'
+		'0.0',
+		isothermalAirWatts(result.totalAirLpm, result.pressureKPa, ambientPa / 1000)
 	);
 	const pump = result.pump;
 	out.text(row, 1, 'Air pumps', 'bold');
