@@ -16,7 +16,7 @@ import {
 	workspaces
 } from '../src/lib/server/db/schema';
 import type { DeviceSpec } from '../src/lib/server/db/schema';
-import type { OneOffCost } from '../src/lib/calc';
+import type { AirDesign, OneOffCost } from '../src/lib/calc';
 
 type DemoPeople = {
 	password: string;
@@ -46,6 +46,8 @@ type DemoSites = {
 			isBaseline: boolean;
 			status: 'installed' | 'proposed';
 			oneOffCosts: OneOffCost[];
+			/** The air and water designer's design, kept with the scenario (the demo farm's air-lifts). */
+			airDesign?: AirDesign | null;
 			devices: DeviceSpec[];
 		}[];
 		/** Invented bills, entered with the site. */

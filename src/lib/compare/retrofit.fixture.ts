@@ -5,6 +5,7 @@
  * 1083.32 ÷ ((1500 − 210) W × 8.76 kWh per W-year)). Simple payback by its definition (extra capital ÷
  * yearly saving; any engineering-economics text): 800 ÷ 1083.32 ≈ 0.74 years. Invented figures.
  */
+import { DELIVERY_NOT_KNOWN } from '$lib/text/delivery-figures';
 import { compare, compareRequestSchema, type CompareRequest, type CompareRequestInput } from '$lib/calc';
 import { device, flatTariff } from '$lib/calc/requests.fixture';
 import type { ComparisonReport } from './types';
@@ -96,7 +97,8 @@ export function retrofitReport(more: Partial<CompareRequestInput> = {}): Compari
 			deviceCount: scenario.equipment.length,
 			kwhByCategory: {},
 			redundancy: [],
-			caution: false
+			caution: false,
+			delivery: DELIVERY_NOT_KNOWN
 		})),
 		result,
 		assumptions: []

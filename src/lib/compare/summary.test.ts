@@ -1,3 +1,4 @@
+import { DELIVERY_NOT_KNOWN } from '$lib/text/delivery-figures';
 import { describe, expect, it } from 'vitest';
 import type { ScenarioResult } from '$lib/calc';
 import { retrofitReport } from './retrofit.fixture';
@@ -53,7 +54,8 @@ function report(results: ScenarioResult[], factor = 0): ComparisonReport {
 			deviceCount: 1,
 			kwhByCategory: {},
 			redundancy: [],
-			caution: false
+			caution: false,
+			delivery: DELIVERY_NOT_KNOWN
 		})),
 		result: { scenarios: results },
 		assumptions: []

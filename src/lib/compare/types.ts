@@ -1,4 +1,4 @@
-import type { CompareResponse, DutyRedundancy, OneOffCost, ScenarioStatus } from '$lib/calc';
+import type { CompareResponse, Delivery, DutyRedundancy, OneOffCost, ScenarioStatus } from '$lib/calc';
 
 /**
  * A comparison of stored scenarios as GET /api/v1/compare answers it: the core's `compare()`
@@ -59,6 +59,8 @@ export interface ComparedScenario {
 	redundancy: DutyRedundancy[];
 	/** Mains-powered devices in water or on outdoor circuits: show the electrical caution. */
 	caution: boolean;
+	/** What the scenario delivers beside what it costs: water, oxygen, mains in water (core: scenarioDelivery). */
+	delivery: Delivery;
 }
 
 export interface ComparisonReport {

@@ -108,6 +108,14 @@ describe('a row with impossible values', () => {
 	it('takes the safety flags and notes as part of a valid device', () => {
 		expect(rowIssues(device({ inWater: true, outdoor: true, notes: 'Invented note' }))).toEqual([]);
 	});
+
+	it('takes what a unit delivers as optional, and names a negative flow at its own field', () => {
+		expect(rowIssues(device({ waterLpm: 120 }))).toEqual([]);
+		expect(rowIssues(device({ airLpm: -1 }))).toEqual([
+			{ path: 'airLpm', message: 'Air delivered must be zero or more' }
+		]);
+		expect(rowIssues(device({ waterLpm: -5 })).map((i) => i.path)).toEqual(['waterLpm']);
+	});
 });
 
 describe('issues across the table', () => {

@@ -1,9 +1,29 @@
-import { type EquipmentInput, equipmentSchema, parseRequest, powerSchema } from '$lib/calc';
+import { z } from 'zod';
+import { amount, type EquipmentInput, equipmentSchema, parseRequest, powerSchema } from '$lib/calc';
 import { type FieldIssue, messagesAt } from '$lib/components/fields/field-issues';
 import { powerForm, writeField } from './device-fields';
 
 /** A stored device: the core's Equipment plus the safety flags and notes (as `devices.spec` holds it). */
-export type DeviceSpec = EquipmentInput & { inWater?: boolean; outdoor?: boolean; notes?: string };
+export type DeviceSpec = EquipmentInput & {
+	inWater?: boolean;
+	outdoor?: boolean;
+	notes?: string;
+	/** What one unit delivers, when known: a water pump's flow, an air pump's free air (L/min). */
+	waterLpm?: number;
+	airLpm?: number;
+	fromAirDesign?: boolean;
+};
+
+/** What one unit delivers, checked as the server's device schema checks it (optional, 0 or more). */
+const deliverySchema = z.object({
+	waterLpm: amount('Water moved', { min: 0, max: 10_000_000 }).optional(),
+	airLpm: amount('Air delivered', { min: 0, max: 10_000_000 }).optional()
+});
+
+function deliveryIssues(spec: DeviceSpec): FieldIssue[] {
+	const result = parseRequest(deliverySchema, { waterLpm: spec.waterLpm, airLpm: spec.airLpm });
+	return result.success ? [] : result.error.issues;
+}
 
 /** One row of the table; `key` stays with the device through moves (a database id or a client uuid). */
 export interface EquipmentRow {
@@ -38,7 +58,7 @@ export function blankDevice(): DeviceSpec {
  */
 export function rowIssues(spec: DeviceSpec): FieldIssue[] {
 	const result = parseRequest(equipmentSchema, spec);
-	const issues = result.success ? [] : result.error.issues;
+	const issues = [...(result.success ? [] : result.error.issues), ...deliveryIssues(spec)];
 	const power: unknown = spec.power;
 	if (power === null || typeof power !== 'object') return issues;
 	const branch = powerSchema.options[powerForm(power) === 'amps' ? 1 : 0].safeParse(power);

@@ -5,7 +5,9 @@ import {
 	parseRequest,
 	redundancy,
 	versionInForce,
+	type AirDesign,
 	type CompareRequest,
+	type SiteWater,
 	type Tariff
 } from '$lib/calc';
 import { needsElectricalCaution } from '$lib/cautions';
@@ -16,6 +18,7 @@ import { requireScenarioAccess } from '$lib/server/guard';
 import { equipmentOf, tariffFor } from '$lib/server/sites/results.service';
 import { TARIFF_UNAVAILABLE, usableTariff } from '$lib/server/tariffs/usable';
 import { listDevices } from '$lib/server/sites/equipment.service';
+import { deliveryOf, storedDesign, storedWater } from '$lib/server/sites/delivery';
 import type { ScenarioRow } from '$lib/server/sites/scenario.service';
 import type { SiteRow } from '$lib/server/sites/site.service';
 import { assumptionsOf } from './assumptions';
@@ -27,6 +30,8 @@ export interface Comparison {
 	report: ComparisonReport;
 	request: CompareRequest;
 	specs: DeviceSpec[][];
+	/** Each scenario's stored air design and its site's water, for the workbook's "Water and air" sheet. */
+	stored: { airDesign: AirDesign | null; water: SiteWater }[];
 }
 
 export type Built = { ok: true; comparison: Comparison } | { ok: false; message: string; path: string };
@@ -170,7 +175,9 @@ export async function buildComparison(event: RequestEvent, query: ComparisonQuer
 		deviceCount: l.specs.length,
 		kwhByCategory: kwhByCategory(l.specs, result.scenarios[i]?.periods ?? []),
 		redundancy: redundancy(parsed.data.scenarios[i]?.equipment ?? []),
-		caution: needsElectricalCaution(l.specs)
+		caution: needsElectricalCaution(l.specs),
+		// From the rows already read through the guard above: no further query.
+		delivery: deliveryOf(l.specs, l.scenario.airDesign, l.site.water)
 	}));
 	const report: ComparisonReport = {
 		query,
@@ -187,5 +194,12 @@ export async function buildComparison(event: RequestEvent, query: ComparisonQuer
 			result.scenarios.map((s) => s.status)
 		)
 	};
-	return { ok: true, comparison: { report, request: parsed.data, specs: loaded.map((l) => l.specs) } };
+	const stored = loaded.map((l) => ({
+		airDesign: storedDesign(l.scenario.airDesign),
+		water: storedWater(l.site.water)
+	}));
+	return {
+		ok: true,
+		comparison: { report, request: parsed.data, specs: loaded.map((l) => l.specs), stored }
+	};
 }

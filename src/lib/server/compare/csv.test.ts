@@ -1,3 +1,4 @@
+import { DELIVERY_NOT_KNOWN } from '$lib/text/delivery-figures';
 import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
 import { compare, compareRequestSchema } from '$lib/calc';
@@ -7,6 +8,7 @@ import { hatcheryRequest } from '$lib/server/exports/workbook-fixtures';
 import { retrofitReport } from '$lib/compare/retrofit.fixture';
 import { csvColumn } from '$lib/text/output-labels';
 import { comparisonCsv, monthlyCsv } from './csv';
+import { DELIVERY_CSV_WORDS } from './delivery-csv';
 
 // Names a spreadsheet would run as formulas come out with a leading apostrophe; figures stay numbers.
 describe('the comparison and monthly CSV tables', () => {
@@ -42,7 +44,8 @@ describe('the comparison and monthly CSV tables', () => {
 			deviceCount: 3,
 			kwhByCategory: {},
 			redundancy: [],
-			caution: false
+			caution: false,
+			delivery: DELIVERY_NOT_KNOWN
 		})),
 		result: compare(request),
 		assumptions: []
@@ -70,7 +73,8 @@ describe('the comparison and monthly CSV tables', () => {
 			'simple_payback_note',
 			'co2_note',
 			'one_off_costs_items',
-			'description'
+			'description',
+			...DELIVERY_CSV_WORDS
 		]);
 		const numeric = header.flatMap((name, col) => (col >= 4 && !words.has(name) ? [col] : []));
 		const figures = rows.flatMap((row) => numeric.map((col) => row[col] ?? ''));
@@ -131,5 +135,32 @@ describe('the comparison CSV of issue 17’s retrofit', () => {
 		const [, proposal] = recordsOf(comparisonCsv(report));
 		expect(proposal?.one_off_costs_USD).toBe('120.00');
 		expect(proposal?.one_off_costs_items).toBe('Electrician’s visit: 120.00 (Check the circuit)');
+	});
+
+	it('writes what each scenario delivers: figures, empty where not known, the failed unit by name', () => {
+		const report = retrofitReport();
+		report.scenarios[1]!.delivery = {
+			waterLpm: 378.5411784,
+			turnoversPerHour: 1.5,
+			oxygenSuppliedGramsPerHour: 120,
+			oxygenDemandGramsPerHour: 80,
+			targetDoMgL: 5,
+			mainsDevicesInWater: 0,
+			ifLargestFails: {
+				waterLpm: 189.27,
+				waterUnit: '=Air pump',
+				oxygenSuppliedGramsPerHour: 60,
+				oxygenUnit: 'Air pump'
+			}
+		};
+		const [installed, proposal] = recordsOf(comparisonCsv(report));
+		expect(installed?.water_moved_L_per_min).toBe('');
+		expect(installed?.mains_powered_devices_in_the_water).toBe('0');
+		// 1 US gallon = 3.785411784 L (NIST Handbook 44, Appendix C).
+		expect(proposal?.water_moved_US_gal_per_min).toBe('100.00');
+		expect(proposal?.oxygen_supplied_g_O2_per_h).toBe('120.0');
+		expect(proposal?.oxygen_demand_g_O2_per_h).toBe('80.0');
+		expect(proposal?.largest_water_unit).toBe("'=Air pump");
+		expect(proposal?.oxygen_supplied_if_the_largest_unit_fails_g_O2_per_h).toBe('60.0');
 	});
 });

@@ -4,6 +4,7 @@ import type { ComparisonReport } from '$lib/compare/types';
 import { neutraliseFormula } from '$lib/server/exports/safe-text';
 import { emissionFactorSet, paybackYears } from '$lib/compare/format';
 import { CO2_NOT_SET, csvColumn, STATUS_LABELS } from '$lib/text/output-labels';
+import { deliveryCsvColumns, deliveryCsvValues } from './delivery-csv';
 
 /** The comparison and monthly tables as CSV: plain numbers (dot decimals, no thousands separators). */
 const fixed = (n: number | null, digits: number) => (n === null ? '' : n.toFixed(digits));
@@ -45,6 +46,7 @@ export function comparisonCsv(report: ComparisonReport): string {
 		`${csvColumn('runningCost', c)}_vs_baseline`,
 		`${csvColumn('capital', c)}_vs_baseline`,
 		`${csvColumn('lifecycle', c)}_vs_baseline`,
+		...deliveryCsvColumns,
 		`${csvColumn('oneOffCosts')}_items`,
 		csvColumn('description')
 	];
@@ -73,6 +75,7 @@ export function comparisonCsv(report: ComparisonReport): string {
 			fixed(r.annualCost - (base?.annualCost ?? 0), 2),
 			fixed(r.capitalCost - (base?.capitalCost ?? 0), 2),
 			fixed(r.lifecycleCost - (base?.lifecycleCost ?? 0), 2),
+			...deliveryCsvValues(s.delivery),
 			text(
 				s.oneOffCosts
 					.map((cost) => `${cost.label}: ${cost.amount.toFixed(2)}${cost.note ? ` (${cost.note})` : ''}`)

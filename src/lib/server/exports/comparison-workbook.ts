@@ -13,6 +13,7 @@ import { SUMMARY_SHEET, type SummarySources, summaryCells, writeSummarySheet } f
 import { printSetup } from './print-setup';
 import { writeTariffSheet } from './tariff-sheet';
 import { tariffUses } from './tariff-uses';
+import { WATER_AIR_SHEET, type WaterAirScenario, writeWaterAirSheet } from './water-air-sheet';
 
 export interface ComparisonExport {
 	/** e.g. "Alder Creek hatchery (invented)"; used in sheet titles. */
@@ -29,6 +30,8 @@ export interface ComparisonExport {
 	emissionSource: string;
 	/** Safety cautions to print (plain sentences), may be empty. */
 	cautions: string[];
+	/** What each scenario delivers and its air design: the "Water and air" sheet (none when absent). */
+	waterAir?: WaterAirScenario[];
 }
 
 const TARIFF_SHEET = 'Tariff';
@@ -120,6 +123,11 @@ export async function comparisonWorkbook(input: ComparisonExport): Promise<Buffe
 		})),
 		formats
 	});
+	if (input.waterAir?.length) {
+		const waterAir = sheet(WATER_AIR_SHEET);
+		writeWaterAirSheet(waterAir, input.title, input.waterAir);
+		printSetup(waterAir.sheet, { titleRows: '4:4', titleColumns: 'A:A', pagesWide: 2 });
+	}
 	printSetup(summary.sheet, { titleRows: '1:4' });
 	for (const out of scenarioSheets)
 		if (out) printSetup(out.sheet, { titleRows: '3:4', titleColumns: 'A:A', pagesWide: 3 });

@@ -1,3 +1,4 @@
+import { DELIVERY_NOT_KNOWN } from '$lib/text/delivery-figures';
 import type { ChargeLine, PeriodResult, ScenarioResult } from '$lib/calc';
 import type { ComparedScenario, ComparisonReport } from '$lib/compare/types';
 
@@ -62,7 +63,8 @@ function compared(id: string, name: string, kwhByCategory: Record<string, number
 		deviceCount: 2,
 		kwhByCategory,
 		redundancy: [],
-		caution: false
+		caution: false,
+		delivery: DELIVERY_NOT_KNOWN
 	};
 }
 

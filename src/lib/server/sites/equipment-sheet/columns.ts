@@ -59,6 +59,18 @@ export const EQUIPMENT_COLUMNS: readonly EquipmentColumn[] = [
 	column('install_cost', 'Install cost', 'Cost to install them (empty: 0).', ['installation']),
 	column('life_years', 'Life in years', 'Expected life, a whole number of years (empty: unknown).', ['life']),
 	column('maintenance_per_year', 'Maintenance per year', 'Yearly upkeep (empty: 0).', ['maintenance']),
+	column(
+		'water_lpm',
+		'Water moved L/min',
+		'A water pump: what one unit moves at its working head (empty: not known).',
+		['water flow', 'flow lpm', 'water lpm']
+	),
+	column(
+		'air_lpm',
+		'Air delivered L/min',
+		'An air pump: free air from one unit at its working pressure (empty: not known).',
+		['air flow', 'air lpm']
+	),
 	column('in_water', 'In water', 'yes when mains-powered and in or at the water (empty: no).', ['submerged']),
 	column('outdoor', 'Outdoor', 'yes when on an outdoor circuit or receptacle (empty: no).', ['outside']),
 	column('notes', 'Notes', 'Free text.', ['note', 'comment', 'comments'])

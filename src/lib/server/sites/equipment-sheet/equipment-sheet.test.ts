@@ -16,6 +16,7 @@ const LIST: DeviceSpec[] = [
 		power: { watts: 750 },
 		schedule: { type: 'always' },
 		inWater: true,
+		waterLpm: 380,
 		purchaseCost: 900,
 		lifeYears: 8
 	},
@@ -24,6 +25,7 @@ const LIST: DeviceSpec[] = [
 		category: 'air-pump',
 		power: { amps: 4.2, volts: 230, powerFactor: 0.86, phases: 1 },
 		standbyWatts: 3,
+		airLpm: 60,
 		schedule: { type: 'always' }
 	},
 	{
@@ -85,10 +87,12 @@ describe('an exported list read back', () => {
 			quantity: 2,
 			power: { watts: 750 },
 			inWater: true,
+			waterLpm: 380,
 			purchaseCost: 900,
 			lifeYears: 8
 		});
 		expect(spec(1)?.power).toEqual({ amps: 4.2, volts: 230, powerFactor: 0.86, phases: 1 });
+		expect(spec(1)?.airLpm).toBe(60);
 		expect(spec(2)).toMatchObject({ months: [1, 2, 3, 10, 11, 12], schedule: LIST[2]?.schedule });
 		expect(spec(3)?.schedule).toEqual({ type: 'hours', hoursPerDay: 12, days: 'all' });
 		expect(spec(4)?.notes).toBe('=cmd|calc');

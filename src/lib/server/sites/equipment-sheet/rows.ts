@@ -96,6 +96,8 @@ export function rowToSpec(line: number, cell: Cell): { spec: DeviceSpec } | { er
 		installCost: num('install_cost'),
 		lifeYears: life ?? null,
 		maintenancePerYear: num('maintenance_per_year'),
+		waterLpm: num('water_lpm'),
+		airLpm: num('air_lpm'),
 		inWater: flag('in_water'),
 		outdoor: flag('outdoor'),
 		notes: cell('notes') || undefined
@@ -124,6 +126,8 @@ export function specToRow(spec: DeviceSpec): Record<string, string | number> {
 		install_cost: spec.installCost ?? 0,
 		life_years: spec.lifeYears ?? '',
 		maintenance_per_year: spec.maintenancePerYear ?? 0,
+		water_lpm: spec.waterLpm ?? '',
+		air_lpm: spec.airLpm ?? '',
 		in_water: spec.inWater ? 'yes' : '',
 		outdoor: spec.outdoor ? 'yes' : '',
 		notes: spec.notes ?? ''

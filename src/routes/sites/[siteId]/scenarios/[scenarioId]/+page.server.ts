@@ -1,6 +1,7 @@
 import { error, fail } from '@sveltejs/kit';
 import { requireScenarioAccess } from '$lib/server/guard';
 import { listDevices } from '$lib/server/sites/equipment.service';
+import { deliveryInputs } from '$lib/server/sites/delivery';
 import { readDetailsForm } from '$lib/server/sites/scenario-details-form';
 import { saveScenarioDetails } from '$lib/server/sites/scenario-details';
 import { chooserFor, tariffChoices, TARIFF_UNAVAILABLE, usableTariff } from '$lib/server/tariffs/usable';
@@ -39,6 +40,8 @@ export const load = (async (event) => {
 			: [],
 		devices: specs,
 		caution: needsElectricalCaution(specs),
+		// The stored air design and the site's water: the page works out the delivery of the list as edited.
+		delivery: deliveryInputs(scenario.airDesign, site.water),
 		canEdit
 	};
 }) satisfies PageServerLoad;
