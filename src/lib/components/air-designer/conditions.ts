@@ -3,8 +3,11 @@
 // oxygen demand from their feed or in grams an hour.
 import { z } from 'zod';
 import {
+	type AirDesign,
 	amount,
 	type DesignConditions,
+	designConditions,
+	type SiteWater,
 	oxygenDemandGramsPerHour,
 	parseRequest,
 	type RequestIssue,
@@ -79,3 +82,20 @@ export function checkConditions(
 		issues: []
 	};
 }
+
+/**
+ * A scenario's conditions: the aerated tank's water, or the core's default water when the design has no
+ * aeration (the server's `saveAirDesign` reads a design the same way). A tank no longer at the site is
+ * named at the tank's field, so a result is never worked out for water that is not there.
+ */
+export function siteConditions(
+	water: SiteWater,
+	design: AirDesign | null
+): { conditions: DesignConditions; issues: [] } | { conditions: null; issues: RequestIssue[] } {
+	const tankId = design?.aeration?.tankId ?? null;
+	if (tankId !== null && !water.tanks.some((tank) => tank.id === tankId))
+		return { conditions: null, issues: [{ path: 'aeration.tankId', message: TANK_GONE }] };
+	return { conditions: designConditions(water, tankId), issues: [] };
+}
+
+export const TANK_GONE = "That tank is no longer among the site's tanks: choose another";
