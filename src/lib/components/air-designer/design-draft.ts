@@ -45,6 +45,8 @@ export type AerationDraft = {
 	fouling: NumberDraft;
 	theta: NumberDraft;
 	depthCorrection: NumberDraft;
+	/** Empty: the diffuser kind's usual transfer per metre (the core's table). */
+	transferPercentPerM?: NumberDraft;
 };
 
 export type DesignDraft = {
@@ -117,7 +119,7 @@ export function blankDraft(pump: string, tankId: string | null = null): DesignDr
 
 /** A saved design as the designer shows it; its pump is "the saved one" until the person picks another. */
 export function draftOf(design: AirDesign, pump: string): DesignDraft {
-	const { transferPercentPerM: _ignored, ...aeration } = design.aeration ?? blankAeration();
+	const aeration = design.aeration ?? blankAeration();
 	return {
 		airlifts: design.airlifts.map((row) => ({ ...row, key: newKey() })),
 		aerationOn: design.aeration !== null,

@@ -8,7 +8,6 @@ import {
 	type AirPump,
 	designAir,
 	designConditions,
-	type PumpSelection,
 	type RequestIssue,
 	TYPICAL_AIR_PUMPS
 } from '$lib/calc';
@@ -17,6 +16,7 @@ import { db } from '../db';
 import { airPumps, devices, scenarios, type DeviceSpec } from '../db/schema';
 import { audit, type Actor } from '../workspaces/audit';
 import { deviceSpecSchema } from './device-specs';
+import { airDesignWords, withAirPumpRow } from './air-pump-row';
 import type { ScenarioRow } from './scenario.service';
 import type { SiteRow } from './site.service';
 
@@ -30,7 +30,6 @@ export type AirDesignSaved =
 
 /** The most rows a scenario holds (the equipment list's own limit). */
 const MAX_DEVICES = 2000;
-const NAME_MAX = 120;
 
 /**
  * A workspace's own air pumps from their data sheets, oldest first. Read here directly: the workspace's
@@ -85,44 +84,6 @@ async function problems(access: AirDesignAccess, design: AirDesign, result: AirD
 		});
 	return issues;
 }
-
-/** A name for the pumps' row that no other device of the list has ("Air pump (air design 2)"). */
-function uniqueName(name: string, others: readonly DeviceSpec[]): string {
-	const taken = new Set(others.map((d) => d.name.trim().toLowerCase()));
-	for (let n = 1; ; n++) {
-		const suffix = n === 1 ? '' : ` (air design${n === 2 ? '' : ` ${n - 1}`})`;
-		const candidate = `${name.slice(0, NAME_MAX - suffix.length)}${suffix}`;
-		if (!taken.has(candidate.trim().toLowerCase())) return candidate;
-	}
-}
-
-/** The equipment row for the chosen pumps: always on, out of the water, its free air per unit. */
-export function airPumpRow(selection: PumpSelection, others: readonly DeviceSpec[]): DeviceSpec {
-	return {
-		name: uniqueName(selection.pumpName, others),
-		category: 'air-pump',
-		quantity: selection.count,
-		power: { watts: selection.wattsEach },
-		schedule: { type: 'always' },
-		inWater: false,
-		airLpm: selection.flowEachLpm,
-		fromAirDesign: true
-	} as DeviceSpec;
-}
-
-/** The list with the designer's row in place of its old one (where it stood), or added at the end. */
-export function withAirPumpRow(list: readonly DeviceSpec[], selection: PumpSelection): DeviceSpec[] {
-	const at = list.findIndex((d) => d.fromAirDesign);
-	const others = list.filter((d) => !d.fromAirDesign);
-	const row = airPumpRow(selection, others);
-	if (at < 0) return [...others, row];
-	const before = list.slice(0, at).filter((d) => !d.fromAirDesign);
-	return [...before, row, ...others.slice(before.length)];
-}
-
-/** The trail's words: "Air design saved: 2 × Linear pump 60 L/min class, 45 W each". */
-export const airDesignWords = (selection: PumpSelection) =>
-	`Air design saved: ${selection.count} × ${selection.pumpName}, ${figure(selection.wattsEach, 1)} W each`;
 
 /**
  * Saves the design and its pumps' row if the scenario is still at `expectedRevision`: one transaction
