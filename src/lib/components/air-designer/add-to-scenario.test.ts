@@ -18,7 +18,9 @@ describe('what "Add to scenario" says', () => {
 
 	it('puts the page-wide refusal first and says each message once', () => {
 		expect(
-			refusalWords({ errors: { 'design.pump': 'Too weak', form: 'Someone else saved', 'design.x': 'Too weak' } })
+			refusalWords({
+				errors: { 'design.pump': 'Too weak', form: 'Someone else saved', 'design.x': 'Too weak' }
+			})
 		).toEqual(['Someone else saved', 'Too weak']);
 		expect(refusalWords(undefined)).toEqual(['The design could not be saved. Try again.']);
 	});

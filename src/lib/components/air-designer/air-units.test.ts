@@ -1,5 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { airText, cfmOf, KPA_PER_INCH_OF_WATER, KPA_PER_PSI, LITERS_PER_CUBIC_FOOT, pressureParts } from './air-units';
+import {
+	airText,
+	cfmOf,
+	KPA_PER_INCH_OF_WATER,
+	KPA_PER_PSI,
+	LITERS_PER_CUBIC_FOOT,
+	pressureParts
+} from './air-units';
 
 describe('units growers read off pumps and gauges', () => {
 	it.each([
@@ -17,6 +24,10 @@ describe('units growers read off pumps and gauges', () => {
 		// Issue 18's worked example (derived from the equation): about 29.5 L/min at about 6.9 kPa.
 		expect(cfmOf(29.5)).toBeCloseTo(1.0418, 4);
 		expect(airText(29.5)).toBe('29.5 L/min (1.04 cfm)');
-		expect(pressureParts(6.9)).toEqual({ kPa: '6.9 kPa', psi: '1 psi', inchesOfWater: '27.7 inches of water' });
+		expect(pressureParts(6.9)).toEqual({
+			kPa: '6.9 kPa',
+			psi: '1 psi',
+			inchesOfWater: '27.7 inches of water'
+		});
 	});
 });

@@ -21,7 +21,12 @@ describe("the public page's water", () => {
 	});
 
 	it("works the demand out with the core's rule, from the feed or given in grams an hour", () => {
-		const feed = checkConditions({ ...blankConditions(), demand: 'feed', feedKgPerDay: 2, proteinPercent: 40 });
+		const feed = checkConditions({
+			...blankConditions(),
+			demand: 'feed',
+			feedKgPerDay: 2,
+			proteinPercent: 40
+		});
 		expect(feed.conditions?.oxygenDemandGramsPerHour).toBe(
 			oxygenDemandGramsPerHour({ feedKgPerDay: 2, proteinPercent: 40 })
 		);

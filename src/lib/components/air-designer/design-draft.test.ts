@@ -60,7 +60,9 @@ describe('problems, named at their box', () => {
 	});
 
 	it('asks for a pump when none is chosen', () => {
-		expect(checkDesign(blankDraft(''), null).issues).toEqual([{ path: 'pump', message: 'Choose an air pump' }]);
+		expect(checkDesign(blankDraft(''), null).issues).toEqual([
+			{ path: 'pump', message: 'Choose an air pump' }
+		]);
 	});
 
 	it('keeps what was typed for aeration while it is switched off, and sends none', () => {

@@ -150,7 +150,5 @@ export function checkDesign(
 ): { design: AirDesign; issues: [] } | { design: null; issues: RequestIssue[] } {
 	if (!pump) return { design: null, issues: [{ path: 'pump', message: 'Choose an air pump' }] };
 	const parsed = parseRequest(airDesignSchema, designInput(draft, pump));
-	return parsed.success
-		? { design: parsed.data, issues: [] }
-		: { design: null, issues: parsed.error.issues };
+	return parsed.success ? { design: parsed.data, issues: [] } : { design: null, issues: parsed.error.issues };
 }

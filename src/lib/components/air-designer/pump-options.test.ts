@@ -39,7 +39,9 @@ describe('the pump list', () => {
 		const options = pumpOptions(typical, own, saved);
 		expect(options[0]).toMatchObject({ value: 'saved', group: 'saved', pump: { inputWatts: 30 } });
 		expect(initialPump(options, saved)).toBe('saved');
-		expect(pumpOptions(typical, [], saved)[0]?.label).toBe('Small shelf pump (invented) (as saved with this design)');
+		expect(pumpOptions(typical, [], saved)[0]?.label).toBe(
+			'Small shelf pump (invented) (as saved with this design)'
+		);
 	});
 });
 

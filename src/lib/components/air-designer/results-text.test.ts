@@ -32,7 +32,10 @@ describe('the riser chart', () => {
 			{ airLpm: 0, waterLpm: 0 },
 			{ airLpm: 40, waterLpm: 30 }
 		];
-		expect(chartDomain(curve, { airLpm: 50, waterLpm: 20 })).toEqual({ airLpm: [0, 52.5], waterLpm: [0, 33] });
+		expect(chartDomain(curve, { airLpm: 50, waterLpm: 20 })).toEqual({
+			airLpm: [0, 52.5],
+			waterLpm: [0, 33]
+		});
 		expect(chartDomain([], { airLpm: 0, waterLpm: 0 })).toEqual({ airLpm: [0, 1], waterLpm: [0, 1] });
 	});
 

@@ -9,9 +9,7 @@ export type ShownWarning = { key: string; message: string };
  * design repeating a riser's warning, would otherwise say the same thing twice. A riser's warning names
  * the air-lift when the design has more than one.
  */
-export function designWarnings(
-	result: Pick<AirDesignResult, 'warnings' | 'airlifts'>
-): ShownWarning[] {
+export function designWarnings(result: Pick<AirDesignResult, 'warnings' | 'airlifts'>): ShownWarning[] {
 	const named = result.airlifts.length > 1;
 	const designWide = result.warnings.map((w) => ({ code: w.code, message: w.message }));
 	// A riser's warning the design already repeats (in its own words around it) is not said again.

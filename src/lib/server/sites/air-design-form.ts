@@ -28,7 +28,9 @@ export async function airDesignFormAction(access: AirDesignAccess, form: FormDat
 	const parsed = parseRequest(airDesignSchema, json);
 	if (!parsed.success)
 		return fail(400, {
-			errors: Object.fromEntries(parsed.error.issues.map((i) => [`design.${i.path}`.replace(/\.$/, ''), i.message]))
+			errors: Object.fromEntries(
+				parsed.error.issues.map((i) => [`design.${i.path}`.replace(/\.$/, ''), i.message])
+			)
 		});
 	const saved = await saveAirDesign(access, revision, parsed.data);
 	if ('conflict' in saved) return fail(409, { errors: { form: STALE } });

@@ -66,7 +66,10 @@ async function problems(access: AirDesignAccess, design: AirDesign, result: AirD
 	const issues: RequestIssue[] = [];
 	const tankId = design.aeration?.tankId ?? null;
 	if (tankId !== null && !access.site.water.tanks.some((tank) => tank.id === tankId))
-		issues.push({ path: 'aeration.tankId', message: "That tank is not among the site's tanks: choose another" });
+		issues.push({
+			path: 'aeration.tankId',
+			message: "That tank is not among the site's tanks: choose another"
+		});
 	const source = design.pumpSource;
 	const saved = access.scenario.airDesign?.pumpSource;
 	const keptAsSaved = saved && source && saved.kind === source.kind && saved.id === source.id;
@@ -115,7 +118,12 @@ export async function saveAirDesign(
 	if (!deviceSpecSchema.safeParse(device).success)
 		return {
 			ok: false,
-			issues: [{ path: 'pump', message: `This design would need ${result.pump.count} of this pump: choose a bigger one` }]
+			issues: [
+				{
+					path: 'pump',
+					message: `This design would need ${result.pump.count} of this pump: choose a bigger one`
+				}
+			]
 		};
 	const selection = result.pump;
 	return db.transaction(async (tx) => {
@@ -132,7 +140,9 @@ export async function saveAirDesign(
 			return { ok: false as const, conflict: now?.revision ?? scenario.revision };
 		}
 		await tx.delete(devices).where(eq(devices.scenarioId, scenario.id));
-		await tx.insert(devices).values(list.map((spec, position) => ({ scenarioId: scenario.id, position, spec })));
+		await tx
+			.insert(devices)
+			.values(list.map((spec, position) => ({ scenarioId: scenario.id, position, spec })));
 		await audit(tx, user, {
 			workspaceId: site.workspaceId,
 			siteId: site.id,

@@ -48,7 +48,10 @@ describe("the air designer's row", () => {
 
 	it('keeps its own old name free: a second design of the same pump reuses it', () => {
 		const first = withAirPumpRow([device('Heater')], selection);
-		expect(withAirPumpRow(first, selection).map((d) => d.name)).toEqual(['Heater', 'Linear pump 60 L/min class']);
+		expect(withAirPumpRow(first, selection).map((d) => d.name)).toEqual([
+			'Heater',
+			'Linear pump 60 L/min class'
+		]);
 	});
 
 	it("is recorded in the trail in the brief's words", () => {

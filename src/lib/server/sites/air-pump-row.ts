@@ -44,4 +44,3 @@ export function withAirPumpRow(list: readonly DeviceSpec[], selection: PumpSelec
 /** The trail's words: "Air design saved: 2 × Linear pump 60 L/min class, 45 W each". */
 export const airDesignWords = (selection: PumpSelection) =>
 	`Air design saved: ${selection.count} × ${selection.pumpName}, ${figure(selection.wattsEach, 1)} W each`;
-
