@@ -67,6 +67,30 @@ export type {
 	DiffuserKind,
 	PumpPoint
 } from './air-design.schema';
+export { airlift, nicklinAirM3PerS, nicklinWaterM3PerS } from './airlift';
+export type { AirliftInput, AirliftResult, Warning } from './airlift';
+export { riserCurve, riserWaterFlowM3PerS, RISER_FANNING_FACTOR } from './riser';
+export type { CurvePoint, Riser, RiserCurve } from './riser';
+export { adiabaticAirWatts, choosePumps, isothermalAirWatts, pumpFlowLpm } from './air-pump';
+export type { PumpSelection } from './air-pump';
+export { TYPICAL_AIR_PUMPS } from './typical-air-pumps';
+export { aeration } from './aeration';
+export type { AerationInput, AerationResult } from './aeration';
+export {
+	DIFFUSER_TRANSFER_PERCENT_PER_M,
+	FISH_KG_O2_PER_KG_FEED,
+	fieldToStandardRatio,
+	OXYGEN_G_PER_M3_STANDARD_AIR,
+	oxygenDemandGramsPerHour,
+	oxygenFromAir
+} from './oxygen-transfer';
+export type { FieldConditions, OxygenDemand } from './oxygen-transfer';
+export { DEFAULT_TARGET_DO_MG_L, designConditions } from './design-conditions';
+export type { DesignConditions } from './design-conditions';
+export { designAir } from './air-design';
+export type { AirDesignResult, DesignedAirlift } from './air-design';
+export { scenarioDelivery } from './delivery';
+export type { Delivery, DeliveryDevice } from './delivery';
 export { EMPTY_SITE_WATER, siteWaterSchema, tankSchema, WATER_KINDS } from './site-water.schema';
 export type { SiteWater, SiteWaterInput, Tank, TankInput } from './site-water.schema';
 export {
