@@ -11,7 +11,8 @@ import { PUBLIC_TARIFF, baselineOf, createSite } from './site-setup';
 /** Types into a box of the designer and picks its unit. */
 async function quantity(scope: Locator, label: string, value: string, unit?: string) {
 	await scope.getByRole('textbox', { name: label, exact: true }).fill(value);
-	if (unit) await scope.getByRole('combobox', { name: `${label}: unit`, exact: true }).selectOption({ label: unit });
+	if (unit)
+		await scope.getByRole('combobox', { name: `${label}: unit`, exact: true }).selectOption({ label: unit });
 }
 
 /** The worked example of issue 18 in the first air-lift (derived from Nicklin's definition of efficiency). */

@@ -60,9 +60,9 @@ const eventFor = (user: SessionUser, id: string, body: unknown = {}) =>
 		})
 	}) as unknown as RequestEvent;
 
-async function statusOf(promise: Promise<unknown>): Promise<number> {
+async function statusOf(run: () => unknown): Promise<number> {
 	try {
-		const answer = await promise;
+		const answer = await run();
 		return answer instanceof Response ? answer.status : 200;
 	} catch (e) {
 		return (e as { status: number }).status;
@@ -150,11 +150,11 @@ describe('Add to scenario', () => {
 	it('lets a viewer read but not save, and another workspace neither (API and guard alike)', async () => {
 		const body = { expectedRevision: 0, design: design(1) };
 		expect(
-			await statusOf(requireScenarioAccess(eventFor(people.viewer, scenarioId), scenarioId, 'viewer'))
+			await statusOf(() => requireScenarioAccess(eventFor(people.viewer, scenarioId), scenarioId, 'viewer'))
 		).toBe(200);
-		expect(await statusOf(PUT(eventFor(people.viewer, scenarioId, body) as never))).toBe(403);
-		expect(await statusOf(PUT(eventFor(people.outsider, scenarioId, body) as never))).toBe(404);
-		expect(await statusOf(PUT(eventFor(people.owner, otherScenarioId, body) as never))).toBe(404);
+		expect(await statusOf(() => PUT(eventFor(people.viewer, scenarioId, body) as never))).toBe(403);
+		expect(await statusOf(() => PUT(eventFor(people.outsider, scenarioId, body) as never))).toBe(404);
+		expect(await statusOf(() => PUT(eventFor(people.owner, otherScenarioId, body) as never))).toBe(404);
 		expect((await findScenario(otherScenarioId))?.airDesign ?? null).toBeNull();
 	});
 });

@@ -51,3 +51,21 @@ describe('canonical JSON', () => {
 		expect(canonical({ a: 1, b: undefined })).toBe(canonical({ a: 1 }));
 	});
 });
+
+describe('the pump a blank designer opens on', () => {
+	it('is the typical class that runs the first air-lift on the fewest watts, never one that cannot', () => {
+		const classes = [
+			{ id: 'weak', pump: { ...small, name: 'Weak (invented)' }, note: '' },
+			{ id: 'thrifty', pump: { ...small, name: 'Thrifty (invented)' }, note: '' },
+			{ id: 'hungry', pump: { ...small, name: 'Hungry (invented)' }, note: '' }
+		];
+		const watts: Record<string, number | null> = {
+			'Weak (invented)': null,
+			'Thrifty (invented)': 30,
+			'Hungry (invented)': 90
+		};
+		const options = pumpOptions(classes, own, null);
+		expect(initialPump(options, null, (pump) => watts[pump.name]!)).toBe('typical:thrifty');
+		expect(initialPump(options, null, () => null)).toBe('typical:weak');
+	});
+});

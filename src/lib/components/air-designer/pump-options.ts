@@ -80,8 +80,21 @@ function savedOption(options: readonly PumpOption[], saved: AirDesign): PumpOpti
 	);
 }
 
-/** The option a designer opens with: the saved design's pump, else the first typical class, else the first. */
-export function initialPump(options: readonly PumpOption[], saved: AirDesign | null): string {
+/**
+ * The option a designer opens with: the saved design's pump; else the typical class `score` ranks
+ * lowest (the watts it draws for the blank design; null: it cannot run it), else the first typical
+ * class, else the first option.
+ */
+export function initialPump(
+	options: readonly PumpOption[],
+	saved: AirDesign | null,
+	score: (pump: AirPump) => number | null = () => null
+): string {
 	if (saved) return (savedOption(options, saved) ?? options.find((o) => o.group === 'saved'))?.value ?? '';
-	return (options.find((o) => o.group === 'typical') ?? options[0])?.value ?? '';
+	const typical = options.filter((o) => o.group === 'typical');
+	const scored = typical
+		.map((option) => ({ option, watts: score(option.pump) }))
+		.filter((s): s is { option: PumpOption; watts: number } => s.watts !== null)
+		.sort((a, b) => a.watts - b.watts);
+	return (scored[0]?.option ?? typical[0] ?? options[0])?.value ?? '';
 }

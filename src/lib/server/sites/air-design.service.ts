@@ -83,7 +83,10 @@ async function problems(access: AirDesignAccess, design: AirDesign, result: AirD
 	if (!result.pump)
 		issues.push({
 			path: 'pump',
-			message: `${design.pump.name} cannot deliver the ${figure(result.pressureKPa, 1)} kPa this design needs: choose a stronger pump`
+			message:
+				result.totalAirLpm > 0
+					? `${design.pump.name} cannot deliver the ${figure(result.pressureKPa, 1)} kPa this design needs: choose a stronger pump`
+					: 'This design needs no air, so there is no air pump to add'
 		});
 	return issues;
 }
