@@ -88,7 +88,7 @@ test('on a scenario: two air-lifts, "Add to scenario", and the air pumps are in 
 	const second = page.getByRole('group', { name: 'Air-lift 2', exact: true });
 	await second.getByRole('textbox', { name: 'Name' }).fill('Sump riser');
 	await expect(page.getByRole('rowheader', { name: '1 × Sump riser' })).toBeAttached();
-	const pumps = (await page.getByTestId('pump-choice').locator('.font-semibold').first().innerText()).trim();
+	const pumps = (await page.getByTestId('pump-count').innerText()).trim();
 	const pumpName = pumps.replace(/^\d+ × /, '');
 
 	const saved = page.waitForResponse(
