@@ -36,3 +36,10 @@ export function needsElectricalCaution(devices: readonly Flagged[]): boolean {
 /** The caution's words, the same on the scenario page, the comparison and the workbook. */
 export const ELECTRICAL_CAUTION =
 	'Mains-powered equipment in or near water can kill. Put every in-water pump, heater, UV steriliser and chiller, and every outdoor receptacle, on ground-fault protection (a GFCI or RCD), use weatherproof enclosures and drip loops, and have a licensed electrician do the wiring to your local electrical code, which comes before anything Runrate says.';
+
+/**
+ * The air and water designer's caution: the air pump stays out of the water, which is what keeps
+ * mains power away from it, and its circuit still gets ground-fault protection (common practice).
+ */
+export const AIR_PUMP_CAUTION =
+	'Keep air pumps above the water line, dry and out of splash, with a loop in the air line or a check valve so water cannot run back into the pump. Plug them into a circuit with ground-fault protection (a GFCI or RCD). Your local electrical code and a licensed electrician have the last word on the wiring, before anything Runrate says.';

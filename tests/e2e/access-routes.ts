@@ -176,6 +176,25 @@ export const routes: Route[] = [
 		form: { name: '' },
 		expect: [401, 403, 400, 400, 404, 404, 403]
 	},
+	// The air and water designer: public on its own page; on a scenario, saving needs an editor.
+	{ method: 'GET', path: () => '/air', expect: [200, 200, 200, 200, 200, 200, 200] },
+	{
+		method: 'POST',
+		path: () => `/sites/${SITE}/scenarios/${SCENARIO}?/airDesign`,
+		form: { revision: '0', design: '{}' },
+		expect: [401, 403, 400, 400, 404, 404, 403]
+	},
+	{
+		method: 'GET',
+		path: () => `/api/v1/scenarios/${SCENARIO}/air-design`,
+		expect: [401, 200, 200, 200, 404, 404, 200]
+	},
+	{
+		method: 'PUT',
+		path: () => `/api/v1/scenarios/${SCENARIO}/air-design`,
+		json: {},
+		expect: [401, 403, 400, 400, 404, 404, 403]
+	},
 	// The machine API of sites, scenarios and single devices.
 	{ method: 'GET', path: () => `/api/v1/sites/${SITE}`, expect: [401, 200, 200, 200, 404, 404, 200] },
 	{

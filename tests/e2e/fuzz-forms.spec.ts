@@ -50,6 +50,29 @@ type Target = {
 const noAddress = (entries: Entry[]): Entry[] =>
 	entries.map(([k, v]) => [k, typeof v === 'string' ? v.replaceAll('@', '＠') : v]);
 
+/** An air design the action accepts (invented pump table), sent against a stale revision. */
+const FUZZ_DESIGN = {
+	airlifts: [
+		{
+			name: 'Fuzz air-lift (invented)',
+			riserInnerDiameter: 25,
+			riserInnerDiameterUnit: 'mm',
+			submergence: 0.7,
+			submergenceUnit: 'm',
+			lift: 0.3,
+			liftUnit: 'm',
+			waterFlow: 20,
+			waterFlowUnit: 'lpm'
+		}
+	],
+	pump: {
+		name: 'Fuzz pump (invented)',
+		points: [
+			{ pressureKPa: 0, airLpm: 60 },
+			{ pressureKPa: 20, airLpm: 30 }
+		]
+	}
+};
 const ws = () => `/w/${made.workspace}`;
 const site = () => `/sites/${made.site}`;
 const bill = () => ({
@@ -137,6 +160,11 @@ const TARGETS: Record<string, Target> = {
 			'oneOffCosts.0.amount': '250',
 			'oneOffCosts.0.note': ''
 		})
+	},
+	// A stale revision: the design is checked in full and then refused as changed by someone else.
+	'/sites/[siteId]/scenarios/[scenarioId]?/airDesign': {
+		path: () => `${site()}/scenarios/${made.scenario}?/airDesign`,
+		fields: () => ({ revision: '0', design: JSON.stringify(FUZZ_DESIGN) })
 	},
 	'/sites/[siteId]/bills?/add': { path: () => `${site()}/bills?/add`, fields: bill },
 	'/sites/[siteId]/bills?/import': {

@@ -6,6 +6,8 @@ import { readDetailsForm } from '$lib/server/sites/scenario-details-form';
 import { saveScenarioDetails } from '$lib/server/sites/scenario-details';
 import { chooserFor, tariffChoices, TARIFF_UNAVAILABLE, usableTariff } from '$lib/server/tariffs/usable';
 import { needsElectricalCaution } from '$lib/cautions';
+import { workspaceAirPumps } from '$lib/server/sites/air-design.service';
+import { airDesignFormAction } from '$lib/server/sites/air-design-form';
 import type { Actions, PageServerLoad } from './$types';
 
 /** The scenario's own tariff in words for everyone who may read the page; null: the site's tariff. */
@@ -42,7 +44,11 @@ export const load = (async (event) => {
 		caution: needsElectricalCaution(specs),
 		// The stored air design and the site's water: the page works out the delivery of the list as edited.
 		delivery: deliveryInputs(scenario.airDesign, site.water),
-		canEdit
+		canEdit,
+		// The air designer: the saved design, the site's water, the workspace's pumps (members only).
+		airDesign: scenario.airDesign ?? null,
+		water: site.water,
+		airPumps: access.viaGrant ? [] : await workspaceAirPumps(site.workspaceId)
 	};
 }) satisfies PageServerLoad;
 
@@ -68,5 +74,11 @@ export const actions = {
 			});
 		if ('missing' in saved) error(404, 'Not found');
 		return { saved: true, revision: saved.revision };
+	},
+	/** "Add to scenario" of the air designer: the design, and its pumps into the list, against the revision. */
+	airDesign: async (event) => {
+		const access = await requireScenarioAccess(event, event.params.scenarioId, 'editor');
+		if (access.scenario.siteId !== event.params.siteId) error(404, 'Not found');
+		return airDesignFormAction(access, await event.request.formData());
 	}
 } satisfies Actions;
