@@ -7,10 +7,10 @@ for (const [w, h, tag] of [[1366, 900, 'desk'], [390, 844, 'phone']]) {
 	const page = await ctx.newPage();
 	await page.goto(base + '/signin');
 	await page.waitForSelector('body[data-hydrated]');
-	await page.getByLabel('Email').fill('owner@example.org');
+	await page.locator('#pw-email').fill('owner@example.org');
 	await page.getByLabel('Password', { exact: true }).fill('runrate-demo-2027');
-	await page.getByRole('button', { name: /sign in/i }).click();
-	await page.waitForURL((u) => !u.pathname.startsWith('/signin'));
+	await page.getByRole('button', { name: 'Sign in', exact: true }).click();
+	await page.getByRole('button', { name: 'Sign out', includeHidden: true }).first().waitFor({ state: 'attached' });
 	for (const p of pages) {
 		const [name, path] = p.split('=');
 		await page.goto(base + path);

@@ -86,7 +86,7 @@ test('on a scenario: two air-lifts, "Add to scenario", and the air pumps are in 
 	await workedExample(page);
 	await page.getByRole('button', { name: 'Add an air-lift' }).click();
 	const second = page.getByRole('group', { name: 'Air-lift 2', exact: true });
-	await second.getByRole('textbox', { name: 'Name' }).fill('Sump riser');
+	await second.getByRole('textbox', { name: 'Air-lift name', exact: true }).fill('Sump riser');
 	await expect(page.getByRole('rowheader', { name: '1 × Sump riser' })).toBeAttached();
 	const pumps = (await page.getByTestId('pump-count').innerText()).trim();
 	const pumpName = pumps.replace(/^\d+ × /, '');
@@ -109,7 +109,9 @@ test('on a scenario: two air-lifts, "Add to scenario", and the air pumps are in 
 	await gotoReady(page, `/sites/${siteId}/scenarios/${scenarioId}`);
 	await expect(page.getByRole('group', { name: 'Air-lift 2', exact: true })).toBeVisible();
 	await expect(
-		page.getByRole('group', { name: 'Air-lift 2', exact: true }).getByRole('textbox', { name: 'Name' })
+		page
+			.getByRole('group', { name: 'Air-lift 2', exact: true })
+			.getByRole('textbox', { name: 'Air-lift name', exact: true })
 	).toHaveValue('Sump riser');
 	await expect(page.getByRole('group', { name: `${pumpName}, device 1 of 1` })).toBeVisible();
 

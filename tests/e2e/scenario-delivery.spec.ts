@@ -84,18 +84,12 @@ test.describe('what each scenario delivers', () => {
 
 		// Design one air-lift with the designer on the scenario page, and add it to the scenario.
 		await gotoReady(page, `/sites/${siteId}/scenarios/${proposal}`);
-		const riser = page.getByLabel('Riser inner diameter', { exact: true });
-		if (!(await riser.isVisible())) {
-			await page
-				.locator('summary, button')
-				.filter({ hasText: /air.{0,20}design|designer/i })
-				.first()
-				.click();
-		}
-		await riser.fill('50');
-		await page.getByLabel('Submergence', { exact: true }).fill('0.9');
-		await page.getByLabel('Lift', { exact: true }).fill('0.25');
-		await page.getByLabel('Water flow', { exact: true }).fill('40');
+		await page.getByText('Air and water designer: air-lifts, aeration and air pumps').click();
+		const airlift = page.getByRole('group', { name: 'Air-lift 1', exact: true });
+		await airlift.getByRole('textbox', { name: 'Riser inner diameter', exact: true }).fill('50');
+		await airlift.getByRole('textbox', { name: 'Submergence', exact: true }).fill('0.9');
+		await airlift.getByRole('textbox', { name: 'Lift', exact: true }).fill('0.25');
+		await airlift.getByRole('textbox', { name: 'Target water flow per air-lift', exact: true }).fill('40');
 		await page.getByRole('button', { name: 'Add to scenario', exact: true }).click();
 		const save = page.getByRole('button', { name: 'Save the list' });
 		await expect(page.getByText(/Air pump|air pump/).first()).toBeVisible();
