@@ -31,9 +31,6 @@ export type AirDesignSaved =
 /** The most rows a scenario holds (the equipment list's own limit). */
 const MAX_DEVICES = 2000;
 
-/** A workspace's own air pumps from their data sheets (the workspace's pump list). */
-export const workspaceAirPumps = (workspaceId: string) => listAirPumps(workspaceId);
-
 /** The design and its figures in the site's water, as the designer shows them. */
 export function workOut(site: SiteRow, design: AirDesign): AirDesignResult {
 	return designAir(design, designConditions(site.water, design.aeration?.tankId ?? null));
@@ -58,7 +55,7 @@ async function problems(access: AirDesignAccess, design: AirDesign, result: AirD
 	if (source?.kind === 'typical' && !keptAsSaved && !TYPICAL_AIR_PUMPS.some((p) => p.id === source.id))
 		issues.push({ path: 'pumpSource', message: 'That is not one of the typical air pumps' });
 	if (source?.kind === 'workspace' && !keptAsSaved) {
-		const own = access.viaGrant ? [] : await workspaceAirPumps(access.site.workspaceId);
+		const own = access.viaGrant ? [] : await listAirPumps(access.site.workspaceId);
 		if (!own.some((p) => p.id === source.id))
 			issues.push({ path: 'pumpSource', message: "That pump is not one of this workspace's air pumps" });
 	}

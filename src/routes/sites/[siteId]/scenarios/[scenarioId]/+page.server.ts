@@ -6,7 +6,7 @@ import { readDetailsForm } from '$lib/server/sites/scenario-details-form';
 import { saveScenarioDetails } from '$lib/server/sites/scenario-details';
 import { chooserFor, tariffChoices, TARIFF_UNAVAILABLE, usableTariff } from '$lib/server/tariffs/usable';
 import { needsElectricalCaution } from '$lib/cautions';
-import { workspaceAirPumps } from '$lib/server/sites/air-design.service';
+import { listAirPumps } from '$lib/server/workspaces/air-pumps';
 import { airDesignFormAction } from '$lib/server/sites/air-design-form';
 import type { Actions, PageServerLoad } from './$types';
 
@@ -48,7 +48,7 @@ export const load = (async (event) => {
 		// The air designer: the saved design, the site's water, the workspace's pumps (members only).
 		airDesign: scenario.airDesign ?? null,
 		water: site.water,
-		airPumps: access.viaGrant ? [] : await workspaceAirPumps(site.workspaceId)
+		airPumps: access.viaGrant ? [] : await listAirPumps(site.workspaceId)
 	};
 }) satisfies PageServerLoad;
 
