@@ -139,7 +139,12 @@ try {
 				const r = await timed(() =>
 					run(
 						'npx',
-						['playwright', 'test', ...(process.env.E2E_GREP ? ['--grep', process.env.E2E_GREP] : [])],
+						[
+							'playwright',
+							'test',
+							...(process.env.E2E_GREP ? ['--grep', process.env.E2E_GREP] : []),
+							...(process.env.E2E_REPEAT ? ['--repeat-each', process.env.E2E_REPEAT] : [])
+						],
 						{ env: { ...env, PLAYWRIGHT_JSON_OUTPUT_NAME: out } }
 					)
 				);

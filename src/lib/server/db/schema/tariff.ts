@@ -28,6 +28,8 @@ export const tariffs = pgTable(
 		holidays: jsonb('holidays').$type<HolidayRule>(),
 		description: text('description'),
 		copiedFromId: uuid('copied_from_id'),
+		/** The open rate database's label of the rate this tariff was imported from (null: typed in). */
+		urdbLabel: text('urdb_label'),
 		revision: integer('revision').notNull().default(0),
 		createdBy: text('created_by').references(() => users.id, { onDelete: 'set null' }),
 		createdAt: createdAt(),
@@ -35,7 +37,8 @@ export const tariffs = pgTable(
 	},
 	(t) => [
 		index('tariff_workspace_idx').on(t.workspaceId),
-		index('tariff_country_idx').on(t.country, t.region)
+		index('tariff_country_idx').on(t.country, t.region),
+		index('tariff_urdb_label_idx').on(t.urdbLabel)
 	]
 );
 
