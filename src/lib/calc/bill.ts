@@ -19,6 +19,8 @@ export function tieredAmount(tiers: readonly Tier[], kwh: number): number {
 export interface BillInput {
 	days: number;
 	kwh: number;
+	/** This period's part of a yearly minimum (see `yearlyMinimumTopUps`); 0 when none. */
+	yearlyMinimum?: number;
 	/** Exact amount of each energy and demand charge, in the tariff's order. */
 	energy: readonly number[];
 	demand: readonly number[];
@@ -27,7 +29,7 @@ export interface BillInput {
 export interface Bill {
 	charges: ChargeLine[];
 	total: number;
-	/** Exact fixed charges and the minimum line, which no device causes. */
+	/** Exact fixed charges and the minimum lines, which no device causes. */
 	shared: number;
 	/** Sum of the tax percents as a fraction, for allocating taxes. */
 	taxRate: number;
@@ -36,9 +38,11 @@ export interface Bill {
 /**
  * The charge lines of one billing period. Each line is rounded to cents on its own; the subtotal is
  * the sum of the rounded fixed, energy, demand and rider lines, as the bill shows them. Below
- * `minimumMonthly`, a minimum line adds the difference. Each tax is its percent of that subtotal
- * (minimum included); taxes do not compound. The total is the sum of the rounded lines.
- * Fixed: `perMonth` once per billing period, `perDay` × its days. Riders: per kWh on all kWh.
+ * the floor — the larger of `minimumMonthly` and `minimumPerDay` × the days — a minimum line adds the
+ * difference; a yearly minimum's top-up, when this period closes a year short of it, is one more line.
+ * Each tax is its percent of that subtotal (minimums included); taxes do not compound. The total is
+ * the sum of the rounded lines. Fixed: `perMonth` once per billing period, `perDay` × its days,
+ * `perYear` a twelfth. Riders: per kWh on all kWh.
  */
 export function billLines(tariff: Tariff, input: BillInput): Bill {
 	const charges: ChargeLine[] = [];
@@ -46,7 +50,12 @@ export function billLines(tariff: Tariff, input: BillInput): Bill {
 		charges.push({ kind, label, amount: roundMoney(exact) });
 	let fixed = 0;
 	for (const charge of tariff.fixedCharges) {
-		const exact = charge.perMonth !== undefined ? charge.perMonth : charge.perDay * input.days;
+		const exact =
+			charge.perMonth !== undefined
+				? charge.perMonth
+				: charge.perDay !== undefined
+					? charge.perDay * input.days
+					: (charge.perYear ?? 0) / 12;
 		fixed += exact;
 		add('fixed', charge.label, exact);
 	}
@@ -55,12 +64,40 @@ export function billLines(tariff: Tariff, input: BillInput): Bill {
 	for (const rider of tariff.riders) add('rider', rider.label, rider.perKwh * input.kwh);
 	const subtotal = roundMoney(charges.reduce((sum, line) => sum + line.amount, 0));
 	let minimum = 0;
-	if (tariff.minimumMonthly != null && subtotal < tariff.minimumMonthly) {
-		minimum = roundMoney(tariff.minimumMonthly - subtotal);
+	const floor = Math.max(tariff.minimumMonthly ?? 0, (tariff.minimumPerDay ?? 0) * input.days);
+	const hasFloor = tariff.minimumMonthly != null || tariff.minimumPerDay != null;
+	if (hasFloor && subtotal < floor) {
+		minimum = roundMoney(floor - subtotal);
 		add('minimum', 'Minimum bill', minimum);
+	}
+	if (input.yearlyMinimum) {
+		const topUp = roundMoney(input.yearlyMinimum);
+		minimum += topUp;
+		add('minimum', 'Yearly minimum', topUp);
 	}
 	for (const tax of tariff.taxes) add('tax', tax.label, ((subtotal + minimum) * tax.percent) / 100);
 	const taxRate = tariff.taxes.reduce((sum, tax) => sum + tax.percent / 100, 0);
 	const total = roundMoney(charges.reduce((sum, line) => sum + line.amount, 0));
 	return { charges, total, shared: fixed + minimum, taxRate };
+}
+
+/**
+ * The yearly minimum's top-up of each billing period: the calculation's periods in runs of 12 (the
+ * last run may be shorter, its floor prorated n/12); a run whose bills before taxes add up to less
+ * than the floor gets the difference on its last period. `subtotals` are each period's bill before
+ * taxes (fixed charges and monthly minimums included).
+ */
+export function yearlyMinimumTopUps(
+	perYear: number | null | undefined,
+	subtotals: readonly number[]
+): number[] {
+	const topUps = subtotals.map(() => 0);
+	if (perYear == null) return topUps;
+	for (let start = 0; start < subtotals.length; start += 12) {
+		const run = subtotals.slice(start, start + 12);
+		const floor = (perYear * run.length) / 12;
+		const billed = run.reduce((sum, value) => sum + value, 0);
+		if (billed < floor) topUps[start + run.length - 1] = roundMoney(floor - billed);
+	}
+	return topUps;
 }

@@ -1,5 +1,7 @@
 import { type DemandShare, allocate, loadKwh, loadWeighted } from './allocation';
-import { billLines, tieredAmount } from './bill';
+import { billLines, yearlyMinimumTopUps } from './bill';
+import { type MeasuredPeak, demandAmount, ratchetFloorKw } from './demand-charges';
+import { priceEnergy } from './energy-charges';
 import { type SpanDays, buildCalendar } from './calendar';
 import { DemandMeter } from './demand';
 import { UsageMeter } from './energy';
@@ -20,7 +22,34 @@ interface Context {
 	demand: DemandMeter;
 }
 
-function periodResult(context: Context, span: BillingSpan, days: SpanDays): PeriodResult {
+/** Days of a billing period in some months (all its days when `months` is absent). */
+function daysInMonths(context: Context, days: SpanDays) {
+	return (months: readonly number[] | undefined) => {
+		if (!months) return days.days;
+		let count = 0;
+		for (const [classIndex, n] of days.classCounts) {
+			const month = context.rates.calendar.classes[classIndex]?.month ?? 0;
+			if (months.includes(month)) count += n;
+		}
+		return count;
+	};
+}
+
+interface Priced {
+	result: PeriodResult;
+	/** Each demand charge's measured peak this period, for later periods' ratchets. */
+	peaks: MeasuredPeak[];
+	/** The bill before taxes, for a yearly minimum. */
+	subtotal: number;
+}
+
+function periodResult(
+	context: Context,
+	span: BillingSpan,
+	days: SpanDays,
+	earlier: readonly MeasuredPeak[][],
+	yearlyMinimum = 0
+): Priced {
 	const { request, loads, rates, usage, demand } = context;
 	const { tariff } = request;
 	const spanUsage = usage.spanUsage(days);
@@ -28,39 +57,46 @@ function periodResult(context: Context, span: BillingSpan, days: SpanDays): Peri
 	const groups: DeviceLoad[] = loads.groups.map((group, g) => ({ ...group, group: g }));
 	const sum = (of: (group: DeviceLoad) => number) => groups.reduce((total, group) => total + of(group), 0);
 	const kwh = sum((group) => loadKwh(group, spanUsage));
-	const tierRates: Array<number | null> = [];
-	const energy = tariff.energyCharges.map((charge, e) => {
-		const weighted = sum((group) => loadWeighted(group, spanUsage, e));
-		if (charge.type !== 'tiered') {
-			tierRates.push(null);
-			return weighted;
-		}
-		const amount = tieredAmount(charge.tiers, weighted);
-		tierRates.push(weighted > 0 ? amount / weighted : 0);
-		return amount;
-	});
+	const sums = rates.columns.map((_, c) => sum((group) => loadWeighted(group, spanUsage, c)));
+	const energy = priceEnergy(tariff, rates.columns, sums, daysInMonths(context, days), days.days);
+	const month = Number(span.from.slice(5, 7));
+	const peaks: MeasuredPeak[] = [];
+	const billed: number[] = [];
+	let unallocated = 0;
 	const demandShares: DemandShare[] = tariff.demandCharges.map((charge, k) => {
 		const peak = demand.spanPeak(days, (c) => rates.demandMask(k, c), charge.intervalMinutes);
-		const mayRun = peak ? loads.groups.map((_, g) => demand.mayRunAt(g, peak)) : [];
-		return { amount: peak ? charge.perKw * peak.kw : 0, peak, mayRun };
+		peaks.push({ month, kw: peak ? peak.kw : null });
+		const floorKw = ratchetFloorKw(
+			charge,
+			earlier.map((row) => row[k] ?? { month, kw: null })
+		);
+		const amount = demandAmount(charge, Math.max(peak?.kw ?? 0, floorKw));
+		billed.push(amount);
+		if (peak && peak.kw > 0)
+			return { amount, peak, mayRun: loads.groups.map((_, g) => demand.mayRunAt(g, peak)) };
+		// A ratchet can bill demand in a period that measured none: no device caused it, all share it.
+		unallocated += amount;
+		return { amount: 0, peak: null, mayRun: [] };
 	});
 	const bill = billLines(tariff, {
 		days: days.days,
 		kwh,
-		energy,
-		demand: demandShares.map((share) => share.amount)
+		energy: energy.amounts,
+		demand: billed,
+		yearlyMinimum
 	});
+	const shared = bill.shared + unallocated;
 	const shares = allocate(loads.devices, spanUsage, {
-		tierRates,
+		tierRates: energy.columnRates,
 		ridersPerKwh: tariff.riders.reduce((sum, rider) => sum + rider.perKwh, 0),
 		demand: demandShares,
 		taxRate: bill.taxRate,
-		devicesTotal: bill.total - roundMoney(bill.shared * (1 + bill.taxRate))
+		devicesTotal: bill.total - roundMoney(shared * (1 + bill.taxRate))
 	});
 	// What the devices' shares leave of the total; it differs from the rounded shared cost only when no
 	// device used anything, and then the shared cost takes the whole bill.
 	const deviceCents = shares.reduce((sum, share) => sum + Math.round(share.cost * 100), 0);
-	return {
+	const result: PeriodResult = {
 		label: span.label,
 		from: span.from,
 		to: span.to,
@@ -76,6 +112,8 @@ function periodResult(context: Context, span: BillingSpan, days: SpanDays): Peri
 			...(shares[i] ?? { kwh: 0, cost: 0 })
 		}))
 	};
+	const taxes = bill.charges.reduce((sum, line) => sum + (line.kind === 'tax' ? line.amount : 0), 0);
+	return { result, peaks, subtotal: roundMoney(bill.total - taxes) };
 }
 
 /**
@@ -97,11 +135,26 @@ export function calculate(request: CalculateRequest): CalculateResponse {
 		usage: new UsageMeter(calendar, loads, profiles, rates),
 		demand: new DemandMeter(calendar, profiles, loads.groups)
 	};
-	const periods = spans.map((span, i) => {
+	const price = (i: number, earlier: MeasuredPeak[][], yearlyMinimum = 0) => {
+		const span = spans[i];
 		const days = calendar.spans[i];
-		if (!days) throw new Error('Calendar is missing a billing period');
-		return periodResult(context, span, days);
+		if (!span || !days) throw new Error('Calendar is missing a billing period');
+		return periodResult(context, span, days, earlier, yearlyMinimum);
+	};
+	// In order: a ratchet looks back at the peaks of the periods before.
+	const history: MeasuredPeak[][] = [];
+	const priced = spans.map((_, i) => {
+		const period = price(i, history);
+		history.push(period.peaks);
+		return period;
 	});
+	const topUps = yearlyMinimumTopUps(
+		request.tariff.minimumPerYear,
+		priced.map((period) => period.subtotal)
+	);
+	const periods = priced.map((period, i) =>
+		topUps[i] ? price(i, history.slice(0, i), topUps[i]).result : period.result
+	);
 	return {
 		currency: request.tariff.currency,
 		periods,

@@ -7,10 +7,11 @@ import type { DayProfile } from './schedule';
 /**
  * The load groups' energy over a billing period, as sums from which every device's figures follow
  * linearly: a device of group g with running kW R and standby kW S uses S·hours[g] + (R − S)·onHours[g]
- * kWh, and energy charge e costs it S·weighted[i] + (R − S)·onWeighted[i] with i = g·charges + e (for
- * a tiered charge those sums are its kWh in the charge, not money).
+ * kWh, and energy column e (see `EnergyColumn`) costs it S·weighted[i] + (R − S)·onWeighted[i] with
+ * i = g·charges + e (for a column counting kWh those sums are its kWh, not money).
  */
 export interface SpanUsage {
+	/** The number of energy columns. */
 	charges: number;
 	hours: Float64Array;
 	onHours: Float64Array;
@@ -35,7 +36,7 @@ export class UsageMeter {
 		private readonly profiles: ProfileBook,
 		private readonly rates: RateBook
 	) {
-		this.charges = rates.tariff.energyCharges.length;
+		this.charges = rates.columns.length;
 	}
 
 	/** Σ on-fraction × price × hours over a day: the price the running part of a profile meets. */

@@ -1,8 +1,7 @@
 import type { Calendar, DayClass } from './calendar';
 import { INTERVAL_HOURS, daysMatch, windowMask } from './clock';
-import type { EnergyCharge, Tariff } from './tariff.schema';
-
-type TouCharge = Extract<EnergyCharge, { type: 'tou' }>;
+import { type EnergyColumn, energyColumns } from './rate-columns';
+import type { Tariff, TouCharge } from './tariff.schema';
 
 function monthMask(months: readonly number[] | undefined): Uint8Array {
 	const mask = new Uint8Array(13);
@@ -19,13 +18,17 @@ export class RateBook {
 	private readonly weights: Array<Array<number | Float64Array | undefined>>;
 	private readonly masks: Array<Array<Uint8Array | null | undefined>>;
 	private readonly touPrices = new Map<string, Float64Array>();
+	private readonly touSlots = new Map<string, Uint8Array>();
 	private readonly totals = new Map<Float64Array, number>();
+	/** The sums an energy charge needs (see `EnergyColumn`); weights are per column. */
+	readonly columns: readonly EnergyColumn[];
 
 	constructor(
 		readonly tariff: Tariff,
-		private readonly calendar: Calendar
+		readonly calendar: Calendar
 	) {
-		this.weights = tariff.energyCharges.map(() => new Array(calendar.classes.length));
+		this.columns = energyColumns(tariff);
+		this.weights = this.columns.map(() => new Array(calendar.classes.length));
 		this.masks = tariff.demandCharges.map(() => new Array(calendar.classes.length));
 	}
 
@@ -58,24 +61,67 @@ export class RateBook {
 	}
 
 	/**
-	 * Weights of an energy charge on each interval of a day class: its price per kWh (flat, or
-	 * time-of-use: the first matching period of the month's season, else `otherPerKwh`), or for a tiered
-	 * charge 1 where it applies (its price depends on the period's total). A number when equal all day;
-	 * a charge with `months` (any type, time-of-use included) weighs 0 outside them.
+	 * Each interval's slot in a tiered time-of-use season: the first matching period's index, else
+	 * `periods.length` (the hours of no period).
+	 */
+	private slotsOf(index: number, charge: TouCharge, season: number, day: DayClass): Uint8Array {
+		const weekend = this.pricesAsWeekend(day);
+		const key = `${index}|${season}|${weekend}|${day.shape.key}`;
+		const known = this.touSlots.get(key);
+		if (known) return known;
+		const periods = charge.seasons[season]?.periods ?? [];
+		const slots = new Uint8Array(day.shape.minutes.length).fill(periods.length);
+		for (let p = periods.length - 1; p >= 0; p--) {
+			const period = periods[p];
+			if (!period || !daysMatch(period.days, weekend)) continue;
+			const mask = windowMask(period.windows, day.shape);
+			for (let i = 0; i < slots.length; i++) if (mask[i] === 1) slots[i] = p;
+		}
+		this.touSlots.set(key, slots);
+		return slots;
+	}
+
+	private slotWeights(index: number, column: Extract<EnergyColumn, { kind: 'tou-kwh' }>, day: DayClass) {
+		const charge = this.tariff.energyCharges[column.charge] as TouCharge;
+		const season = charge.seasons.findIndex((entry) => entry.months.includes(day.month));
+		if (season !== column.season) return 0;
+		const slots = this.slotsOf(column.charge, charge, season, day);
+		const key = `slot|${index}|${this.pricesAsWeekend(day)}|${day.shape.key}`;
+		let weights = this.touPrices.get(key);
+		if (!weights) {
+			weights = Float64Array.from(slots, (slot) => (slot === column.slot ? 1 : 0));
+			this.touPrices.set(key, weights);
+		}
+		return weights;
+	}
+
+	/**
+	 * Weights of an energy column on each interval of a day class: its price per kWh (flat, or
+	 * time-of-use: the first matching period of the month's season, else `otherPerKwh`), or 1 where a
+	 * tiered charge, or a tiered time-of-use season's period, counts kWh (its price depends on the
+	 * billing period's total). A number when equal all day; a charge with `months` (any type,
+	 * time-of-use included) weighs 0 outside them.
 	 */
 	energyWeights(index: number, classIndex: number): number | Float64Array {
 		const known = this.weights[index]?.[classIndex];
 		if (known !== undefined) return known;
-		const charge = this.tariff.energyCharges[index];
+		const column = this.columns[index];
+		const charge = column && this.tariff.energyCharges[column.charge];
 		const day = this.calendar.classes[classIndex];
-		if (!charge || !day) return 0;
+		if (!column || !charge || !day) return 0;
 		let weights: number | Float64Array;
 		if (charge.months && !charge.months.includes(day.month)) weights = 0;
-		else if (charge.type === 'tou') weights = this.touWeights(index, charge, day);
+		else if (column.kind === 'tou-kwh') weights = this.slotWeights(index, column, day);
+		else if (charge.type === 'tou') weights = this.touWeights(column.charge, charge, day);
 		else weights = charge.type === 'flat' ? charge.perKwh : 1;
 		const row = this.weights[index];
 		if (row) row[classIndex] = weights;
 		return weights;
+	}
+
+	/** The first column of energy charge e (its only one unless it is a tiered time-of-use charge). */
+	firstColumn(charge: number): number {
+		return this.columns.findIndex((column) => column.charge === charge);
 	}
 
 	/** Σ weight × hours over one day of the class. */

@@ -117,7 +117,7 @@ describe('tariff fields', () => {
 
 	it('reports a fixed charge given both per month and per day', () => {
 		expect(issuesOf({ fixedCharges: [{ label: 'Basic', perMonth: 1, perDay: 1 }] })).toEqual([
-			{ path: 'fixedCharges.0', message: 'Give a fixed charge per month or per day (not both)' }
+			{ path: 'fixedCharges.0', message: 'Give a fixed charge per month, per day or per year (one of them)' }
 		]);
 	});
 

@@ -103,7 +103,7 @@ describe('issues from the live check', () => {
 	it('keeps the choice message when a fixed charge gives both amounts', () => {
 		const tariff = { ...blankTariff(), fixedCharges: [{ label: 'Demo', perMonth: 1, perDay: 1 }] };
 		expect(tariffIssues(tariff as unknown as TariffInput)).toEqual([
-			{ path: 'fixedCharges.0', message: 'Give a fixed charge per month or per day (not both)' }
+			{ path: 'fixedCharges.0', message: 'Give a fixed charge per month, per day or per year (one of them)' }
 		]);
 	});
 });

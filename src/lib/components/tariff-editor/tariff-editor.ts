@@ -13,7 +13,7 @@ export function writeDraft<T extends object>(target: T, key: keyof T & string, d
 	(target as Record<string, unknown>)[key] = draft;
 }
 
-const FIXED_UNION = 'Give a fixed charge per month or per day';
+const FIXED_UNION = 'Give a fixed charge per month, per day or per year';
 
 /**
  * Every problem with the tariff as the editor holds it, at dotted paths. A fixed charge whose one

@@ -82,8 +82,9 @@ export function scenarioFigures(
 			figures.hours.push(sums.hours[g] ?? 0);
 			figures.onHours.push(sums.onHours[g] ?? 0);
 			for (const [e, tou] of figures.tou) {
-				tou.weighted.push(sums.weighted[g * sums.charges + e] ?? 0);
-				tou.onWeighted.push(sums.onWeighted[g * sums.charges + e] ?? 0);
+				const column = g * sums.charges + rates.firstColumn(e);
+				tou.weighted.push(sums.weighted[column] ?? 0);
+				tou.onWeighted.push(sums.onWeighted[column] ?? 0);
 			}
 		});
 		tariff.demandCharges.forEach((charge, k) => {

@@ -70,11 +70,11 @@ function writeBlock(out: SheetWriter, use: TariffUse, start: number): { cells: T
 	const fixed = tariff.fixedCharges.map((charge) =>
 		charge.perMonth !== undefined
 			? { perMonth: rows.put('Fixed', charge.label, charge.perMonth, formats.money, 'per month') }
-			: { perDay: rows.put('Fixed', charge.label, charge.perDay, formats.money, 'per day') }
+			: { perDay: rows.put('Fixed', charge.label, charge.perDay ?? 0, formats.money, 'per day') }
 	);
 	const energy = tariff.energyCharges.map((charge) => rows.energy(charge));
 	const demand = tariff.demandCharges.map((charge) =>
-		rows.put('Demand', charge.label, charge.perKw, formats.rate, 'per kW', demandText(charge, currency))
+		rows.put('Demand', charge.label, charge.perKw ?? 0, formats.rate, 'per kW', demandText(charge, currency))
 	);
 	const riders = tariff.riders.map((rider) =>
 		rows.put('Rider', rider.label, rider.perKwh, formats.rate, 'per kWh', riderText(rider.perKwh, currency))

@@ -19,6 +19,9 @@ export type DemandInput = NonNullable<TariffInput['demandCharges']>[number];
 /** "$12.50 a month" or "$0.45 a day". */
 export function fixedText(charge: FixedInput, currency: string): string {
 	if (charge.perMonth !== undefined) return `${moneyText(charge.perMonth, currency)} a month`;
+	if (charge.perYear !== undefined) {
+		return `${moneyText(charge.perYear, currency)} a year (a twelfth each billing period)`;
+	}
 	return `${moneyText(charge.perDay ?? 0, currency)} a day`;
 }
 
@@ -100,8 +103,37 @@ export function demandText(charge: DemandInput, currency: string): string {
 	}
 	if (limitsMonths(charge.months)) limits.push(monthsText(charge.months));
 	const minutes = charge.intervalMinutes ?? 15;
-	const base = `${moneyText(charge.perKw, currency)} per kW of the highest ${minutes}-minute demand in the billing period`;
-	return limits.length > 0 ? `${base} (${limits.join(', ')})` : base;
+	const of = `of the highest ${minutes}-minute demand in the billing period`;
+	const base = charge.tiers
+		? `${demandTiersText(charge.tiers, currency)}, ${of}`
+		: `${moneyText(charge.perKw ?? 0, currency)} per kW ${of}`;
+	const text = limits.length > 0 ? `${base} (${limits.join(', ')})` : base;
+	return charge.ratchet ? `${text}; ${ratchetText(charge.ratchet)}` : text;
+}
+
+/** "$10.00 per kW for the first 100 kW, then $15.00 per kW". */
+function demandTiersText(tiers: NonNullable<DemandInput['tiers']>, currency: string): string {
+	let fromKw = 0;
+	return tiers
+		.map((tier, i) => {
+			const rate = `${moneyText(tier.perKw, currency)} per kW`;
+			if (tier.uptoKw === null) return i === 0 ? rate : `then ${rate}`;
+			const part =
+				i === 0
+					? `${rate} for the first ${figureText(tier.uptoKw)} kW`
+					: `${rate} from ${figureText(fromKw)} to ${figureText(tier.uptoKw)} kW`;
+			fromKw = tier.uptoKw;
+			return part;
+		})
+		.join(', ');
+}
+
+/** "billed on at least 80 % of the highest peak of the 11 months before" (or of listed months). */
+function ratchetText(ratchet: NonNullable<DemandInput['ratchet']>): string {
+	const of = ratchet.months
+		? `of ${monthsText(ratchet.months)} in the 11 months before`
+		: `of the ${ratchet.monthsBack === 1 ? 'month' : `${ratchet.monthsBack} months`} before`;
+	return `billed on at least ${figureText(ratchet.percent)} % of the highest peak ${of}`;
 }
 
 /** A rider on all kWh; a negative one is a credit. */

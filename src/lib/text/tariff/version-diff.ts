@@ -46,7 +46,7 @@ export function describeTariffDiff(before: AnyTariff, after: AnyTariff): string[
 			added: (charge) => `Added demand charge ${charge.label} ${demandText(charge, cb)}`,
 			removed,
 			changed: (x, y) => [
-				...(x.perKw !== y.perKw
+				...(x.perKw !== undefined && y.perKw !== undefined && x.perKw !== y.perKw
 					? [`${y.label}: ${moneyText(x.perKw, ca)} → ${moneyText(y.perKw, cb)} per kW`]
 					: []),
 				...(demandText({ ...x, perKw: y.perKw }, cb) !== demandText(y, cb)
