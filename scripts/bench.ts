@@ -199,6 +199,67 @@ await time('parse + calculate(), 100 devices', () =>
 	calculate(calculateRequestSchema.parse(calculation(100)))
 );
 
+// A year of 15-minute meter data (35,040 values, 2027 in UTC) on a tiered time-of-use tariff with a
+// ratcheted whole-month demand charge: the size the "which tariff" comparison prices per tariff.
+const next = random(7);
+const meterTariff: TariffInput = {
+	currency: 'USD',
+	holidaysAsWeekends: false,
+	energyCharges: [
+		{
+			label: 'Energy',
+			type: 'tou',
+			seasons: [
+				{
+					months: [6, 7, 8, 9],
+					tierLimitsKwh: [1000],
+					periods: [
+						{
+							label: 'On-peak',
+							perKwh: 0.3,
+							abovePerKwh: [0.36],
+							days: 'weekdays',
+							windows: [{ start: '14:00', end: '19:00' }]
+						}
+					],
+					otherPerKwh: 0.1,
+					otherAbovePerKwh: [0.13]
+				},
+				{
+					months: [1, 2, 3, 4, 5, 10, 11, 12],
+					tierLimitsKwh: [800],
+					periods: [],
+					otherPerKwh: 0.11,
+					otherAbovePerKwh: [0.14]
+				}
+			]
+		}
+	],
+	demandCharges: [
+		{
+			label: 'Demand',
+			tiers: [
+				{ uptoKw: 50, perKw: 8 },
+				{ uptoKw: null, perKw: 11 }
+			],
+			ratchet: { percent: 80, monthsBack: 11 }
+		}
+	]
+};
+const metered = calculateRequestSchema.parse({
+	period: { start: '2027-01', months: 12 },
+	timezone: 'UTC',
+	holidays: null,
+	tariff: meterTariff,
+	equipment: [],
+	meter: {
+		start: '2027-01-01T00:00',
+		intervalMinutes: 15,
+		kwh: Array.from({ length: 35_040 }, () => next() * 3)
+	}
+});
+await time('calculate(), 35,040 meter values, tiered TOU + demand', () => calculate(metered));
+
 const url = process.env.BENCH_URL;
 if (url) {
 	const body = JSON.stringify(calculation(100));

@@ -18,6 +18,8 @@ export interface AllocationInput {
 	taxRate: number;
 	/** What the rounded shares must add up to: the bill's total less its rounded shared cost. */
 	devicesTotal: number;
+	/** Exact costs (taxes included) of loads that are not devices — a meter's measured load — rounded with them. */
+	otherExact?: readonly number[];
 }
 
 /** kWh over the period of a device (or a group's sums): standby all its hours, plus running's extra. */
@@ -45,7 +47,7 @@ export function allocate(
 	devices: readonly DeviceLoad[],
 	usage: SpanUsage,
 	input: AllocationInput
-): Array<{ kwh: number; cost: number }> {
+): { devices: Array<{ kwh: number; cost: number }>; others: number[] } {
 	const exact = devices.map((device) => {
 		const extraKw = device.runKw - device.standbyKw;
 		const kwh = loadKwh(device, usage);
@@ -61,9 +63,10 @@ export function allocate(
 		}
 		return { kwh, cost: cost * (1 + input.taxRate) };
 	});
-	const cents = apportionMoney(
-		exact.map((share) => share.cost),
-		input.devicesTotal
-	);
-	return exact.map((share, i) => ({ kwh: share.kwh, cost: cents[i] ?? 0 }));
+	const others = input.otherExact ?? [];
+	const cents = apportionMoney([...exact.map((share) => share.cost), ...others], input.devicesTotal);
+	return {
+		devices: exact.map((share, i) => ({ kwh: share.kwh, cost: cents[i] ?? 0 })),
+		others: others.map((_, i) => cents[exact.length + i] ?? 0)
+	};
 }

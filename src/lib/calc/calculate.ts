@@ -3,7 +3,8 @@ import { billLines, yearlyMinimumTopUps } from './bill';
 import { type MeasuredPeak, demandAmount, ratchetFloorKw } from './demand-charges';
 import { priceEnergy } from './energy-charges';
 import { type SpanDays, buildCalendar } from './calendar';
-import { DemandMeter } from './demand';
+import { DemandMeter, type PeakPoint } from './demand';
+import { MeterLoad } from './meter';
 import { UsageMeter } from './energy';
 import { type DeviceLoad, ProfileBook, groupLoads } from './loads';
 import { type BillingSpan, billingSpans } from './periods';
@@ -20,6 +21,24 @@ interface Context {
 	rates: RateBook;
 	usage: UsageMeter;
 	demand: DemandMeter;
+	/** The measured load given beside (or in place of) the equipment. */
+	meter: MeterLoad | null;
+}
+
+/** A peak over the intervals `measured` selects: of the equipment, or of the meter plus the equipment. */
+function peakOf(
+	context: Context,
+	days: SpanDays,
+	measured: (classIndex: number) => Uint8Array | null,
+	intervalMinutes: 15 | 60
+): { peak: PeakPoint; meterKw: number } | null {
+	const { meter, demand, loads } = context;
+	if (meter) {
+		const equipment = loads.groups.length > 0 ? (c: number) => demand.dayDemand(c) : null;
+		return meter.peak(days, measured, intervalMinutes, equipment);
+	}
+	const peak = demand.spanPeak(days, measured, intervalMinutes);
+	return peak ? { peak, meterKw: 0 } : null;
 }
 
 /** Days of a billing period in some months (all its days when `months` is absent). */
@@ -50,21 +69,27 @@ function periodResult(
 	earlier: readonly MeasuredPeak[][],
 	yearlyMinimum = 0
 ): Priced {
-	const { request, loads, rates, usage, demand } = context;
+	const { request, loads, rates, usage, demand, meter } = context;
 	const { tariff } = request;
 	const spanUsage = usage.spanUsage(days);
 	// A group's sums behave as one device drawing all its members' kW.
 	const groups: DeviceLoad[] = loads.groups.map((group, g) => ({ ...group, group: g }));
 	const sum = (of: (group: DeviceLoad) => number) => groups.reduce((total, group) => total + of(group), 0);
-	const kwh = sum((group) => loadKwh(group, spanUsage));
-	const sums = rates.columns.map((_, c) => sum((group) => loadWeighted(group, spanUsage, c)));
+	const meterKwh = meter ? meter.kwh(days) : 0;
+	const kwh = sum((group) => loadKwh(group, spanUsage)) + meterKwh;
+	const meterSums = meter?.columnSums(days, rates) ?? null;
+	const sums = rates.columns.map(
+		(_, c) => sum((group) => loadWeighted(group, spanUsage, c)) + (meterSums?.[c] ?? 0)
+	);
 	const energy = priceEnergy(tariff, rates.columns, sums, daysInMonths(context, days), days.days);
 	const month = Number(span.from.slice(5, 7));
 	const peaks: MeasuredPeak[] = [];
 	const billed: number[] = [];
 	let unallocated = 0;
+	let meterDemand = 0;
 	const demandShares: DemandShare[] = tariff.demandCharges.map((charge, k) => {
-		const peak = demand.spanPeak(days, (c) => rates.demandMask(k, c), charge.intervalMinutes);
+		const found = peakOf(context, days, (c) => rates.demandMask(k, c), charge.intervalMinutes);
+		const peak = found?.peak ?? null;
 		peaks.push({ month, kw: peak ? peak.kw : null });
 		const floorKw = ratchetFloorKw(
 			charge,
@@ -72,8 +97,10 @@ function periodResult(
 		);
 		const amount = demandAmount(charge, Math.max(peak?.kw ?? 0, floorKw));
 		billed.push(amount);
-		if (peak && peak.kw > 0)
+		if (peak && peak.kw > 0) {
+			meterDemand += (amount * (found?.meterKw ?? 0)) / peak.kw;
 			return { amount, peak, mayRun: loads.groups.map((_, g) => demand.mayRunAt(g, peak)) };
+		}
 		// A ratchet can bill demand in a period that measured none: no device caused it, all share it.
 		unallocated += amount;
 		return { amount: 0, peak: null, mayRun: [] };
@@ -86,16 +113,25 @@ function periodResult(
 		yearlyMinimum
 	});
 	const shared = bill.shared + unallocated;
-	const shares = allocate(loads.devices, spanUsage, {
+	const ridersPerKwh = tariff.riders.reduce((sum, rider) => sum + rider.perKwh, 0);
+	// The meter's share: its kWh at the rates its intervals met, riders, its kW at each peak, taxes.
+	let meterEnergy = 0;
+	meterSums?.forEach((value, c) => (meterEnergy += value * (energy.columnRates[c] ?? 1)));
+	const meterExact = (meterEnergy + meterKwh * ridersPerKwh + meterDemand) * (1 + bill.taxRate);
+	const { devices: shares, others } = allocate(loads.devices, spanUsage, {
 		tierRates: energy.columnRates,
-		ridersPerKwh: tariff.riders.reduce((sum, rider) => sum + rider.perKwh, 0),
+		ridersPerKwh,
 		demand: demandShares,
 		taxRate: bill.taxRate,
-		devicesTotal: bill.total - roundMoney(shared * (1 + bill.taxRate))
+		devicesTotal: bill.total - roundMoney(shared * (1 + bill.taxRate)),
+		otherExact: meter ? [meterExact] : []
 	});
-	// What the devices' shares leave of the total; it differs from the rounded shared cost only when no
-	// device used anything, and then the shared cost takes the whole bill.
-	const deviceCents = shares.reduce((sum, share) => sum + Math.round(share.cost * 100), 0);
+	// What the loads' shares leave of the total; it differs from the rounded shared cost only when no
+	// load used anything, and then the shared cost takes the whole bill.
+	const deviceCents = [...shares.map((share) => share.cost), ...others].reduce(
+		(sum, cost) => sum + Math.round(cost * 100),
+		0
+	);
 	const result: PeriodResult = {
 		label: span.label,
 		from: span.from,
@@ -103,14 +139,15 @@ function periodResult(
 		days: days.days,
 		hours: days.hours,
 		kwh,
-		peakKw: demand.spanPeak(days, () => WHOLE_DAY, 15)?.kw ?? 0,
+		peakKw: peakOf(context, days, () => WHOLE_DAY, 15)?.peak.kw ?? 0,
 		charges: bill.charges,
 		total: bill.total,
 		sharedCost: roundMoney(bill.total - deviceCents / 100),
 		equipment: request.equipment.map((device, i) => ({
 			name: device.name,
 			...(shares[i] ?? { kwh: 0, cost: 0 })
-		}))
+		})),
+		...(meter ? { meter: { kwh: meterKwh, cost: others[0] ?? 0 } } : {})
 	};
 	const taxes = bill.charges.reduce((sum, line) => sum + (line.kind === 'tax' ? line.amount : 0), 0);
 	return { result, peaks, subtotal: roundMoney(bill.total - taxes) };
@@ -133,7 +170,8 @@ export function calculate(request: CalculateRequest): CalculateResponse {
 		loads,
 		rates,
 		usage: new UsageMeter(calendar, loads, profiles, rates),
-		demand: new DemandMeter(calendar, profiles, loads.groups)
+		demand: new DemandMeter(calendar, profiles, loads.groups),
+		meter: request.meter ? new MeterLoad(request.meter, request.timezone, calendar) : null
 	};
 	const price = (i: number, earlier: MeasuredPeak[][], yearlyMinimum = 0) => {
 		const span = spans[i];

@@ -33,6 +33,8 @@ export interface Calendar {
 	classes: readonly DayClass[];
 	variants: ReadonlyArray<{ weekend: boolean; shape: DayShape }>;
 	spans: readonly SpanDays[];
+	/** Day number → its class index, for every day of the spans (a meter walks the days in order). */
+	classOfDay: ReadonlyMap<number, number>;
 }
 
 const CACHE_SIZE = 64;
@@ -98,7 +100,7 @@ function build(timezone: string, holidays: HolidaySpec | undefined, spans: reado
 		}
 		return { from: span.from, to: span.to, days: to - from + 1, hours, classCounts };
 	});
-	return { classes, variants, spans: spanDays };
+	return { classes, variants, spans: spanDays, classOfDay: dayClass };
 }
 
 /**

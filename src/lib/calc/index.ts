@@ -49,6 +49,8 @@ export type { Period } from './period.schema';
 export { EQUIPMENT_CATEGORIES, equipmentSchema, powerSchema, scheduleSchema } from './equipment.schema';
 export type { Equipment, EquipmentInput, Power, Schedule } from './equipment.schema';
 export { tariffSchema } from './tariff.schema';
+export { MAX_METER_VALUES, type Meter, meterSchema } from './meter.schema';
+export { meterCoverageIssues } from './meter';
 export type { DemandCharge, EnergyCharge, FixedCharge, Tariff, TariffInput } from './tariff.schema';
 export {
 	airSchema,

@@ -3,6 +3,9 @@ import { equipmentSchema } from './equipment.schema';
 import { amount, choice, list, record, text } from './fields';
 import { holidaysSchema, periodSchema, timezoneSchema } from './period.schema';
 import { tariffSchema } from './tariff.schema';
+import { meterCoverageIssues } from './meter';
+import { meterSchema } from './meter.schema';
+import { billingSpans } from './periods';
 
 const calculationFields = {
 	period: periodSchema,
@@ -11,10 +14,21 @@ const calculationFields = {
 	tariff: tariffSchema
 };
 
-/** The body of POST /api/v1/calculate. */
+/** The body of POST /api/v1/calculate: equipment, a meter's measured use, or both. */
 export const calculateRequestSchema = record('Request', {
 	...calculationFields,
-	equipment: list('Equipment', equipmentSchema, { max: 2000 })
+	equipment: list('Equipment', equipmentSchema, { max: 2000 }).default([]),
+	meter: meterSchema.optional()
+}).superRefine((request, ctx) => {
+	if (!request.meter) return;
+	// The library variant lets the time zone default to the tariff's; a meter's local times need it said.
+	if (!request.timezone) {
+		ctx.addIssue({ code: 'custom', path: ['timezone'], message: 'Give the time zone of the meter data' });
+		return;
+	}
+	for (const message of meterCoverageIssues(request.meter, request.timezone, billingSpans(request.period))) {
+		ctx.addIssue({ code: 'custom', path: ['meter', 'kwh'], message });
+	}
 });
 
 /** What a scenario's equipment is: already installed and paid for, or proposed and bought now. */

@@ -31,6 +31,8 @@ export interface PeriodResult {
 	sharedCost: number;
 	/** In the request's order. */
 	equipment: EquipmentShare[];
+	/** The measured load's share, when the request gave a meter. */
+	meter?: { kwh: number; cost: number };
 }
 
 export interface CalculateResponse {
