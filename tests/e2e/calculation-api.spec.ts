@@ -49,6 +49,41 @@ test.describe('the public calculation API', () => {
 		expect(huge.status()).toBe(413);
 	});
 
+	test('prices a meter series in place of equipment, and names a gap in words', async ({ request }) => {
+		// June 2027, hourly: 1.5 kWh every hour = 1,080 kWh; 1.5 kW of demand (derived from the rules).
+		const meter = {
+			start: '2027-06-01T00:00',
+			intervalMinutes: 60,
+			kwh: Array.from({ length: 720 }, () => 1.5)
+		};
+		const tariff = {
+			currency: 'USD',
+			energyCharges: [{ label: 'Energy', type: 'flat', perKwh: 0.2 }],
+			demandCharges: [{ label: 'Demand', perKw: 10 }]
+		};
+		const res = await request.post('/api/v1/calculate', { data: { ...body, tariff, equipment: [], meter } });
+		expect(res.status()).toBe(200);
+		const [june] = (await res.json()).periods;
+		expect(june.charges).toEqual([
+			{ kind: 'energy', label: 'Energy', amount: 216 },
+			{ kind: 'demand', label: 'Demand', amount: 15 }
+		]);
+		expect(june.meter).toEqual({ kwh: 1080, cost: 231 });
+
+		const gap: unknown[] = [...meter.kwh];
+		gap[30] = null;
+		const refused = await request.post('/api/v1/calculate', {
+			data: { ...body, tariff, equipment: [], meter: { ...meter, kwh: gap } }
+		});
+		expect(refused.status()).toBe(400);
+		expect((await refused.json()).issues).toEqual([
+			{
+				path: 'meter.kwh.30',
+				message: 'Meter value number 31 is missing or not a number (a gap in the series)'
+			}
+		]);
+	});
+
 	test('answers the pumping helper and compare endpoints', async ({ request }) => {
 		const pumping = await request.post('/api/v1/pumping', {
 			data: { fluid: 'fresh', air: { depth: 4.6, depthUnit: 'ft' } }
