@@ -1,0 +1,105 @@
+// The import page's rate: pasted JSON or an uploaded .json file, read and converted on the server.
+import type { ImportNote, TariffInput } from '$lib/calc';
+import { customerClassOf, dateOf } from './urdb-provenance';
+import { MAX_URDB_BYTES, readUrdbRate, type UrdbReading } from './urdb-read';
+
+const MB = MAX_URDB_BYTES / 1024 / 1024;
+
+/** What the page shows of a rate it read: the charges, the notes and where the rate came from. */
+export type UrdbPreview = {
+	kind: 'converted' | 'refused';
+	tariff: TariffInput | null;
+	notes: ImportNote[];
+	provenance: {
+		utility: string | null;
+		name: string | null;
+		sector: string | null;
+		customerClass: string;
+		startDate: string | null;
+		endDate: string | null;
+		label: string | null;
+		uri: string | null;
+		source: string | null;
+	};
+};
+
+/** A problem with the text or file, for the field it belongs to, and the problems inside the rate. */
+export type FormProblem = { field: 'json' | 'file'; message: string; issues: string[] };
+
+/** The rate's JSON text: the chosen file if there is one (up to 2 MB, .json), else the pasted text. */
+export async function rateText(
+	form: FormData
+): Promise<{ text: string; field: 'json' | 'file' } | FormProblem> {
+	const file = form.get('file');
+	if (file instanceof File && file.size > 0) {
+		if (file.size > MAX_URDB_BYTES)
+			return { field: 'file', message: `The file is over ${MB} MB.`, issues: [] };
+		if (!/\.json$/i.test(file.name))
+			return { field: 'file', message: 'The file must end in .json.', issues: [] };
+		return { text: await file.text(), field: 'file' };
+	}
+	const pasted = form.get('json');
+	const text = typeof pasted === 'string' ? pasted.trim() : '';
+	if (!text) return { field: 'json', message: 'Paste the rate’s JSON, or choose a .json file.', issues: [] };
+	if (Buffer.byteLength(text) > MAX_URDB_BYTES)
+		return { field: 'json', message: `The text is over ${MB} MB.`, issues: [] };
+	return { text, field: 'json' };
+}
+
+/** Parses and reads the text; the field named for any problem is the one the text came from. */
+function readRateText(
+	text: string,
+	field: 'json' | 'file'
+): Exclude<UrdbReading, { kind: 'unreadable' }> | FormProblem {
+	let body: unknown;
+	try {
+		body = JSON.parse(text);
+	} catch {
+		return {
+			field,
+			message: 'This is not valid JSON. Copy the whole answer of the database, from { to }.',
+			issues: []
+		};
+	}
+	const reading = readUrdbRate(body);
+	if (reading.kind === 'unreadable')
+		return { field, message: reading.message, issues: reading.issues.map((issue) => issue.message) };
+	return reading;
+}
+
+/**
+ * The posted rate, read: its text (the file's, when one was chosen, so the page can show and post it
+ * again) with the reading, or the problem keyed by the field it belongs to.
+ */
+export async function postedRate(
+	form: FormData
+): Promise<
+	{ json: string; reading: Exclude<UrdbReading, { kind: 'unreadable' }> } | (FormProblem & { json: string })
+> {
+	const text = await rateText(form);
+	if ('message' in text) return { ...text, json: String(form.get('json') ?? '') };
+	const reading = readRateText(text.text, text.field);
+	if ('message' in reading) return { ...reading, json: text.text };
+	return { json: text.text, reading };
+}
+
+/** The page's view of a converted or refused rate (plain data, nothing of the raw rate beyond this). */
+export function previewOf(reading: Exclude<UrdbReading, { kind: 'unreadable' }>): UrdbPreview {
+	const { rate } = reading;
+	return {
+		kind: reading.kind,
+		tariff: reading.kind === 'converted' ? reading.tariff : null,
+		notes: reading.notes,
+		provenance: {
+			utility: reading.meta.utility,
+			name: reading.meta.name,
+			sector: reading.meta.sector,
+			customerClass: customerClassOf(reading.meta.sector),
+			startDate: dateOf(rate.startdate),
+			endDate: dateOf(rate.enddate),
+			label: reading.meta.label,
+			uri: typeof rate.uri === 'string' ? rate.uri : null,
+			source: reading.meta.source
+		}
+	};
+}
