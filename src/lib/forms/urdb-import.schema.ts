@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import type { ImportNote, TariffInput } from '$lib/calc';
 
 // The single-rate import's choices: the open rate database's rates say nothing of their time zone, so the
 // person picks one of the US zones the utility's hours are in.
@@ -33,3 +34,21 @@ export const urdbSaveSchema = z.object({
 		.optional()
 		.transform((s) => (s ? s.trim() : null))
 });
+
+/** What the import page shows of a rate it read: the charges, the notes and where the rate came from. */
+export type UrdbPreview = {
+	kind: 'converted' | 'refused';
+	tariff: TariffInput | null;
+	notes: ImportNote[];
+	provenance: {
+		utility: string | null;
+		name: string | null;
+		sector: string | null;
+		customerClass: string;
+		startDate: string | null;
+		endDate: string | null;
+		label: string | null;
+		uri: string | null;
+		source: string | null;
+	};
+};

@@ -1,27 +1,9 @@
 // The import page's rate: pasted JSON or an uploaded .json file, read and converted on the server.
-import type { ImportNote, TariffInput } from '$lib/calc';
+import type { UrdbPreview } from '$lib/forms/urdb-import.schema';
 import { customerClassOf, dateOf } from './urdb-provenance';
 import { MAX_URDB_BYTES, readUrdbRate, type UrdbReading } from './urdb-read';
 
 const MB = MAX_URDB_BYTES / 1024 / 1024;
-
-/** What the page shows of a rate it read: the charges, the notes and where the rate came from. */
-export type UrdbPreview = {
-	kind: 'converted' | 'refused';
-	tariff: TariffInput | null;
-	notes: ImportNote[];
-	provenance: {
-		utility: string | null;
-		name: string | null;
-		sector: string | null;
-		customerClass: string;
-		startDate: string | null;
-		endDate: string | null;
-		label: string | null;
-		uri: string | null;
-		source: string | null;
-	};
-};
 
 /** A problem with the text or file, for the field it belongs to, and the problems inside the rate. */
 export type FormProblem = { field: 'json' | 'file'; message: string; issues: string[] };
