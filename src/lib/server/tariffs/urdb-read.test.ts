@@ -117,3 +117,10 @@ describe('places in words', () => {
 		);
 	});
 });
+
+describe('an object with none of a rate’s charges', () => {
+	it('is not taken for a rate', () => {
+		const reading = readUrdbRate({ label: 'x', utility: 'Nobody' });
+		expect(reading.kind === 'unreadable' && reading.message).toContain('holds none of a rate’s charges');
+	});
+});

@@ -77,6 +77,10 @@ export function readUrdbRate(body: unknown): UrdbReading {
 	const rate = parsed.data as UrdbRateFields;
 	const { tariff, meta, notes } = tariffFromUrdb(parsed.data);
 	if (!tariff) return { kind: 'refused', meta, notes, rate };
+	if (!tariff.energyCharges?.length && !tariff.fixedCharges?.length && tariff.minimumMonthly == null)
+		return unreadable(
+			'This holds none of a rate’s charges (no energy rate structure, no fixed charge): is it a rate of the open rate database?'
+		);
 	const checked = tariffSchema.safeParse(tariff);
 	if (!checked.success) {
 		// The core's conversion should never build a tariff its own schema refuses; if it does, refuse.

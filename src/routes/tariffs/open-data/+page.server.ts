@@ -20,21 +20,24 @@ async function ownerChoices(user: SessionUser) {
 	];
 }
 
-/** Every post reads the rate again from the form (pasted or uploaded): the preview is never trusted. */
-async function readPosted(event: RequestEvent) {
-	if (await calculationBudgetSpent(event)) return { refused: fail(429, { errors: { form: TOO_MANY } }) };
+/** The posted form, within the budget and the size limit. */
+async function postedForm(event: RequestEvent) {
+	if (await calculationBudgetSpent(event)) return fail(429, { errors: { form: TOO_MANY } });
 	const form = await uploadForm(event.request);
-	if (form === 'too-large') return { refused: fail(413, { errors: { file: `The file is over ${MB} MB.` } }) };
+	if (form === 'too-large') return fail(413, { errors: { file: `The file is over ${MB} MB.` } });
+	return form;
+}
+
+/** Every post reads the rate again from the form (pasted or uploaded): the preview is never trusted. */
+async function readRate(form: FormData) {
 	const posted = await postedRate(form);
 	if ('message' in posted)
-		return {
-			refused: fail(400, {
-				json: posted.json,
-				errors: { [posted.field]: posted.message },
-				issues: posted.issues
-			})
-		};
-	return { form, ...posted };
+		return fail(400, {
+			json: posted.json,
+			errors: { [posted.field]: posted.message },
+			issues: posted.issues
+		});
+	return posted;
 }
 
 export const load = (async (event) => {
@@ -46,24 +49,26 @@ export const load = (async (event) => {
 export const actions = {
 	read: async (event) => {
 		requireUser(event);
-		const posted = await readPosted(event);
-		if ('refused' in posted) return posted.refused;
+		const form = await postedForm(event);
+		if (!(form instanceof FormData)) return form;
+		const posted = await readRate(form);
+		if (!('reading' in posted)) return posted;
 		return { json: posted.json, preview: previewOf(posted.reading) };
 	},
 	save: async (event) => {
-		const user = requireUser(event);
-		const posted = await readPosted(event);
-		if ('refused' in posted) return posted.refused;
-		const { form, json, reading } = posted;
-		const preview = previewOf(reading);
+		requireUser(event);
+		const form = await postedForm(event);
+		if (!(form instanceof FormData)) return form;
 		const owner = String(form.get('owner') ?? '');
-		if (!(await ownerChoices(user)).some((o) => o.value === owner))
-			return fail(400, { json, preview, owner, errors: { owner: 'Pick where the tariff goes.' } });
-		// Checked where the tariff is written, whatever the list offered.
+		if (!owner) return fail(400, { owner, errors: { owner: 'Pick where the tariff goes.' } });
+		// The guard decides, where the tariff is written: editors of that workspace, or admins for public.
 		const author =
 			owner === 'public' ? requireAdmin(event) : (await requireRole(event, owner, 'editor')).user;
+		const posted = await readRate(form);
+		if (!('reading' in posted)) return posted;
+		const { json, reading } = posted;
 		const outcome = await saveImportedRate(reading, form, owner === 'public' ? null : owner, author);
 		if ('saved' in outcome) redirect(303, `/tariffs/${outcome.saved}?published=1`);
-		return fail(outcome.status, { json, preview, owner, ...outcome.data });
+		return fail(outcome.status, { json, preview: previewOf(reading), owner, ...outcome.data });
 	}
 } satisfies Actions;
