@@ -6,7 +6,7 @@ import { MAX_URDB_BYTES, readUrdbRate, type UrdbReading } from './urdb-read';
 const MB = MAX_URDB_BYTES / 1024 / 1024;
 
 /** A problem with the text or file, for the field it belongs to, and the problems inside the rate. */
-export type FormProblem = { field: 'json' | 'file'; message: string; issues: string[] };
+export type FormProblem = { field: 'json' | 'file'; message: string; issues: string[]; status: 400 | 413 };
 
 /** The rate's JSON text: the chosen file if there is one (up to 2 MB, .json), else the pasted text. */
 export async function rateText(
@@ -15,16 +15,22 @@ export async function rateText(
 	const file = form.get('file');
 	if (file instanceof File && file.size > 0) {
 		if (file.size > MAX_URDB_BYTES)
-			return { field: 'file', message: `The file is over ${MB} MB.`, issues: [] };
+			return { field: 'file', message: `The file is over ${MB} MB.`, issues: [], status: 413 };
 		if (!/\.json$/i.test(file.name))
-			return { field: 'file', message: 'The file must end in .json.', issues: [] };
+			return { field: 'file', message: 'The file must end in .json.', issues: [], status: 400 };
 		return { text: await file.text(), field: 'file' };
 	}
 	const pasted = form.get('json');
 	const text = typeof pasted === 'string' ? pasted.trim() : '';
-	if (!text) return { field: 'json', message: 'Paste the rate’s JSON, or choose a .json file.', issues: [] };
+	if (!text)
+		return {
+			field: 'json',
+			message: 'Paste the rate’s JSON, or choose a .json file.',
+			issues: [],
+			status: 400
+		};
 	if (Buffer.byteLength(text) > MAX_URDB_BYTES)
-		return { field: 'json', message: `The text is over ${MB} MB.`, issues: [] };
+		return { field: 'json', message: `The text is over ${MB} MB.`, issues: [], status: 413 };
 	return { text, field: 'json' };
 }
 
@@ -40,12 +46,18 @@ function readRateText(
 		return {
 			field,
 			message: 'This is not valid JSON. Copy the whole answer of the database, from { to }.',
-			issues: []
+			issues: [],
+			status: 400
 		};
 	}
 	const reading = readUrdbRate(body);
 	if (reading.kind === 'unreadable')
-		return { field, message: reading.message, issues: reading.issues.map((issue) => issue.message) };
+		return {
+			field,
+			message: reading.message,
+			issues: reading.issues.map((issue) => issue.message),
+			status: 400
+		};
 	return reading;
 }
 

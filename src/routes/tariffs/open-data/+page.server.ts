@@ -32,7 +32,7 @@ async function postedForm(event: RequestEvent) {
 async function readRate(form: FormData) {
 	const posted = await postedRate(form);
 	if ('message' in posted)
-		return fail(400, {
+		return fail(posted.status, {
 			json: posted.json,
 			errors: { [posted.field]: posted.message },
 			issues: posted.issues
