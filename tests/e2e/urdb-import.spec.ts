@@ -1,5 +1,6 @@
 import { expect, test } from '@playwright/test';
 import { readFileSync } from 'node:fs';
+import { AXE_CONTEXT, blockingFindings } from './axe';
 import { createWorkspace, gotoReady, signInWithPassword } from './helpers';
 
 // One rate of the open rate database, imported through the tariff library's page in a real browser. The
@@ -85,5 +86,37 @@ test.describe('import from the open rate database', () => {
 		await expect(page.getByLabel('The rate’s JSON')).toHaveAttribute('aria-invalid', 'true');
 		await expect(page.getByText('This is not valid JSON.', { exact: false })).toBeVisible();
 		await expect(page.getByRole('button', { name: 'Save the tariff' })).toHaveCount(0);
+	});
+
+	test('on a 390 px phone the read rate fits the screen, its buttons are 44 px, and axe finds nothing serious', async ({
+		browser,
+		baseURL
+	}) => {
+		const context = await browser.newContext({
+			baseURL,
+			viewport: { width: 390, height: 844 },
+			...AXE_CONTEXT
+		});
+		const page = await context.newPage();
+		await signInWithPassword(page, 'editor@example.org');
+		for (const [fill, heading] of [
+			[async () => page.getByLabel('The rate’s JSON').fill(readFileSync(RS1, 'utf8')), 'Tiers'],
+			[
+				async () => page.getByLabel(/Or a \.json file/).setInputFiles(GEORGIA),
+				'When each time-of-use rate applies'
+			]
+		] as const) {
+			await gotoReady(page, '/tariffs/open-data');
+			await fill();
+			await page.getByRole('button', { name: 'Read the rate' }).click();
+			await expect(page.getByRole('heading', { name: heading })).toBeVisible();
+			expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+			for (const name of ['Read the rate', 'Save the tariff']) {
+				const box = await page.getByRole('button', { name }).boundingBox();
+				expect(box!.height, name).toBeGreaterThanOrEqual(44);
+			}
+			expect(await blockingFindings(page)).toEqual([]);
+		}
+		await context.close();
 	});
 });
