@@ -52,6 +52,7 @@ test.describe('import from the open rate database', () => {
 		await gotoReady(page, '/tariffs/open-data');
 		await page.getByLabel('The rate’s JSON').fill(readFileSync(RS1, 'utf8'));
 		await page.getByRole('button', { name: 'Read the rate' }).click();
+		await expect(page.getByText('This rate is already in your library:')).toBeVisible();
 		await page.getByLabel('Save it to').selectOption({ label: `${workspace} (private to the workspace)` });
 		await page.getByLabel('Time zone of the utility’s hours').selectOption('America/New_York');
 		await page.getByRole('button', { name: 'Save the tariff' }).click();

@@ -264,6 +264,11 @@ describe('the import page saves through the tariff service', () => {
 		});
 		expect(tariffSchema.parse(found!.versions[0]!.structure).energyCharges).toHaveLength(1);
 
+		// Reading it again shows where the person's library holds it; someone outside the workspace sees none.
+		const readAgain = await act('read', 'viewer', { json: rs1Labelled(label) });
+		expect(readAgain.data.copies).toEqual([{ id, name: 'RS-1 Residential Service', isPublic: false }]);
+		expect((await act('read', 'admin', { json: rs1Labelled(label) })).data.copies).toEqual([]);
+
 		// The same label in the same workspace: a message and a link to the one there, no second copy.
 		const again = await act('save', 'owner', {
 			json: rs1Labelled(label),

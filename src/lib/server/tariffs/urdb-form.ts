@@ -1,5 +1,9 @@
 // The import page's rate: pasted JSON or an uploaded .json file, read and converted on the server.
+import { fail, type RequestEvent } from '@sveltejs/kit';
 import type { UrdbPreview } from '$lib/forms/urdb-import.schema';
+import { calculationBudgetSpent } from '../http/rate-limits';
+import { uploadForm } from '../http/upload-form';
+import { TOO_MANY } from '../rate-limit';
 import { customerClassOf, dateOf } from './urdb-provenance';
 import { MAX_URDB_BYTES, readUrdbRate, type UrdbReading } from './urdb-read';
 
@@ -96,4 +100,24 @@ export function previewOf(reading: Exclude<UrdbReading, { kind: 'unreadable' }>)
 			source: reading.meta.source
 		}
 	};
+}
+
+/** The posted form, within the caller's budget (the calculation API's) and the size limit. */
+export async function postedForm(event: RequestEvent) {
+	if (await calculationBudgetSpent(event)) return fail(429, { errors: { form: TOO_MANY } });
+	const form = await uploadForm(event.request);
+	if (form === 'too-large') return fail(413, { errors: { file: `The file is over ${MB} MB.` } });
+	return form;
+}
+
+/** Every post reads the rate again from the form (pasted or uploaded): the preview is never trusted. */
+export async function readRate(form: FormData) {
+	const posted = await postedRate(form);
+	if ('message' in posted)
+		return fail(posted.status, {
+			json: posted.json,
+			errors: { [posted.field]: posted.message },
+			issues: posted.issues
+		});
+	return posted;
 }

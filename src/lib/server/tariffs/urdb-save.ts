@@ -1,5 +1,5 @@
 // Saving one imported open-rate-database rate in the library, once per label and place.
-import { and, eq, isNull, sql } from 'drizzle-orm';
+import { and, eq, inArray, isNull, or, sql } from 'drizzle-orm';
 import { db } from '../db';
 import { tariffs } from '../db/schema';
 import type { TariffSubmission } from './submission';
@@ -27,6 +27,19 @@ export async function findImported(
 		)
 		.limit(1);
 	return row ?? null;
+}
+
+/** The tariffs imported from `label` that a reader of those workspaces sees: public ones and theirs. */
+export function importedCopies(label: string, workspaceIds: string[]) {
+	const visible = workspaceIds.length
+		? or(isNull(tariffs.workspaceId), inArray(tariffs.workspaceId, workspaceIds))
+		: isNull(tariffs.workspaceId);
+	return db
+		.select({ id: tariffs.id, name: tariffs.name, isPublic: sql<boolean>`${tariffs.workspaceId} is null` })
+		.from(tariffs)
+		.where(and(eq(tariffs.urdbLabel, label), visible))
+		.orderBy(tariffs.createdAt)
+		.limit(10);
 }
 
 /**

@@ -1,16 +1,13 @@
-import { error, fail, redirect, type RequestEvent } from '@sveltejs/kit';
+import { error, fail, redirect } from '@sveltejs/kit';
 import { requireAdmin, requireRole, requireUser } from '$lib/server/guard';
 import { listWorkspacesFor } from '$lib/server/workspaces/workspace.service';
-import { calculationBudgetSpent } from '$lib/server/http/rate-limits';
-import { uploadForm } from '$lib/server/http/upload-form';
-import { TOO_MANY } from '$lib/server/rate-limit';
+import { workspaceIdsOf } from '$lib/server/tariffs/tariff.service';
 import { MAX_URDB_BYTES } from '$lib/server/tariffs/urdb-read';
-import { postedRate, previewOf } from '$lib/server/tariffs/urdb-form';
+import { postedForm, previewOf, readRate } from '$lib/server/tariffs/urdb-form';
+import { importedCopies } from '$lib/server/tariffs/urdb-save';
 import { saveImportedRate } from '$lib/server/tariffs/urdb-save-form';
 import { US_TIME_ZONES } from '$lib/forms/urdb-import.schema';
 import type { Actions, PageServerLoad } from './$types';
-
-const MB = MAX_URDB_BYTES / 1024 / 1024;
 
 async function ownerChoices(user: SessionUser) {
 	const workspaces = (await listWorkspacesFor(user.id)).filter((w) => w.role !== 'viewer');
@@ -20,40 +17,23 @@ async function ownerChoices(user: SessionUser) {
 	];
 }
 
-/** The posted form, within the budget and the size limit. */
-async function postedForm(event: RequestEvent) {
-	if (await calculationBudgetSpent(event)) return fail(429, { errors: { form: TOO_MANY } });
-	const form = await uploadForm(event.request);
-	if (form === 'too-large') return fail(413, { errors: { file: `The file is over ${MB} MB.` } });
-	return form;
-}
-
-/** Every post reads the rate again from the form (pasted or uploaded): the preview is never trusted. */
-async function readRate(form: FormData) {
-	const posted = await postedRate(form);
-	if ('message' in posted)
-		return fail(posted.status, {
-			json: posted.json,
-			errors: { [posted.field]: posted.message },
-			issues: posted.issues
-		});
-	return posted;
-}
-
 export const load = (async (event) => {
 	const owners = await ownerChoices(requireUser(event));
 	if (owners.length === 0) error(403, 'Importing a tariff needs the editor role in a workspace.');
-	return { owners, zones: US_TIME_ZONES, maxMb: MB };
+	return { owners, zones: US_TIME_ZONES, maxMb: MAX_URDB_BYTES / 1024 / 1024 };
 }) satisfies PageServerLoad;
 
 export const actions = {
 	read: async (event) => {
-		requireUser(event);
+		const user = requireUser(event);
 		const form = await postedForm(event);
 		if (!(form instanceof FormData)) return form;
 		const posted = await readRate(form);
 		if (!('reading' in posted)) return posted;
-		return { json: posted.json, preview: previewOf(posted.reading) };
+		const { label } = posted.reading.rate;
+		// Where the person's library already holds this rate: a link, before they save a second copy.
+		const copies = label ? await importedCopies(label, await workspaceIdsOf(user.id)) : [];
+		return { json: posted.json, preview: previewOf(posted.reading), copies };
 	},
 	save: async (event) => {
 		requireUser(event);
