@@ -124,3 +124,13 @@ describe('an object with none of a rate’s charges', () => {
 		expect(reading.kind === 'unreadable' && reading.message).toContain('holds none of a rate’s charges');
 	});
 });
+
+describe('a label PostgreSQL cannot hold', () => {
+	it.each([
+		['U+0000', 'a\u0000b'],
+		['a lone surrogate', 'a\ud800b']
+	])('is refused at the label (%s)', (_, label) => {
+		const reading = readUrdbRate({ ...rs1(), label });
+		expect(reading.kind === 'unreadable' && reading.issues.map((i) => i.path)).toEqual(['label']);
+	});
+});

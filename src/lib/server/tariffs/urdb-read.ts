@@ -3,6 +3,7 @@ import {
 	parseRequest,
 	tariffFromUrdb,
 	tariffSchema,
+	unstorableMessage,
 	urdbRateSchema,
 	type ImportNote,
 	type RequestIssue,
@@ -75,6 +76,12 @@ export function readUrdbRate(body: unknown): UrdbReading {
 			}))
 		);
 	const rate = parsed.data as UrdbRateFields;
+	// The label is looked up and stored as it is: text PostgreSQL cannot hold is refused here, by its field.
+	const unstorable = rate.label === undefined ? null : unstorableMessage(rate.label);
+	if (unstorable)
+		return unreadable('This rate has problems, so Runrate did not read it.', [
+			{ path: `${one.base}label`, message: `Label: ${unstorable}` }
+		]);
 	const { tariff, meta, notes } = tariffFromUrdb(parsed.data);
 	if (!tariff) return { kind: 'refused', meta, notes, rate };
 	if (!tariff.energyCharges?.length && !tariff.fixedCharges?.length && tariff.minimumMonthly == null)
