@@ -77,6 +77,33 @@ export const routes: Route[] = [
 	},
 	{ method: 'GET', path: () => '/tariffs/new', expect: [303, 403, 200, 200, 200, 200, 403] },
 	{ method: 'GET', path: () => '/tariffs/import', expect: [303, 403, 200, 200, 200, 200, 403] },
+	// One rate of the open rate database: anyone signed in may read one (the API reads one for anybody); a
+	// save is for the chosen workspace's editors, or admins for the public library.
+	{ method: 'GET', path: () => '/tariffs/open-data', expect: [303, 403, 200, 200, 200, 200, 403] },
+	{
+		method: 'POST',
+		path: () => '/tariffs/open-data?/read',
+		form: { json: '' },
+		expect: [401, 400, 400, 400, 400, 400, 400]
+	},
+	{
+		method: 'POST',
+		path: () => '/tariffs/open-data?/save',
+		form: { owner: DEMO_WS.id, json: '' },
+		expect: [401, 403, 400, 400, 404, 404, 404]
+	},
+	{
+		method: 'POST',
+		path: () => '/tariffs/open-data?/save',
+		form: { owner: 'public', json: '' },
+		expect: [401, 403, 403, 403, 403, 400, 403]
+	},
+	{
+		method: 'POST',
+		path: () => '/api/v1/tariffs/from-urdb',
+		json: {},
+		expect: [422, 422, 422, 422, 422, 422, 422]
+	},
 	{ method: 'GET', path: () => `/tariffs/${publicTariff}/edit`, expect: [303, 403, 403, 403, 403, 200, 403] },
 	{
 		method: 'GET',

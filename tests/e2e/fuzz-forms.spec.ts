@@ -27,6 +27,12 @@ const publicTariff = (
 	JSON.parse(readFileSync('data/demo-tariffs.json', 'utf8')) as { tariffs: { id: string }[] }
 ).tariffs[0]!.id;
 
+/** FPL RS-1 (a public record of the open rate database, tests/fixtures/urdb/) under a label of this run. */
+const URDB_RATE = JSON.stringify({
+	...JSON.parse(readFileSync('tests/fixtures/urdb/fpl-rs1-2015.json', 'utf8')),
+	label: `fuzz-${Date.now()}`
+});
+
 let owner: APIRequestContext;
 const made = { workspace: '', site: '', scenario: '', bill: '', tariff: '', airPump: '' };
 const sheets = { bills: '', equipment: '', tariffs: '', xlsx: [] as Buffer[] };
@@ -246,6 +252,21 @@ const TARGETS: Record<string, Target> = {
 		path: () => '/tariffs/import',
 		fields: () => ({ owner: made.workspace, intent: 'import' }),
 		file: { field: 'sheet', sheet: () => sheets.tariffs }
+	},
+	// The first valid save imports the sample into the throwaway workspace; the rest meet its label (409).
+	'/tariffs/open-data?/read': {
+		path: () => '/tariffs/open-data?/read',
+		fields: () => ({ json: URDB_RATE }),
+		file: { field: 'file', sheet: () => URDB_RATE }
+	},
+	'/tariffs/open-data?/save': {
+		path: () => '/tariffs/open-data?/save',
+		fields: () => ({
+			json: URDB_RATE,
+			owner: made.workspace,
+			timezone: 'America/New_York',
+			effectiveFrom: undefined
+		})
 	},
 	// Valid names make workspaces of the owner's; nothing in the demo workspace changes.
 	'/workspaces?/create': {

@@ -65,7 +65,8 @@ const ENDPOINTS = [
 	['POST', `/api/v1/sites/${site.id}/bills`],
 	['POST', `/api/v1/sites/${site.id}/scenarios`],
 	['PUT', `/api/v1/scenarios/${site.scenarios[0]!.id}/equipment`],
-	['POST', '/api/v1/tariffs']
+	['POST', '/api/v1/tariffs'],
+	['POST', '/api/v1/tariffs/from-urdb']
 ] as const;
 
 test('hostile JSON never gets a 500 or a stack trace from any JSON endpoint', async ({ page }) => {

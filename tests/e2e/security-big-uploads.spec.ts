@@ -180,7 +180,14 @@ test('an upload declaring more than 10 MB gets its 413 and message, not a reset 
 			{ raw: 'text/csv' },
 			/over 10 MB/
 		],
-		['a calculation (JSON API)', '/api/v1/calculate', ELEVEN, { raw: 'application/json' }, /over 1 MB/]
+		['a calculation (JSON API)', '/api/v1/calculate', ELEVEN, { raw: 'application/json' }, /over 1 MB/],
+		[
+			'one open-data rate (JSON API)',
+			'/api/v1/tariffs/from-urdb',
+			ELEVEN,
+			{ raw: 'application/json' },
+			/over 2 MB/
+		]
 	];
 	for (const [what, path, declared, parts, message] of json) {
 		const answer = await upload(`${baseURL}${path}`, headers, declared, parts);
@@ -215,6 +222,22 @@ test('an upload declaring more than 10 MB gets its 413 and message, not a reset 
 			'The file is over 5 MB.'
 		],
 		['the tariff import', '/tariffs/import', TWELVE, { file: 'sheet' }, 'sheet', 'The file is over 5 MB.'],
+		[
+			'the open-data import',
+			'/tariffs/open-data?/read',
+			ELEVEN,
+			{ file: 'file' },
+			'file',
+			'The file is over 2 MB.'
+		],
+		[
+			'the open-data import',
+			'/tariffs/open-data?/read',
+			TWELVE,
+			{ file: 'file' },
+			'file',
+			'The file is over 2 MB.'
+		],
 		[
 			'the bill sheet import',
 			`/sites/${greenhouse.id}/bills?/import`,

@@ -10,10 +10,13 @@ const anonymousLimiter = new RateLimiter({ IP: [120, 'm'], plugins: [new PerClie
 // MEMBER_REQUESTS_PER_MINUTE lifts the members' budget for a load test on loopback (npm run load).
 const memberLimiter = new RateLimiter({ IP: [Number(env.MEMBER_REQUESTS_PER_MINUTE ?? 600), 'm'] });
 
+/** Whether the caller is over its budget (members' budget if signed in); form actions answer fail(429). */
+export const calculationBudgetSpent = (event: RequestEvent): Promise<boolean> =>
+	(event.locals.user ? memberLimiter : anonymousLimiter).isLimited(event);
+
 /** The 429 to send when the caller is over its budget (members' budget if signed in), else null. */
 export async function overCalculationBudget(event: RequestEvent): Promise<Response | null> {
-	const limiter = event.locals.user ? memberLimiter : anonymousLimiter;
-	if (!(await limiter.isLimited(event))) return null;
+	if (!(await calculationBudgetSpent(event))) return null;
 	return json(
 		{ error: 'rate_limited', message: 'Too many requests. Wait a minute and try again.' },
 		{ status: 429, headers: { 'Retry-After': '60' } }
