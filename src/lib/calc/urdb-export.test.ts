@@ -104,7 +104,7 @@ describe('what the database shape cannot hold', () => {
 			'riders',
 			'taxes'
 		]);
-		// 16:30–17:00 is written as off-peak: hour 16 by its first quarter.
+		// 16:30–19:00: hour 16 is written off-peak (by its first quarter), hours 17 and 18 peak.
 		const row = (written.energyweekdayschedule as number[][])[0]!;
 		const peakIndex = row[17];
 		expect(row.slice(15, 20).map((v) => (v === peakIndex ? 'peak' : 'off'))).toEqual([
@@ -112,7 +112,7 @@ describe('what the database shape cannot hold', () => {
 			'off',
 			'peak',
 			'peak',
-			'peak'
+			'off'
 		]);
 	});
 });
