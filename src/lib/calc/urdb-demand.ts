@@ -33,10 +33,13 @@ function interval(rate: UrdbRate, notes: ImportNote[]): 15 | 60 {
 
 /**
  * The ratchet of the rate's whole-month demand, from `demandratchetpercentage` (12 monthly fractions)
- * or `lookbackPercent` with `lookbackRange` (months back) or `lookbackMonths`. URDB gives these as
+ * or `lookbackPercent` with `lookbackRange` (months back) or `lookbackMonths` (12 flags, one a month). URDB gives these as
  * fractions (0.8 = 80 %), as NREL's REopt reads them. Runrate has one percentage for the year, so
  * monthly percentages that differ cannot be expressed: the ratchet is refused with a note, and so is
- * the tariff, since pricing it without its ratchet would understate the bill.
+ * the tariff, since pricing it without its ratchet would understate the bill. The database's ratchet
+ * looks back on the month's peak whatever price applies; Runrate's looks back on its own charge's
+ * peaks, so a ratchet over seasonal whole-month charges (one price in summer, another in winter) is
+ * refused too.
  */
 function ratchet(rate: UrdbRate, notes: ImportNote[]): Ratchet | null | undefined {
 	const monthly = rate.demandratchetpercentage;
@@ -56,9 +59,7 @@ function ratchet(rate: UrdbRate, notes: ImportNote[]): Ratchet | null | undefine
 	if (percent <= 0) return undefined;
 	if (rate.lookbackRange) return { percent: percent * 100, monthsBack: rate.lookbackRange };
 	const listed = rate.lookbackMonths ?? [];
-	const months = listed.every((m) => typeof m === 'boolean')
-		? listed.flatMap((on, i) => (on ? [i + 1] : []))
-		: (listed as number[]).filter((m) => m >= 1);
+	const months = listed.flatMap((on, i) => (on ? [i + 1] : []));
 	if (months.length === 0) {
 		notes.push({
 			code: 'lookback-months',
@@ -71,7 +72,11 @@ function ratchet(rate: UrdbRate, notes: ImportNote[]): Ratchet | null | undefine
 }
 
 /** Whole-month demand: one charge per flat demand period used by `flatdemandmonths`. */
-function flatCharges(rate: UrdbRate, minutes: 15 | 60, notes: ImportNote[]): DemandInput[] | null {
+function flatCharges(
+	rate: UrdbRate,
+	minutes: 15 | 60,
+	notes: ImportNote[]
+): (DemandInput & { months: number[] })[] | null {
 	const structure = rate.flatdemandstructure;
 	if (!structure) return [];
 	const months = rate.flatdemandmonths ?? (structure.length === 1 ? Array(12).fill(0) : null);
@@ -159,6 +164,15 @@ export function demandCharges(rate: UrdbRate, notes: ImportNote[]): DemandInput[
 			code: 'ratchet-without-demand',
 			field: 'demandratchetpercentage',
 			message: 'A ratchet needs a whole-month demand charge to apply to; the rate was not imported'
+		});
+		return null;
+	}
+	if (held && flat.some((c) => c.months.length < 12)) {
+		notes.push({
+			code: 'ratchet-seasonal',
+			field: 'demandratchetpercentage',
+			message:
+				'The ratchet spans whole-month demand charges that change with the season; Runrate ratchets each charge on its own peaks, so the rate was not imported'
 		});
 		return null;
 	}

@@ -44,11 +44,15 @@ const KINDS: Record<string, Record<string, unknown>> = {
 		energyweekdayschedule: grid(peak),
 		energyweekendschedule: grid(0)
 	},
-	'flat demand with tiers and a ratchet': {
+	'seasonal flat demand with tiers': {
 		flatdemandstructure: [[{ rate: 0 }], [{ rate: 8, max: 50 }, { rate: 10 }], [{ rate: 6 }]],
 		flatdemandmonths: [2, 2, 2, 2, 2, 1, 1, 1, 1, 2, 2, 0],
-		demandratchetpercentage: Array(12).fill(0.75),
 		demandwindow: 60
+	},
+	'flat demand with tiers and a ratchet': {
+		flatdemandstructure: [[{ rate: 8, max: 50 }, { rate: 10 }]],
+		flatdemandmonths: Array(12).fill(0),
+		demandratchetpercentage: Array(12).fill(0.75)
 	},
 	'lookback months': {
 		flatdemandstructure: [[{ rate: 5 }]],
