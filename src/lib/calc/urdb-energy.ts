@@ -9,6 +9,7 @@ export interface ImportNote {
 	message: string;
 }
 
+/** One tier of a URDB period: `rate`, `adj`, `max` (cumulative), `unit`. */
 export type UrdbTier = NonNullable<UrdbRate['energyratestructure']>[number][number];
 
 /** URDB's price per unit: `rate + adj` (the adjustment is added, never multiplied; NREL's parsers). */

@@ -6,6 +6,7 @@ export interface ExportNote {
 	message: string;
 }
 
+/** A 12 × 24 schedule being written: [month 0–11][hour 0–23] = period index. */
 export type Grid = number[][];
 
 /** A 12 × 24 grid holding `index` everywhere. */

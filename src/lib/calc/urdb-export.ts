@@ -16,6 +16,7 @@ export interface UrdbMeta {
 	endDate?: string | null;
 }
 
+/** What an export gives: the rate, and what of the tariff it could not hold. */
 export interface UrdbExport {
 	/** The rate in the open rate database's JSON shape (as its API gives one item). */
 	rate: Record<string, unknown>;

@@ -6,6 +6,7 @@ import { type ImportNote, energyCharge } from './urdb-energy';
 
 export type { ImportNote } from './urdb-energy';
 
+/** What an import gives: the tariff (or null), who and when the rate is from, and the notes. */
 export interface UrdbImport {
 	/** Null when the rate cannot be expressed: refused, never priced wrongly. */
 	tariff: TariffInput | null;
@@ -26,7 +27,7 @@ export interface UrdbImport {
  * reactive power, distributed generation and export rules, and free-text attributes and comments.
  */
 const NOTED =
-	/^(coincident.*|.*kvar.*|demandreactivepowercharge|dgrules|netmetering|.*sell.*|.*attrs|.*comments)$/i;
+	/^(coincident.*|.*kvar.*|demandreactivepowercharge|dgrules|.*netmetering.*|.*sell.*|.*attrs|.*comments)$/i;
 
 /** Unix seconds as a calendar date (UTC), or null. */
 const day = (seconds: number | undefined) =>
@@ -84,7 +85,7 @@ export function tariffFromUrdb(rate: UrdbRate): UrdbImport {
 	const fixed = fixedCharges(rate, notes);
 	const floors = minimums(rate, notes);
 	for (const [field, value] of Object.entries(rate))
-		if (NOTED.test(field) && value !== undefined && value !== null && value !== '')
+		if (NOTED.test(field) && value !== undefined && value !== null && value !== '' && value !== false)
 			notes.push({ code: 'not-priced', field, message: `${field} is not priced by Runrate` });
 	let tariff: TariffInput | null =
 		energy === null || demand === null || fixed === null || floors === null
