@@ -9,9 +9,11 @@ const tiersOf = (charge: DemandCharge) =>
 		? charge.tiers.map((t) => (t.uptoKw === null ? { rate: t.perKw } : { rate: t.perKw, max: t.uptoKw }))
 		: [{ rate: charge.perKw ?? 0 }];
 
-/** Whether a charge takes the month's peak at any hour of any day (URDB's flat demand). */
-const wholeMonth = (c: DemandCharge) =>
-	c.days === 'all' && (!c.windows || c.windows.length === 0 || windowHours(c.windows).hours.length === 24);
+/**
+ * Whether a charge takes the month's peak at any hour of any day with no windows named (URDB's flat
+ * demand); one with windows, even all day, goes to the time-of-use demand schedules, as it came.
+ */
+const wholeMonth = (c: DemandCharge) => c.days === 'all' && (!c.windows || c.windows.length === 0);
 
 /** A ratchet in URDB's fields: 12 equal monthly fractions for 11 months back, else the lookback fields. */
 function ratchetFields(ratchet: NonNullable<DemandCharge['ratchet']>): Record<string, unknown> {

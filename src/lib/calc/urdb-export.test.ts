@@ -72,9 +72,12 @@ const KINDS: Record<string, Record<string, unknown>> = {
 };
 
 describe('import → export → import gives the same tariff', () => {
-	it.each(['fpl-rs1-2015.json', 'georgia-power-tou-reo-2013.json'])('sample %s', (name) => {
-		roundTrip(tariffFromUrdb(sample(name)).tariff);
-	});
+	it.each(['fpl-rs1-2015.json', 'georgia-power-tou-reo-2013.json', 'reopt-tiered-tou-demand.json'])(
+		'sample %s',
+		(name) => {
+			roundTrip(tariffFromUrdb(sample(name)).tariff);
+		}
+	);
 	it.each(Object.keys(KINDS))('%s', (kind) => {
 		roundTrip(tariffFromUrdb(rate(KINDS[kind]!)).tariff);
 	});
