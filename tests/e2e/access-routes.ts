@@ -75,6 +75,16 @@ export const routes: Route[] = [
 		path: () => `/api/v1/tariffs/${privateTariff}/versions/1`,
 		expect: [404, 200, 200, 200, 404, 404, 404]
 	},
+	{
+		method: 'GET',
+		path: () => `/api/v1/tariffs/${privateTariff}/urdb.json`,
+		expect: [404, 200, 200, 200, 404, 404, 404]
+	},
+	{
+		method: 'GET',
+		path: () => `/api/v1/tariffs/${publicTariff}/urdb.json`,
+		expect: [200, 200, 200, 200, 200, 200, 200]
+	},
 	{ method: 'GET', path: () => '/tariffs/new', expect: [303, 403, 200, 200, 200, 200, 403] },
 	{ method: 'GET', path: () => '/tariffs/import', expect: [303, 403, 200, 200, 200, 200, 403] },
 	// One rate of the open rate database: anyone signed in may read one (the API reads one for anybody); a

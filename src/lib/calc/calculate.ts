@@ -56,8 +56,8 @@ function daysInMonths(context: Context, days: SpanDays) {
 
 interface Priced {
 	result: PeriodResult;
-	/** Each demand charge's measured peak this period, for later periods' ratchets. */
-	peaks: MeasuredPeak[];
+	/** The period's peak kW over all its intervals, for later periods' ratchets. */
+	peak: MeasuredPeak;
 	/** The bill before taxes, for a yearly minimum. */
 	subtotal: number;
 }
@@ -66,7 +66,7 @@ function periodResult(
 	context: Context,
 	span: BillingSpan,
 	days: SpanDays,
-	earlier: readonly MeasuredPeak[][],
+	earlier: readonly MeasuredPeak[],
 	yearlyMinimum = 0
 ): Priced {
 	const { request, loads, rates, usage, demand, meter } = context;
@@ -83,18 +83,16 @@ function periodResult(
 	);
 	const energy = priceEnergy(tariff, rates.columns, sums, daysInMonths(context, days), days.days);
 	const month = Number(span.from.slice(5, 7));
-	const peaks: MeasuredPeak[] = [];
+	const peakKw = peakOf(context, days, () => WHOLE_DAY, 15)?.peak.kw ?? 0;
 	const billed: number[] = [];
 	let unallocated = 0;
 	let meterDemand = 0;
 	const demandShares: DemandShare[] = tariff.demandCharges.map((charge, k) => {
 		const found = peakOf(context, days, (c) => rates.demandMask(k, c), charge.intervalMinutes);
 		const peak = found?.peak ?? null;
-		peaks.push({ month, kw: peak ? peak.kw : null });
-		const floorKw = ratchetFloorKw(
-			charge,
-			earlier.map((row) => row[k] ?? { month, kw: null })
-		);
+		// A charge limited to some months bills nothing outside them, ratchet included.
+		const applies = !charge.months || charge.months.includes(month);
+		const floorKw = applies ? ratchetFloorKw(charge, earlier) : 0;
 		const amount = demandAmount(charge, Math.max(peak?.kw ?? 0, floorKw));
 		billed.push(amount);
 		if (peak && peak.kw > 0) {
@@ -139,7 +137,7 @@ function periodResult(
 		days: days.days,
 		hours: days.hours,
 		kwh,
-		peakKw: peakOf(context, days, () => WHOLE_DAY, 15)?.peak.kw ?? 0,
+		peakKw,
 		charges: bill.charges,
 		total: bill.total,
 		sharedCost: roundMoney(bill.total - deviceCents / 100),
@@ -150,7 +148,7 @@ function periodResult(
 		...(meter ? { meter: { kwh: meterKwh, cost: others[0] ?? 0 } } : {})
 	};
 	const taxes = bill.charges.reduce((sum, line) => sum + (line.kind === 'tax' ? line.amount : 0), 0);
-	return { result, peaks, subtotal: roundMoney(bill.total - taxes) };
+	return { result, peak: { month, kw: peakKw }, subtotal: roundMoney(bill.total - taxes) };
 }
 
 /**
@@ -173,17 +171,17 @@ export function calculate(request: CalculateRequest): CalculateResponse {
 		demand: new DemandMeter(calendar, profiles, loads.groups),
 		meter: request.meter ? new MeterLoad(request.meter, request.timezone, calendar) : null
 	};
-	const price = (i: number, earlier: MeasuredPeak[][], yearlyMinimum = 0) => {
+	const price = (i: number, earlier: MeasuredPeak[], yearlyMinimum = 0) => {
 		const span = spans[i];
 		const days = calendar.spans[i];
 		if (!span || !days) throw new Error('Calendar is missing a billing period');
 		return periodResult(context, span, days, earlier, yearlyMinimum);
 	};
 	// In order: a ratchet looks back at the peaks of the periods before.
-	const history: MeasuredPeak[][] = [];
+	const history: MeasuredPeak[] = [];
 	const priced = spans.map((_, i) => {
 		const period = price(i, history);
-		history.push(period.peaks);
+		history.push(period.peak);
 		return period;
 	});
 	const topUps = yearlyMinimumTopUps(

@@ -1,16 +1,18 @@
 import type { DemandCharge } from './tariff.schema';
 
-/** A demand charge's measured peak in one billing period, with the month the period begins in. */
+/** A billing period's peak kW over all its intervals, with the month the period begins in. */
 export interface MeasuredPeak {
 	month: number;
-	/** Null when the charge measured no interval that period (outside its months, days or windows). */
 	kw: number | null;
 }
 
 /**
  * The ratchet's floor on billing demand: its percent of the highest peak among the earlier billing
  * periods it looks at — the `monthsBack` periods just before this one, or those of the 11 before it
- * whose month is listed. Only periods of the same calculation count (earlier history is not known).
+ * whose month is listed. A period's peak is its highest demand over all its intervals, whatever price
+ * or window applied then (as NREL's REopt looks back on the open rate database's ratchets), so a
+ * summer charge's ratchet can be set by a winter peak. Only periods of the same calculation count
+ * (earlier history is not known).
  */
 export function ratchetFloorKw(charge: DemandCharge, earlier: readonly MeasuredPeak[]): number {
 	const { ratchet } = charge;

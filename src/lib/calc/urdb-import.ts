@@ -1,159 +1,120 @@
-import { gridSeasons } from './hour-grid';
-import type { EnergyCharge, TariffInput } from './tariff.schema';
+import { tariffSchema } from './tariff.schema';
+import type { TariffInput } from './tariff.schema';
 import type { UrdbRate } from './urdb.schema';
+import { demandCharges } from './urdb-demand';
+import { type ImportNote, energyCharge } from './urdb-energy';
 
-/** Something of a URDB rate Runrate did not take as it stands, named by its field. */
-export interface ImportNote {
-	code: string;
-	field: string;
-	message: string;
-}
+export type { ImportNote } from './urdb-energy';
 
+/** What an import gives: the tariff (or null), who and when the rate is from, and the notes. */
 export interface UrdbImport {
-	/** Null when the rate's energy cannot be expressed: never priced wrongly. */
+	/** Null when the rate cannot be expressed: refused, never priced wrongly. */
 	tariff: TariffInput | null;
 	meta: {
 		utility: string | null;
 		name: string | null;
 		sector: string | null;
+		startDate: string | null;
+		endDate: string | null;
 		label: string | null;
 		source: string | null;
 	};
 	notes: ImportNote[];
 }
 
-type Tier = NonNullable<UrdbRate['energyratestructure']>[number][number];
+/**
+ * Fields Runrate does not price, named in the notes (never dropped silently): coincident demand,
+ * reactive power, distributed generation and export rules, and free-text attributes and comments.
+ */
+const NOTED =
+	/^(coincident.*|.*kvar.*|demandreactivepowercharge|dgrules|.*netmetering.*|.*sell.*|.*attrs|.*comments)$/i;
 
-/** URDB's price per kWh: `rate + adj` (the adjustment is added, never multiplied; NREL's parsers). */
-const price = (tier: Tier) => (tier.rate ?? 0) + (tier.adj ?? 0);
+/** Unix seconds as a calendar date (UTC), or null. */
+const day = (seconds: number | undefined) =>
+	seconds === undefined ? null : new Date(seconds * 1000).toISOString().slice(0, 10);
 
-/** Fields of demand, export and free text that this import does not read yet, in the notes by name. */
-const UNREAD = [
-	'flatdemandstructure',
-	'demandratestructure',
-	'demandratchetpercentage',
-	'coincidentratestructure',
-	'demandreactivepowercharge',
-	'dgrules',
-	'energyattrs',
-	'demandattrs',
-	'fixedattrs'
-];
-
-/** One period's tiers as Runrate tiers (cumulative bounds, the last unbounded), or why not. */
-function periodTiers(tiers: Tier[], notes: ImportNote[], field: string) {
-	if (tiers.some((t) => t.unit && t.unit !== 'kWh')) {
-		notes.push({
-			code: 'tier-unit',
-			field,
-			message: `Tiers in "${tiers.find((t) => t.unit !== 'kWh')?.unit}" are not imported yet`
-		});
-		return null;
-	}
-	if (tiers.at(-1)?.max !== undefined)
-		notes.push({
-			code: 'last-tier-bounded',
-			field,
-			message:
-				"The last tier has a bound; use above it is charged at the last tier's price, as NREL's engines do"
-		});
-	return tiers.map((t, i) => ({
-		uptoKwh: i === tiers.length - 1 ? null : (t.max ?? null),
-		perKwh: price(t)
-	}));
+/** The fixed charge: `fixedchargefirstmeter` (or the legacy `fixedmonthlycharge`) in its units. */
+function fixedCharges(rate: UrdbRate, notes: ImportNote[]): TariffInput['fixedCharges'] | null {
+	const amount = rate.fixedchargefirstmeter ?? rate.fixedmonthlycharge;
+	if (!amount) return [];
+	const units = rate.fixedchargeunits ?? '$/month';
+	if (units === '$/month') return [{ label: 'Fixed charge', perMonth: amount }];
+	if (units === '$/day') return [{ label: 'Fixed charge', perDay: amount }];
+	if (units === '$/year') return [{ label: 'Fixed charge', perYear: amount }];
+	notes.push({
+		code: 'fixed-unit',
+		field: 'fixedchargeunits',
+		message: `Fixed charges in "${units}" cannot be read; the rate was not imported`
+	});
+	return null;
 }
 
-/** The rate's energy charge: flat, tiered, or time-of-use through its 12 × 24 schedules. */
-function energyCharge(rate: UrdbRate, notes: ImportNote[]): EnergyCharge | null | undefined {
-	const periods = rate.energyratestructure;
-	if (!periods) return undefined;
-	const field = 'energyratestructure';
-	if (periods.some((tiers) => tiers.some((t) => price(t) < 0))) {
-		notes.push({
-			code: 'negative-price',
-			field,
-			message: 'A period has a negative price per kWh (rate + adj)'
-		});
-		return null;
-	}
-	if (periods.length === 1) {
-		const tiers = periodTiers(periods[0]!, notes, field);
-		if (!tiers) return null;
-		return tiers.length === 1
-			? { label: 'Energy', type: 'flat', perKwh: tiers[0]!.perKwh }
-			: { label: 'Energy', type: 'tiered', tiers };
-	}
-	if (periods.some((tiers) => tiers.length > 1)) {
-		notes.push({
-			code: 'tiers-in-tou',
-			field,
-			message: 'Tiers inside time-of-use periods are not imported yet'
-		});
-		return null;
-	}
-	const seasons = gridSeasons(rate.energyweekdayschedule!, rate.energyweekendschedule!);
-	return {
-		label: 'Energy',
-		type: 'tou',
-		seasons: seasons.map((season) => ({
-			months: season.months,
-			otherPerKwh: price(periods[season.otherIndex]![0]!),
-			periods: season.periods.map((p) => ({
-				label: `Period ${p.index + 1}`,
-				perKwh: price(periods[p.index]![0]!),
-				days: p.days,
-				windows: p.windows
-			}))
-		}))
+/** Minimum bills: `mincharge` in its units (or the legacy `minmonthlycharge`) and `annualmincharge`. */
+function minimums(rate: UrdbRate, notes: ImportNote[]) {
+	const out: Pick<TariffInput, 'minimumMonthly' | 'minimumPerDay' | 'minimumPerYear'> = {
+		minimumMonthly: rate.minmonthlycharge ?? null
 	};
+	if (rate.mincharge) {
+		const units = rate.minchargeunits ?? '$/month';
+		if (units === '$/month') out.minimumMonthly = rate.mincharge;
+		else if (units === '$/day') out.minimumPerDay = rate.mincharge;
+		else if (units === '$/year') out.minimumPerYear = rate.mincharge;
+		else {
+			notes.push({
+				code: 'minimum-unit',
+				field: 'minchargeunits',
+				message: `A minimum charge in "${units}" cannot be read; the rate was not imported`
+			});
+			return null;
+		}
+	}
+	if (rate.annualmincharge) out.minimumPerYear = Math.max(out.minimumPerYear ?? 0, rate.annualmincharge);
+	return out;
 }
 
 /**
  * A URDB rate as a Runrate tariff, with notes on what was not taken. Holidays are priced as the
- * weekdays they fall on, as the database's schedules and NREL's engines have no holidays.
+ * weekdays they fall on, as the database's schedules and NREL's engines have no holidays. Anything that
+ * would change the bill and cannot be expressed refuses the whole rate (tariff null, a note says why);
+ * what is produced always passes the tariff schema, or is refused with its first problem as a note.
  */
 export function tariffFromUrdb(rate: UrdbRate): UrdbImport {
 	const notes: ImportNote[] = [];
 	const energy = energyCharge(rate, notes);
-	const monthly = rate.fixedchargefirstmeter ?? rate.fixedmonthlycharge;
-	const units = rate.fixedchargeunits ?? '$/month';
-	const fixedCharges =
-		monthly === undefined || monthly === 0
-			? []
-			: units === '$/day'
-				? [{ label: 'Fixed charge', perDay: monthly }]
-				: [{ label: 'Fixed charge', perMonth: monthly }];
-	if (monthly && units !== '$/month' && units !== '$/day')
+	const demand = demandCharges(rate, notes);
+	const fixed = fixedCharges(rate, notes);
+	const floors = minimums(rate, notes);
+	for (const [field, value] of Object.entries(rate))
+		if (NOTED.test(field) && value !== undefined && value !== null && value !== '' && value !== false)
+			notes.push({ code: 'not-priced', field, message: `${field} is not priced by Runrate` });
+	let tariff: TariffInput | null =
+		energy === null || demand === null || fixed === null || floors === null
+			? null
+			: {
+					currency: 'USD',
+					holidaysAsWeekends: false,
+					fixedCharges: fixed,
+					energyCharges: energy ? [energy] : [],
+					demandCharges: demand,
+					...floors
+				};
+	const checked = tariff && tariffSchema.safeParse(tariff);
+	if (checked && !checked.success) {
 		notes.push({
-			code: 'fixed-unit',
-			field: 'fixedchargeunits',
-			message: `Fixed charges in "${units}" are not imported yet`
+			code: 'invalid',
+			field: 'rate',
+			message: `The rate does not make a valid tariff: ${checked.error.issues[0]?.message}`
 		});
-	if (rate.annualmincharge)
-		notes.push({
-			code: 'annual-minimum',
-			field: 'annualmincharge',
-			message: 'A yearly minimum charge is not imported yet'
-		});
-	const unread = UNREAD.filter((key) => (rate as Record<string, unknown>)[key] !== undefined);
-	for (const field of unread)
-		notes.push({ code: 'not-read', field, message: `${field} is not imported yet` });
-	const demandUnread = unread.some((f) => f.includes('demand'));
+		tariff = null;
+	}
 	return {
-		tariff:
-			energy === null || demandUnread
-				? null
-				: {
-						currency: 'USD',
-						holidaysAsWeekends: false,
-						fixedCharges,
-						energyCharges: energy ? [energy] : [],
-						minimumMonthly: rate.minmonthlycharge ?? null
-					},
+		tariff,
 		meta: {
 			utility: rate.utility ?? null,
 			name: rate.name ?? null,
 			sector: rate.sector ?? null,
+			startDate: day(rate.startdate),
+			endDate: day(rate.enddate),
 			label: rate.label ?? null,
 			source: rate.source ?? rate.uri ?? null
 		},

@@ -49,29 +49,64 @@ export const urdbRateSchema = record('Rate', {
 	fixedchargefirstmeter: amount('Fixed charge', { min: 0, max: 1_000_000 }).optional(),
 	fixedchargeunits: z.string().max(40).optional(),
 	minmonthlycharge: amount('Minimum monthly charge', { min: 0, max: 1_000_000 }).optional(),
-	annualmincharge: amount('Annual minimum charge', { min: 0, max: 100_000_000 }).optional()
+	mincharge: amount('Minimum charge', { min: 0, max: 100_000_000 }).optional(),
+	minchargeunits: z.string().max(40).optional(),
+	annualmincharge: amount('Annual minimum charge', { min: 0, max: 100_000_000 }).optional(),
+	demandratestructure: structure('Demand rate structure').optional(),
+	demandweekdayschedule: hourGrid.optional(),
+	demandweekendschedule: hourGrid.optional(),
+	flatdemandstructure: structure('Flat demand structure').optional(),
+	flatdemandmonths: z
+		.array(z.number().int().min(0), { error: 'Flat demand months must be 12 period numbers' })
+		.length(12, { error: 'Flat demand months must have 12 entries' })
+		.optional(),
+	demandunits: z.string().max(40).optional(),
+	demandwindow: amount('Demand window', { above: 0, max: 1440 }).optional(),
+	demandratchetpercentage: z
+		.array(amount('Ratchet percentage', { min: 0, max: 100 }))
+		.length(12, { error: 'Ratchet percentages must have 12 entries' })
+		.optional(),
+	lookbackPercent: amount('Lookback percent', { min: 0, max: 100 }).optional(),
+	lookbackRange: amount('Lookback range', { min: 0, max: 24, integer: true }).optional(),
+	lookbackMonths: z
+		.array(z.union([z.boolean(), z.number().int().min(0).max(12)]))
+		.max(12)
+		.optional()
 })
 	.loose()
 	.superRefine((rate, ctx) => {
-		const periods = rate.energyratestructure?.length ?? 0;
-		for (const key of ['energyweekdayschedule', 'energyweekendschedule'] as const) {
-			const grid = rate[key];
-			if (rate.energyratestructure && !grid)
-				ctx.addIssue({
-					code: 'custom',
-					path: [key],
-					message: 'An energy rate structure needs its weekday and weekend schedules'
-				});
-			grid?.forEach((row, month) => {
-				const hour = row.findIndex((index) => index >= periods);
-				if (hour >= 0)
+		for (const [kind, structureKey, keys] of [
+			['energy', 'energyratestructure', ['energyweekdayschedule', 'energyweekendschedule']],
+			['demand', 'demandratestructure', ['demandweekdayschedule', 'demandweekendschedule']]
+		] as const) {
+			const periods = rate[structureKey]?.length ?? 0;
+			for (const key of keys) {
+				const grid = rate[key];
+				if (rate[structureKey] && !grid)
 					ctx.addIssue({
 						code: 'custom',
-						path: [key, month, hour],
-						message: `Period ${row[hour]} is not in the energy rate structure (it has ${periods})`
+						path: [key],
+						message: `A ${kind} rate structure needs its weekday and weekend schedules`
 					});
-			});
+				grid?.forEach((row, month) => {
+					const hour = row.findIndex((index) => index >= periods);
+					if (hour >= 0)
+						ctx.addIssue({
+							code: 'custom',
+							path: [key, month, hour],
+							message: `Period ${row[hour]} is not in the ${kind} rate structure (it has ${periods})`
+						});
+				});
+			}
 		}
+		const flat = rate.flatdemandstructure?.length ?? 0;
+		const month = rate.flatdemandmonths?.findIndex((index) => index >= flat) ?? -1;
+		if (month >= 0)
+			ctx.addIssue({
+				code: 'custom',
+				path: ['flatdemandmonths', month],
+				message: `Period ${rate.flatdemandmonths?.[month]} is not in the flat demand structure (it has ${flat})`
+			});
 	});
 
 export type UrdbRate = z.output<typeof urdbRateSchema>;

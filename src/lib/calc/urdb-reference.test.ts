@@ -1,0 +1,84 @@
+import { describe, expect, it } from 'vitest';
+import { calculate } from './calculate';
+import { calculateRequestSchema } from './request.schema';
+import { tariffFromUrdb } from './urdb-import';
+import { urdbRateSchema } from './urdb.schema';
+import { sample, steady, total } from './urdb.fixture';
+
+/**
+ * Bills of open-rate-database rates as NREL's open engines price them, each check value beside its
+ * source (the rates are in tests/fixtures/urdb/, see its README). The engines use no holidays and no
+ * daylight saving: priced in UTC with no holidays.
+ */
+describe('reference bills', () => {
+	it('FPL RS-1 (tiered energy): a steady 2.739726 kW through 2017 costs 2,342.88 in energy', () => {
+		const { tariff } = tariffFromUrdb(sample('fpl-rs1-2015.json'));
+		// Source: NREL REopt test suite (REopt API reo/tests test_tiered_energy_rate / test_demand_ratchet
+		// docstring; REopt.jl test/runtests.jl "Tiered Energy"): 24,000 kWh a year, fixed charge excluded,
+		// 12 × 1,000 × (0.07531 + 0.0119) + 12,000 × (0.09613 + 0.0119) = 2,342.88.
+		expect(total(steady(tariff, 2.739726, '2017-01'), 'energy')).toBeCloseTo(2342.88, 1);
+	});
+
+	it('tiered time-of-use demand: a flat 1,000,000 kWh a year pays 12 × (50 × 0 + (P − 50) × 12)', () => {
+		const { tariff, notes } = tariffFromUrdb(sample('reopt-tiered-tou-demand.json'));
+		expect(notes).toEqual([]);
+		const kw = 1_000_000 / 8760;
+		// Source: NREL REopt.jl test suite (test/runtests.jl, the tiered TOU demand test on
+		// test/scenarios/tiered_tou_demand.json): demand tiers 0 $/kW up to 50 kW, then 12 $/kW, on a flat
+		// load of 1e6 / 8760 kW: 12 × (50 × 0 + (P − 50) × 12) = 9,238.36.
+		const expected = 12 * (50 * 0 + (kw - 50) * 12);
+		expect(total(steady(tariff, kw, '2017-01'), 'demand')).toBeCloseTo(expected, 1);
+	});
+
+	it('a 35 % ratchet over seasonal demand prices (REopt’s lookback case 1) bills 5,302.50 of demand', () => {
+		const { tariff } = tariffFromUrdb(sample('wallingford-primary-northford-2013.json'));
+		const request = calculateRequestSchema.parse({
+			period: { start: '2017-01', months: 12 },
+			timezone: 'UTC',
+			holidays: null,
+			tariff,
+			equipment: [
+				{ name: 'Base load', power: { watts: 1000 }, schedule: { type: 'always' } },
+				{
+					name: 'January surge',
+					power: { watts: 99_000 },
+					months: [1],
+					schedule: { type: 'windows', windows: [{ start: '07:00', end: '08:00' }] }
+				}
+			]
+		});
+		// Source: NREL REopt.jl test suite (test/runtests.jl "Lookback Demand Charges", case 1, on this rate,
+		// URDB label 539f6a23ec4f024411ec8bf9): 1 kW all year with a 100 kW hour in January is billed
+		// 100 × (10.5 + 0.35 × 10.5 × 5 + 0.35 × 11.5 × 6) = 5,302.50 of demand — the ratchet follows the
+		// month's peak across the winter and summer prices. (Runrate's surge repeats each January morning;
+		// the demand it sets is the same 100 kW.)
+		expect(total(calculate(request).periods, 'demand')).toBeCloseTo(5302.5, 1);
+	});
+
+	it('a 35 % ratchet on one whole-month price: one 100 kW January sets 35 kW in every later month', () => {
+		const { tariff } = tariffFromUrdb(
+			urdbRateSchema.parse({
+				flatdemandstructure: [[{ rate: 10.5 }]],
+				demandratchetpercentage: Array(12).fill(0.35)
+			})
+		);
+		const request = calculateRequestSchema.parse({
+			period: { start: '2017-01', months: 12 },
+			timezone: 'UTC',
+			holidays: null,
+			tariff,
+			equipment: [
+				{ name: 'Base load', power: { watts: 1000 }, schedule: { type: 'always' } },
+				{
+					name: 'January surge',
+					power: { watts: 99_000 },
+					months: [1],
+					schedule: { type: 'windows', windows: [{ start: '07:00', end: '08:00' }] }
+				}
+			]
+		});
+		// Derived from the rule (REopt's case 1 above with one price, 10.5 $/kW, in every month):
+		// 100 × 10.5 + 11 × 35 × 10.5 = 5,092.50.
+		expect(total(calculate(request).periods, 'demand')).toBeCloseTo(100 * 10.5 + 11 * 35 * 10.5, 1);
+	});
+});
