@@ -48,6 +48,16 @@ async function post(body: unknown) {
 	return { status: res.status, body: await res.json() };
 }
 
+/** RS-1 with its tiers counted in kWh per kW of demand, which Runrate cannot price: refused with notes. */
+function kwhPerKwRate() {
+	const rate = rs1();
+	const periods = rate.energyratestructure as Array<Array<Record<string, unknown>>>;
+	return {
+		...rate,
+		energyratestructure: periods.map((tiers) => tiers.map((tier) => ({ ...tier, unit: 'kWh/kW' })))
+	};
+}
+
 describe('POST /api/v1/tariffs/from-urdb', () => {
 	it('answers FPL RS-1 with a tariff the tariff schema accepts, its provenance and no notes (200)', async () => {
 		const { status, body } = await post(rs1());
@@ -175,12 +185,12 @@ describe('POST /api/v1/tariffs/from-urdb', () => {
 	});
 
 	it('refuses a rate it cannot price exactly with 422 and the notes, no tariff', async () => {
-		const rate = { ...rs1(), demandratestructure: [[{ rate: 5 }]] };
+		const rate = kwhPerKwRate();
 		const { status, body } = await post(rate);
 		expect(status).toBe(422);
 		expect(body.message).toBe('This rate cannot be priced exactly by Runrate');
 		expect(body.tariff).toBeUndefined();
-		expect(body.notes.map((n: { field: string }) => n.field)).toContain('demandratestructure');
+		expect(body.notes.map((n: { field: string }) => n.field)).toContain('energyratestructure');
 	});
 
 	it('answers 429 once an anonymous client passes the calculation API budget (60 a minute)', async () => {
@@ -329,7 +339,7 @@ describe('the import page saves through the tariff service', () => {
 		const wrongFile = await act('read', 'editor', { file: new File(['x'], 'rate.csv'), json: '' });
 		expect(wrongFile.data.errors).toEqual({ file: 'The file must end in .json.' });
 		const label = `${tag}-demand`;
-		const refusedRate = JSON.stringify({ ...rs1(), label, demandratestructure: [[{ rate: 5 }]] });
+		const refusedRate = JSON.stringify({ ...kwhPerKwRate(), label });
 		const refused = await act('save', 'editor', {
 			json: refusedRate,
 			owner: wsA,

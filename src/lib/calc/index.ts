@@ -170,7 +170,7 @@ export { NUL_MESSAGE, storableText, SURROGATE_MESSAGE, UNSTORABLE, unstorableMes
 export { METERS_PER_FOOT, STANDARD_GRAVITY_M_PER_S2 } from './units';
 export { urdbRateSchema } from './urdb.schema';
 export type { UrdbRate } from './urdb.schema';
-export { tariffFromUrdb } from './urdb-import';
+export { tariffFromUrdb, urdbDate } from './urdb-import';
 export type { ImportNote, UrdbImport } from './urdb-import';
 export { urdbFromTariff } from './urdb-export';
 export type { ExportNote, UrdbExport, UrdbMeta } from './urdb-export';

@@ -30,8 +30,21 @@ const NOTED =
 	/^(coincident.*|.*kvar.*|demandreactivepowercharge|dgrules|.*netmetering.*|.*sell.*|.*attrs|.*comments)$/i;
 
 /** Unix seconds as a calendar date (UTC), or null. */
-const day = (seconds: number | undefined) =>
-	seconds === undefined ? null : new Date(seconds * 1000).toISOString().slice(0, 10);
+const DAY_SECONDS = 86_400;
+
+/**
+ * The calendar date a database timestamp stands for. The database keeps dates as Unix seconds at about
+ * midnight of whatever zone they were entered in (RS-1's end is 23:00 UTC the day before, Georgia
+ * Power's start 01:00 UTC), so the nearest UTC midnight gives the date as entered; a timestamp past
+ * JavaScript's dates or year 9999 means none.
+ */
+export function urdbDate(seconds: number | undefined): string | null {
+	if (seconds === undefined || !Number.isFinite(seconds)) return null;
+	const date = new Date(Math.round(seconds / DAY_SECONDS) * DAY_SECONDS * 1000);
+	const year = date.getUTCFullYear();
+	return Number.isNaN(year) || year < 1 || year > 9999 ? null : date.toISOString().slice(0, 10);
+}
+const day = urdbDate;
 
 /** The fixed charge: `fixedchargefirstmeter` (or the legacy `fixedmonthlycharge`) in its units. */
 function fixedCharges(rate: UrdbRate, notes: ImportNote[]): TariffInput['fixedCharges'] | null {

@@ -1,5 +1,5 @@
 // A converted open-rate-database rate as the library stores it: who bills it, to whom, since when, from where.
-import type { ImportNote, TariffInput } from '$lib/calc';
+import { type ImportNote, type TariffInput, urdbDate } from '$lib/calc';
 import type { CustomerClass } from '$lib/forms/tariff-meta.schema';
 import type { UrdbMeta, UrdbRateFields } from './urdb-read';
 
@@ -15,21 +15,8 @@ const SECTOR_CLASSES: Record<string, CustomerClass> = {
 export const customerClassOf = (sector: string | null): CustomerClass =>
 	SECTOR_CLASSES[(sector ?? '').trim().toLowerCase()] ?? 'other';
 
-const DAY_SECONDS = 86_400;
-
-/**
- * The calendar date a database timestamp stands for. The database keeps dates as Unix seconds at about
- * midnight of whatever zone they were entered in (RS-1's end is 23:00 UTC the day before, Georgia
- * Power's start 01:00 UTC), so the nearest UTC midnight gives the date as entered.
- */
-export function dateOf(unixSeconds: number | undefined): string | null {
-	if (unixSeconds === undefined || !Number.isFinite(unixSeconds)) return null;
-	const day = Math.round(unixSeconds / DAY_SECONDS);
-	const date = new Date(day * DAY_SECONDS * 1000);
-	// The database checks nothing of its timestamps: one past JavaScript's dates or year 9999 means none.
-	const year = date.getUTCFullYear();
-	return Number.isNaN(year) || year < 1 || year > 9999 ? null : date.toISOString().slice(0, 10);
-}
+/** The calendar date a database timestamp stands for (the core's rule: the nearest UTC midnight). */
+export const dateOf = urdbDate;
 
 /** Text cut to `max` characters (an ellipsis marks the cut), as the library's fields hold. */
 const cut = (text: string, max: number) => (text.length <= max ? text : `${text.slice(0, max - 1)}…`);
