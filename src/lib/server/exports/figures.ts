@@ -5,6 +5,7 @@ import {
 	DemandMeter,
 	type Equipment,
 	groupLoads,
+	hasTouTiers,
 	ProfileBook,
 	RateBook,
 	type Schedule,
@@ -64,7 +65,10 @@ export function scenarioFigures(
 	const rates = new RateBook(tariff, calendar);
 	const usage = new UsageMeter(calendar, loads, profiles, rates);
 	const demand = new DemandMeter(calendar, profiles, loads.groups);
-	const touCharges = tariff.energyCharges.flatMap((charge, e) => (charge.type === 'tou' ? [e] : []));
+	// A time-of-use charge with tiers counts kWh, not money, in its columns: its lines are values.
+	const touCharges = tariff.energyCharges.flatMap((charge, e) =>
+		charge.type === 'tou' && !hasTouTiers(charge) ? [e] : []
+	);
 	const schedules: ScheduleFigures[] = loads.groups.map((group) => ({
 		schedule: loads.schedules[group.schedule] ?? { type: 'always' },
 		months: [...group.months.keys()].filter((month) => group.months[month] === 1),
