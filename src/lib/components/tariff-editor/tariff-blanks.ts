@@ -134,14 +134,49 @@ export function setChargeMonths(charge: EnergyChargeInput, months: number[] | un
 	if (last && joining.length) last.months = [...last.months, ...joining].sort((a, b) => a - b);
 }
 
-/** Moves a fixed charge between per month and per day, keeping the amount typed. */
-export function setFixedBasis(charge: FixedChargeInput, basis: 'perMonth' | 'perDay'): void {
-	const other = basis === 'perMonth' ? 'perDay' : 'perMonth';
-	if (!(other in charge)) return;
+export type FixedBasis = 'perMonth' | 'perDay' | 'perYear';
+export const FIXED_BASES: readonly FixedBasis[] = ['perMonth', 'perDay', 'perYear'];
+
+/** How a fixed charge is billed: the one amount key it holds (per month when it holds none). */
+export function fixedBasis(charge: FixedChargeInput): FixedBasis {
+	return FIXED_BASES.find((basis) => basis in charge) ?? 'perMonth';
+}
+
+/** Moves a fixed charge between per month, per day and per year, keeping the amount typed. */
+export function setFixedBasis(charge: FixedChargeInput, basis: FixedBasis): void {
+	const other = fixedBasis(charge);
+	if (other === basis || !(other in charge)) return;
 	const amount = charge[other];
 	const record = charge as Record<string, unknown>;
 	delete record[other];
 	record[basis] = amount;
+}
+
+export type DemandTierInput = NonNullable<DemandChargeInput['tiers']>[number];
+
+/**
+ * Moves a demand charge between one price per kW and tiers by kW. Tiers start from the price typed
+ * (the first 100 kW, then the rest at the same price, round numbers a person types over); back to one
+ * price keeps the first tier's price.
+ */
+export function setDemandPricing(charge: DemandChargeInput, tiered: boolean): void {
+	if (tiered === (charge.tiers !== undefined)) return;
+	if (tiered) {
+		const perKw = typeof charge.perKw === 'number' ? charge.perKw : 0;
+		delete charge.perKw;
+		charge.tiers = [
+			{ uptoKw: 100, perKw },
+			{ uptoKw: null, perKw }
+		];
+	} else {
+		charge.perKw = charge.tiers?.[0]?.perKw ?? 0;
+		delete charge.tiers;
+	}
+}
+
+/** A ratchet a person switches on: 80 % of the highest peak of the 11 months before (typed over). */
+export function blankRatchet(): NonNullable<DemandChargeInput['ratchet']> {
+	return { percent: 80, monthsBack: 11 };
 }
 
 /** Quarter-hour times of day, "00:00" … "23:45"; with `endOfDay` also "24:00". */
