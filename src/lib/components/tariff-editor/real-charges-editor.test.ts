@@ -3,7 +3,8 @@ import { render } from 'svelte/server';
 import { type TariffInput, tariffSchema } from '$lib/calc';
 import { metaDraftFrom, submission } from '$lib/components/tariff-form/tariff-form';
 import TariffEditor from './TariffEditor.svelte';
-import { setDemandPricing, setFixedBasis } from './tariff-blanks';
+import { setDemandPricing } from './demand-blanks';
+import { setFixedBasis } from './tariff-blanks';
 import { tariffIssues, writeDraft } from './tariff-editor';
 
 // An invented tariff with every charge of issue 19 (no real utility's rates), as a stored version
