@@ -67,3 +67,40 @@ test('an editor adds a private tariff with a summer-only time-of-use adder', asy
 	await expect(page.getByText(/Priced on version 1, in force since/)).toBeVisible();
 	await expect(page.getByText(/Published/)).toHaveCount(0);
 });
+
+// The charges real tariffs use (issue 19) in the editor: tiered demand, a ratchet checked at its field,
+// a daily minimum; saved, the tariff page reads them in plain words. Invented rates.
+test('an editor saves tiered, ratcheted demand and a daily minimum', async ({ page }) => {
+	await signInWithPassword(page, 'editor@example.org');
+	await gotoReady(page, '/tariffs/new');
+	const name = `Ratchet ${Date.now()} (invented)`;
+	await page.locator('#meta-utility').fill('Invented Test Power');
+	await page.locator('#meta-name').fill(name);
+	await page.locator('#meta-country').fill('US');
+	await page.locator('#meta-timezone').fill('America/Chicago');
+	await page.getByRole('textbox', { name: 'Source', exact: true }).fill('Invented for a test');
+	await page.locator('#te-currency').fill('USD');
+	await page.locator('#te-energyCharges-0-perKwh').fill('0.1');
+
+	await page.getByRole('button', { name: 'Add a demand charge' }).click();
+	await page.locator('#te-demandCharges-0-pricing').selectOption('tiers');
+	await page.locator('#te-demandCharges-0-tiers-0-perKw').fill('10');
+	await page.locator('#te-demandCharges-0-tiers-1-perKw').fill('15');
+	await page.getByLabel('Ratchet: bill at least a share of an earlier peak').check();
+	const percent = page.locator('#te-demandCharges-0-ratchet-percent');
+	await percent.fill('250');
+	await expect(percent).toHaveAttribute('aria-invalid', 'true');
+	await expect(page.getByText(/Ratchet percent/).first()).toBeVisible();
+	await percent.fill('80');
+	await expect(percent).not.toHaveAttribute('aria-invalid', 'true');
+	await page.locator('#te-minimumPerDay').fill('0.5');
+	await expect(page.getByText('The tariff checks out.')).toBeVisible();
+
+	await page.getByRole('button', { name: 'Save the tariff' }).click();
+	await expect(page.getByRole('heading', { name, level: 1 })).toBeVisible();
+	await expect(
+		page.getByText(/\$10\.00 per kW for the first 100 kW, then \$15\.00 per kW/).first()
+	).toBeVisible();
+	await expect(page.getByText(/billed on at least 80% of the highest peak/).first()).toBeVisible();
+	await expect(page.getByText('Minimum bill: $0.50 a day of the billing period.')).toBeVisible();
+});

@@ -9,6 +9,7 @@ import { type CompareResponse, compare, compareRequestSchema } from '$lib/calc';
 import { comparisonWorkbook } from '$lib/server/exports/comparison-workbook';
 import { exportOf } from '$lib/server/exports/workbook-exports';
 import { gardenRequest, hatcheryRequest } from '$lib/server/exports/workbook-fixtures';
+import { REAL_CHARGES_TARIFF } from '$lib/server/exports/workbook-tariffs';
 
 /**
  * The outside check of the workbook: LibreOffice Calc (Debian's libreoffice-calc-nogui) opens each
@@ -35,7 +36,9 @@ const changedInput = hatcheryRequest({
 const airPumps = changedInput.scenarios[1]?.equipment[1];
 if (airPumps) airPumps.quantity = 3;
 const changedRequest = compareRequestSchema.parse(changedInput);
-const files = { hatchery, garden, stale: { ...hatchery, request: changedRequest } };
+// Every charge of issue 19 (invented rates) on the hatchery's equipment.
+const realCharges = exportOf(hatcheryRequest({ tariff: REAL_CHARGES_TARIFF }), 'Real charges (invented)');
+const files = { hatchery, garden, realCharges, stale: { ...hatchery, request: changedRequest } };
 
 interface Figures {
 	summary: Array<Record<string, number | string | null>>;
@@ -139,6 +142,16 @@ describe('LibreOffice recalculating an exported comparison', () => {
 			garden.response.scenarios[0]?.periods.some((p) => p.charges.some((c) => c.kind === 'minimum'))
 		).toBe(true);
 		expectSame(recalculated.get('garden'), garden.response);
+	});
+
+	it('gets compare()’s figures for tiered time-of-use, daily tiers, tiered and ratcheted demand, yearly fixed charges and every minimum', () => {
+		const lines = realCharges.response.scenarios.flatMap((scenario) =>
+			scenario.periods.flatMap((period) => period.charges.map((charge) => charge.label))
+		);
+		// The fixture makes each rule bite: the daily minimum, the yearly minimum's top-up.
+		expect(lines).toContain('Minimum bill');
+		expect(lines).toContain('Yearly minimum');
+		expectSame(recalculated.get('realCharges'), realCharges.response);
 	});
 
 	it('computes from the inputs, not from the cached results', () => {

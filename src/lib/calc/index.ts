@@ -174,3 +174,4 @@ export { tariffFromUrdb, urdbDate } from './urdb-import';
 export type { ImportNote, UrdbImport } from './urdb-import';
 export { urdbFromTariff } from './urdb-export';
 export type { ExportNote, UrdbExport, UrdbMeta } from './urdb-export';
+export { hasTouTiers } from './rate-columns';

@@ -134,10 +134,18 @@ export function setChargeMonths(charge: EnergyChargeInput, months: number[] | un
 	if (last && joining.length) last.months = [...last.months, ...joining].sort((a, b) => a - b);
 }
 
-/** Moves a fixed charge between per month and per day, keeping the amount typed. */
-export function setFixedBasis(charge: FixedChargeInput, basis: 'perMonth' | 'perDay'): void {
-	const other = basis === 'perMonth' ? 'perDay' : 'perMonth';
-	if (!(other in charge)) return;
+export type FixedBasis = 'perMonth' | 'perDay' | 'perYear';
+export const FIXED_BASES: readonly FixedBasis[] = ['perMonth', 'perDay', 'perYear'];
+
+/** How a fixed charge is billed: the one amount key it holds (per month when it holds none). */
+export function fixedBasis(charge: FixedChargeInput): FixedBasis {
+	return FIXED_BASES.find((basis) => basis in charge) ?? 'perMonth';
+}
+
+/** Moves a fixed charge between per month, per day and per year, keeping the amount typed. */
+export function setFixedBasis(charge: FixedChargeInput, basis: FixedBasis): void {
+	const other = fixedBasis(charge);
+	if (other === basis || !(other in charge)) return;
 	const amount = charge[other];
 	const record = charge as Record<string, unknown>;
 	delete record[other];

@@ -28,13 +28,10 @@ export function tariffIssues(value: TariffInput): EditorIssue[] {
 		if (!match || !issue.message.startsWith(FIXED_UNION)) return issue;
 		const charge = value.fixedCharges?.[Number(match[1])];
 		if (!charge) return issue;
-		const keys = (['perMonth', 'perDay'] as const).filter((key) => key in charge);
+		const keys = (['perMonth', 'perDay', 'perYear'] as const).filter((key) => key in charge);
 		const key = keys.length === 1 ? keys[0] : undefined;
 		if (!key || charge[key] !== undefined) return issue;
-		return {
-			path: `${issue.path}.${key}`,
-			message: `${key === 'perMonth' ? 'Per month' : 'Per day'} is required`
-		};
+		return { path: `${issue.path}.${key}`, message: `${FIELD_NAMES[key]} is required` };
 	});
 }
 
@@ -78,6 +75,16 @@ const FIELD_NAMES: Record<string, string> = {
 	currency: 'Currency',
 	holidaysAsWeekends: 'Holidays priced like weekends',
 	minimumMonthly: 'Minimum per month',
+	minimumPerDay: 'Minimum per day',
+	minimumPerYear: 'Minimum per year',
+	perYear: 'Per year',
+	tiersPer: 'Tier limits count',
+	uptoKw: 'Up to kW',
+	ratchet: 'Ratchet',
+	monthsBack: 'Months back',
+	tierLimitsKwh: 'Tier limits',
+	abovePerKwh: 'Prices above the tier limits',
+	otherAbovePerKwh: 'Prices above the tier limits at all other hours',
 	fixedCharges: 'Fixed charges',
 	energyCharges: 'Energy charges',
 	demandCharges: 'Demand charges',

@@ -5,6 +5,7 @@ import {
 	DemandMeter,
 	type Equipment,
 	groupLoads,
+	hasTouTiers,
 	ProfileBook,
 	RateBook,
 	type Schedule,
@@ -49,6 +50,8 @@ export interface ScenarioFigures {
 	standbyKw: number[];
 	/** Per demand charge, per month: the peak kW the charge prices, or null when it measures nothing. */
 	peakKw: Array<Array<number | null>>;
+	/** Per month: the peak kW over all its intervals (what a ratchet looks back on). */
+	monthPeakKw: number[];
 }
 
 /** The figures of one scenario of a comparison, on its own tariff (or the request's). */
@@ -64,7 +67,10 @@ export function scenarioFigures(
 	const rates = new RateBook(tariff, calendar);
 	const usage = new UsageMeter(calendar, loads, profiles, rates);
 	const demand = new DemandMeter(calendar, profiles, loads.groups);
-	const touCharges = tariff.energyCharges.flatMap((charge, e) => (charge.type === 'tou' ? [e] : []));
+	// A time-of-use charge with tiers counts kWh, not money, in its columns: its lines are values.
+	const touCharges = tariff.energyCharges.flatMap((charge, e) =>
+		charge.type === 'tou' && !hasTouTiers(charge) ? [e] : []
+	);
 	const schedules: ScheduleFigures[] = loads.groups.map((group) => ({
 		schedule: loads.schedules[group.schedule] ?? { type: 'always' },
 		months: [...group.months.keys()].filter((month) => group.months[month] === 1),
@@ -74,6 +80,8 @@ export function scenarioFigures(
 		atPeak: tariff.demandCharges.map(() => [])
 	}));
 	const peakKw: ScenarioFigures['peakKw'] = tariff.demandCharges.map(() => []);
+	const monthPeakKw: number[] = [];
+	const wholeDay = new Uint8Array(256).fill(1);
 	const months = spans.map((span, i) => {
 		const days = calendar.spans[i];
 		if (!days) throw new Error('Calendar is missing a billing period');
@@ -93,6 +101,7 @@ export function scenarioFigures(
 			schedules.forEach((figures, g) => figures.atPeak[k]?.push(peak ? demand.mayRunAt(g, peak) : null));
 		});
 		const [year = 0, month = 0] = span.from.split('-').map(Number);
+		monthPeakKw.push(demand.spanPeak(days, () => wholeDay, 15)?.kw ?? 0);
 		return { label: span.label, month, year, days: days.days, hours: days.hours };
 	});
 	return {
@@ -102,6 +111,7 @@ export function scenarioFigures(
 		deviceSchedule: loads.devices.map((load) => load.group),
 		runKw: loads.devices.map((load) => load.runKw),
 		standbyKw: loads.devices.map((load) => load.standbyKw),
-		peakKw
+		peakKw,
+		monthPeakKw
 	};
 }

@@ -13,10 +13,13 @@ export interface MonthlyPlan {
 	fixed: number[];
 	/** Per energy charge: its line, and for a tiered charge its kWh, exact amount and average rate. */
 	energy: Array<{ line: number; tier: { kwh: number; exact: number; average: number } | null }>;
-	demand: Array<{ peak: number; line: number }>;
+	/** Per demand charge: its measured peak, its billing kW when it has a ratchet, and its line. */
+	demand: Array<{ peak: number; billing: number | null; line: number }>;
 	riders: number[];
 	subtotal: number;
 	minimum: number | null;
+	/** The yearly minimum's top-up (on the last month of the run of 12), when the tariff has one. */
+	yearlyMinimum: number | null;
 	taxes: number[];
 	total: number;
 	last: number;
@@ -48,11 +51,14 @@ export function monthlyPlan(tariff: Tariff, first: number): MonthlyPlan {
 	});
 	const demand = tariff.demandCharges.map((charge) => ({
 		peak: next(`${charge.label}: peak kW`),
+		billing: charge.ratchet ? next(`${charge.label}: billing kW`) : null,
 		line: next(charge.label, true)
 	}));
 	const riders = tariff.riders.map((rider) => next(rider.label, true));
 	const subtotal = next('Subtotal');
-	const minimum = tariff.minimumMonthly != null ? next('Minimum bill', true) : null;
+	const hasFloor = tariff.minimumMonthly != null || tariff.minimumPerDay != null;
+	const minimum = hasFloor ? next('Minimum bill', true) : null;
+	const yearlyMinimum = tariff.minimumPerYear != null ? next('Yearly minimum', true) : null;
 	const taxes = tariff.taxes.map((tax) => next(tax.label, true));
 	const total = next('Total');
 	return {
@@ -64,6 +70,7 @@ export function monthlyPlan(tariff: Tariff, first: number): MonthlyPlan {
 		riders,
 		subtotal,
 		minimum,
+		yearlyMinimum,
 		taxes,
 		total,
 		last: col - 1,

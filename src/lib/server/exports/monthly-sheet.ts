@@ -69,7 +69,9 @@ function writeBlock(out: SheetWriter, scenario: MonthlyScenario, formats: Format
 		for (const cell of cells) {
 			// Working figures (tier kWh, exact amounts, average rates, peaks) are grey beside the lines.
 			const shown = plan.lines.includes(cell.col) || [plan.kwh, plan.subtotal, plan.total].includes(cell.col);
-			out.formula(row, cell.col, cell.formula, cell.result, formats[cell.format], shown ? 'plain' : 'helper');
+			const look = shown ? 'plain' : 'helper';
+			if (cell.formula === null) out.number(row, cell.col, cell.result, formats[cell.format], look);
+			else out.formula(row, cell.col, cell.formula, cell.result, formats[cell.format], look);
 			totals.set(cell.col, (totals.get(cell.col) ?? 0) + cell.result);
 		}
 	});

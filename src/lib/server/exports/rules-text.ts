@@ -17,15 +17,15 @@ export const RULES: ReadonlyArray<readonly [string, string]> = [
 	],
 	[
 		'Energy charges',
-		'Several energy charges add up. A flat charge prices every kWh alike; a tiered charge prices the month’s total kWh tier by tier; a time-of-use charge prices each interval at the rate of the first matching period of its season, or the season’s other rate. A charge limited to some months applies only in those months.'
+		'Several energy charges add up. A flat charge prices every kWh alike; a tiered charge prices the month’s total kWh tier by tier; a time-of-use charge prices each interval at the rate of the first matching period of its season, or the season’s other rate. A charge limited to some months applies only in those months. Daily tiers: bounds given per day are multiplied by the days of the month the charge applies in. Tiers inside time-of-use periods: a season’s tier limits count the month’s kWh across all its periods together; each tier’s kWh is shared among the periods in proportion to their kWh and priced at each period’s price for that tier, so each period’s kWh meet one blended price; a billing period spanning two seasons prorates each season’s limits by its share of the days (limits per day are multiplied by those days).'
 	],
 	[
 		'Demand charges',
-		'The largest kW of the month over the charge’s months, days and windows, counting each device at full running power wherever its schedule may run it (a deliberate worst case) and at standby otherwise; for 60-minute demand, each hour’s kW is the mean of its four quarter hours.'
+		'The largest kW of the month over the charge’s months, days and windows, counting each device at full running power wherever its schedule may run it (a deliberate worst case) and at standby otherwise; for 60-minute demand, each hour’s kW is the mean of its four quarter hours. Demand tiers price the billing kW tier by tier. A ratchet bills the larger of the month’s peak and its percent of the highest whole-month peak (over all intervals, whatever price or window applied) of earlier months of this calculation only: the given number of months just before, or the listed months among the 11 before; a charge limited to some months bills nothing outside them. Demand a ratchet bills in a month that measured none is shared cost.'
 	],
 	[
 		'Fixed charges, riders, minimum bill and taxes',
-		'A per-month charge is billed once a month, a per-day charge × the days in the month. Riders are per kWh on all kWh. Subtotal = fixed + energy + demand + riders; below the minimum, a minimum line adds the difference. Each tax is its percent of that subtotal; taxes do not compound.'
+		'A per-month charge is billed once a month, a per-day charge × the days in the month, a per-year charge a twelfth each month. Riders are per kWh on all kWh. Subtotal = fixed + energy + demand + riders; below the minimum (the larger of the monthly minimum and the minimum per day × the days), a minimum line adds the difference. A yearly minimum is checked on each run of 12 months (n/12 of it for a shorter run): when their bills before tax fall short, the run’s last month adds the difference. Each tax is its percent of the subtotal with the minimum lines; taxes do not compound.'
 	],
 	[
 		'Rounding',
@@ -43,6 +43,7 @@ export const RULES: ReadonlyArray<readonly [string, string]> = [
 
 /** What the workbook holds as values, and why; everything else is a formula. */
 export const VALUES_NOTE = [
-	'Most figures here are live formulas: change a quantity, the watts, amps, volts, power factor, duty, standby watts, costs or life of a device, a flat or tiered rate, a demand rate, a fixed charge, rider, tax or minimum, or the discount rate, escalation, horizon or emission factor, and the workbook recalculates.',
+	'Most figures here are live formulas: change a quantity, the watts, amps, volts, power factor, duty, standby watts, costs or life of a device, a flat or tiered rate (daily tiers too), a demand rate, tier or ratchet percent, a fixed charge (per month, day or year), rider, tax or minimum (per month, day or year), or the discount rate, escalation, horizon or emission factor, and the workbook recalculates.',
+	'Values, not formulas: the monthly lines of a time-of-use charge with tiers inside its periods (its tiers are shared among the periods by their kWh on the 15-minute grid), and each device’s monthly cost on a tariff with such a charge or with tiered or ratcheted demand (its share depends on the month’s price per kW at the peak). The Tariff sheet says which lines these are.',
 	'Some rules are no simple formula, so each scenario sheet holds what Runrate computed for them as values (the schedules table): hours in use and running hours per month (the 15-minute grid, daylight-saving days, weekdays and weekends), the price-weighted hours of each time-of-use charge (its periods, seasons and holidays), and each schedule’s share of running power at each demand peak (when the peak happens). Changing a schedule, active months or a time-of-use rate therefore needs Runrate; a large change in a quantity could also move a demand peak to another moment, which the workbook does not follow.'
 ];

@@ -6,6 +6,7 @@ import type { Formats } from './formats';
 import type { MonthlyPlan } from './monthly-plan';
 import { DEVICE, type ScenarioLayout, scheduleColumn } from './scenario-layout';
 import type { TariffCells } from './tariff-sheet';
+import { devicesAsValues } from './value-lines';
 
 export interface ScenarioSheetInput {
 	out: SheetWriter;
@@ -38,8 +39,10 @@ function masterFormulas(input: ScenarioSheetInput) {
 	// price-weighted hours, each demand rate × its kW at the peak; with taxes; rounded to the cent.
 	const terms = [`${r(DEVICE.kwh)}*${columnName(DEVICE.cost)}$${layout.rateRow}`];
 	for (const block of layout.schedules.tou.values()) terms.push(drawn(block.weighted, block.onWeighted));
-	tariff.demand.forEach((perKw, k) => {
+	tariff.demand.forEach((cells, k) => {
 		const first = layout.schedules.atPeak[k];
+		// Tiered or ratcheted demand has no one price per kW: the costs are then values (value-lines.ts).
+		const perKw = 'perKw' in cells ? cells.perKw : '0';
 		if (first === undefined) return;
 		const share = schedule(first);
 		terms.push(`${perKw}*IF(ISNUMBER(${share}),${standby}+${share}*(${run}-${standby}),0)`);
@@ -117,11 +120,13 @@ function writeResults(input: ScenarioSheetInput, masters: Masters, d: number, ro
 		device.quantity * device.maintenancePerYear,
 		formats.money
 	);
+	const asValues = devicesAsValues(input.figures.tariff);
 	const kwh = result.periods.map((period) => period.equipment[d]?.kwh ?? 0);
 	const cost = result.periods.map((period) => period.equipment[d]?.cost ?? 0);
 	kwh.forEach((value, m) => {
 		put(DEVICE.kwh + m, 'kwh', value, formats.kwh, a1(DEVICE.kwh, layout.firstDevice));
-		put(DEVICE.cost + m, 'cost', cost[m] ?? 0, formats.money, a1(DEVICE.cost, layout.firstDevice));
+		if (asValues) out.number(row, DEVICE.cost + m, cost[m] ?? 0, formats.money);
+		else put(DEVICE.cost + m, 'cost', cost[m] ?? 0, formats.money, a1(DEVICE.cost, layout.firstDevice));
 	});
 	put(DEVICE.annualKwh, 'annualKwh', sum(kwh), formats.kwh);
 	put(DEVICE.annualCost, 'annualCost', sum(cost), formats.money);

@@ -50,9 +50,16 @@ export function writeTotals(input: ScenarioSheetInput): void {
 		out.formula(totalRow, col, column(col), deviceCost, formats.money);
 		// The core's shared cost: the exact fixed charges and the minimum line, grown by the taxes.
 		const fixed = tariff.fixed.map((c) =>
-			'perMonth' in c ? c.perMonth : `${c.perDay}*${monthlyCell(2, m)}`
+			'perMonth' in c ? c.perMonth : 'perYear' in c ? `${c.perYear}/12` : `${c.perDay}*${monthlyCell(2, m)}`
 		);
 		if (monthly.minimum !== null) fixed.push(monthlyCell(monthly.minimum, m));
+		if (monthly.yearlyMinimum !== null) fixed.push(monthlyCell(monthly.yearlyMinimum, m));
+		// A ratchet billing demand in a month that measured none: no device caused it, all share it.
+		monthly.demand.forEach((cols, k) => {
+			if (cols.billing !== null && !((figures.peakKw[k]?.[m] ?? 0) > 0)) {
+				fixed.push(monthlyCell(cols.line, m));
+			}
+		});
 		const taxed = tariff.taxRate ? `(${fixed.join('+')})*(1+${tariff.taxRate})` : fixed.join('+');
 		out.formula(
 			sharedRow,
@@ -82,7 +89,12 @@ export function writeTotals(input: ScenarioSheetInput): void {
 				rate += charge.perKwh;
 			} else if (tier && charge.type === 'tiered') {
 				rates.push(monthlyCell(tier.average, m));
-				rate += period.kwh > 0 ? tieredAmount(charge.tiers, period.kwh) / period.kwh : 0;
+				const scale = charge.tiersPer === 'day' ? period.days : 1;
+				const tiers = charge.tiers.map((t) => ({
+					...t,
+					uptoKwh: t.uptoKwh === null ? null : t.uptoKwh * scale
+				}));
+				rate += period.kwh > 0 ? tieredAmount(tiers, period.kwh) / period.kwh : 0;
 			}
 		});
 		out.formula(rateRow, col, rates.join('+') || '0', rate, formats.rate);

@@ -2,21 +2,25 @@ import type { Tariff } from '$lib/calc';
 import { demandText, riderText, taxText } from '$lib/text/tariff';
 import type { SheetWriter } from './cells';
 import { formatsFor } from './formats';
-import { type EnergyCells, TariffRows } from './tariff-rows';
+import { type DemandCells, type EnergyCells, TariffRows } from './tariff-rows';
+import { valueReasons } from './value-lines';
 
 /** Where a tariff's figures sit on the Tariff sheet, as fixed references the other sheets use. */
 export interface TariffCells {
 	tariff: Tariff;
-	fixed: Array<{ perMonth: string } | { perDay: string }>;
+	fixed: Array<{ perMonth: string } | { perDay: string } | { perYear: string }>;
 	/** Per energy charge: a flat rate, tier rows, or null for time-of-use (priced through computed values). */
 	energy: EnergyCells[];
-	demand: string[];
+	demand: DemandCells[];
 	riders: string[];
 	/** The riders' sum per kWh, and the taxes' sum as a fraction (null when the tariff has none). */
 	ridersPerKwh: string | null;
 	taxRate: string | null;
 	taxes: string[];
+	/** The minimum bills: per month, per day (× the days), per year (on the run of 12 periods). */
 	minimum: string | null;
+	minimumPerDay: string | null;
+	minimumPerYear: string | null;
 }
 
 export interface TariffUse {
@@ -29,7 +33,11 @@ export interface TariffUse {
 const sum = (values: readonly number[]) => values.reduce((total, value) => total + value, 0);
 
 const MINIMUM_NOTE = 'A minimum line adds the difference when the subtotal is below it';
-const COLUMNS = ['Kind', 'Charge', 'Rate or amount', 'Unit', 'Up to kWh', 'When, and notes'];
+const DAILY_MINIMUM_NOTE =
+	'× the days of the month; with a monthly minimum too, the larger of the two is the floor';
+const YEARLY_MINIMUM_NOTE =
+	'On the 12 months together (n/12 of it for fewer): the last month adds what their bills before tax fall short';
+const COLUMNS = ['Kind', 'Charge', 'Rate or amount', 'Unit', 'Up to (kWh or kW)', 'When, and notes'];
 
 /** Writes one block per distinct tariff; answers the cells of each, in the order given. */
 export function writeTariffSheet(out: SheetWriter, uses: readonly TariffUse[]): TariffCells[] {
@@ -67,29 +75,26 @@ function writeBlock(out: SheetWriter, use: TariffUse, start: number): { cells: T
 	out.text(start + 2, 1, `Currency ${currency}. Public holidays price as weekends: ${holidays}.`);
 	out.headers(start + 3, 1, COLUMNS);
 	const rows = new TariffRows(out, formats, start + 4);
-	const fixed = tariff.fixedCharges.map((charge) =>
-		charge.perMonth !== undefined
-			? { perMonth: rows.put('Fixed', charge.label, charge.perMonth, formats.money, 'per month') }
-			: { perDay: rows.put('Fixed', charge.label, charge.perDay ?? 0, formats.money, 'per day') }
-	);
+	const fixed = tariff.fixedCharges.map((charge) => {
+		if (charge.perMonth !== undefined) {
+			return { perMonth: rows.put('Fixed', charge.label, charge.perMonth, formats.money, 'per month') };
+		}
+		if (charge.perYear !== undefined) {
+			const note = 'A twelfth each month';
+			return { perYear: rows.put('Fixed', charge.label, charge.perYear, formats.money, 'per year', note) };
+		}
+		return { perDay: rows.put('Fixed', charge.label, charge.perDay ?? 0, formats.money, 'per day') };
+	});
 	const energy = tariff.energyCharges.map((charge) => rows.energy(charge));
-	const demand = tariff.demandCharges.map((charge) =>
-		rows.put('Demand', charge.label, charge.perKw ?? 0, formats.rate, 'per kW', demandText(charge, currency))
-	);
+	const demand = tariff.demandCharges.map((charge) => rows.demand(charge, demandText(charge, currency)));
 	const riders = tariff.riders.map((rider) =>
 		rows.put('Rider', rider.label, rider.perKwh, formats.rate, 'per kWh', riderText(rider.perKwh, currency))
 	);
-	const minimum =
-		tariff.minimumMonthly != null
-			? rows.put(
-					'Minimum bill',
-					'Minimum monthly',
-					tariff.minimumMonthly,
-					formats.money,
-					'per month',
-					MINIMUM_NOTE
-				)
-			: null;
+	const floor = (amount: number | null | undefined, label: string, unit: string, note: string) =>
+		amount != null ? rows.put('Minimum bill', label, amount, formats.money, unit, note) : null;
+	const minimum = floor(tariff.minimumMonthly, 'Minimum monthly', 'per month', MINIMUM_NOTE);
+	const minimumPerDay = floor(tariff.minimumPerDay, 'Minimum per day', 'per day', DAILY_MINIMUM_NOTE);
+	const minimumPerYear = floor(tariff.minimumPerYear, 'Minimum per year', 'per year', YEARLY_MINIMUM_NOTE);
 	const taxes = tariff.taxes.map((tax) =>
 		rows.put('Tax', tax.label, tax.percent, '0.####', 'percent', taxText(tax.percent))
 	);
@@ -101,8 +106,21 @@ function writeBlock(out: SheetWriter, use: TariffUse, start: number): { cells: T
 	const taxFormula = taxes.map((tax) => `${tax}/100`).join('+');
 	const taxRate =
 		taxes.length > 0 ? rows.helper('Taxes together (fraction)', taxFormula, taxSum, formats.fraction) : null;
+	for (const reason of valueReasons(tariff)) rows.note(reason);
 	return {
-		cells: { tariff, fixed, energy, demand, riders, ridersPerKwh, taxRate, taxes, minimum },
+		cells: {
+			tariff,
+			fixed,
+			energy,
+			demand,
+			riders,
+			ridersPerKwh,
+			taxRate,
+			taxes,
+			minimum,
+			minimumPerDay,
+			minimumPerYear
+		},
 		next: rows.row
 	};
 }

@@ -86,3 +86,78 @@ export const pump = (more: Partial<EquipmentInput> = {}): EquipmentInput => ({
 	maintenancePerYear: 45,
 	...more
 });
+
+/**
+ * Every charge of issue 19 at once (invented rates): a yearly and a daily fixed charge, a time-of-use
+ * charge with tiers inside its periods, daily-allowance tiers, tiered demand with a 12-period ratchet,
+ * a demand ratchet on listed months, monthly, daily and yearly minimums (the yearly one set to bite),
+ * and a tax.
+ */
+export const REAL_CHARGES_TARIFF: TariffInput = {
+	currency: 'USD',
+	fixedCharges: [
+		{ label: 'Meter charge', perYear: 150 },
+		{ label: 'Service charge', perDay: 0.3 }
+	],
+	energyCharges: [
+		{
+			label: 'Supply',
+			type: 'tou',
+			seasons: [
+				{
+					months: [6, 7, 8, 9],
+					tierLimitsKwh: [400, 900],
+					periods: [
+						{
+							label: 'On-peak',
+							perKwh: 0.24,
+							abovePerKwh: [0.3, 0.36],
+							days: 'weekdays',
+							windows: [{ start: '14:00', end: '20:00' }]
+						}
+					],
+					otherPerKwh: 0.1,
+					otherAbovePerKwh: [0.13, 0.15]
+				},
+				{
+					months: [1, 2, 3, 4, 5, 10, 11, 12],
+					tierLimitsKwh: [600],
+					periods: [],
+					otherPerKwh: 0.09,
+					otherAbovePerKwh: [0.11]
+				}
+			]
+		},
+		{
+			label: 'Delivery',
+			type: 'tiered',
+			tiersPer: 'day',
+			tiers: [
+				{ uptoKwh: 12, perKwh: 0.03 },
+				{ uptoKwh: 30, perKwh: 0.045 },
+				{ uptoKwh: null, perKwh: 0.06 }
+			]
+		}
+	],
+	demandCharges: [
+		{
+			label: 'Demand',
+			tiers: [
+				{ uptoKw: 2, perKw: 6 },
+				{ uptoKw: null, perKw: 9 }
+			],
+			ratchet: { percent: 80, monthsBack: 11 }
+		},
+		{
+			label: 'Winter demand',
+			perKw: 2.5,
+			intervalMinutes: 60,
+			months: [1, 2, 3, 11, 12],
+			ratchet: { percent: 50, months: [1, 2] }
+		}
+	],
+	taxes: [{ label: 'Sales tax', percent: 5 }],
+	minimumMonthly: 20,
+	minimumPerDay: 6.5,
+	minimumPerYear: 4000
+};

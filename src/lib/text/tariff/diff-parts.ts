@@ -2,77 +2,46 @@
 import {
 	type EnergyInput,
 	type TierInput,
-	type TouSeasonInput,
 	figureText,
 	limitsMonths,
 	listText,
 	moneyText,
-	monthsText,
-	whenText
+	monthsText
 } from './rate-phrases';
-import { energySentences, labelWithMonths, tiersText, touPeriodText } from './charge-sentences';
+import { energySentences, tiersText } from './charge-sentences';
+import { type TiersPer, perDayWords } from './tou-sentences';
+import { seasonChanges } from './season-diff';
 
-export interface Labelled {
-	label: string;
-}
-
-export interface ListWords<T> {
-	added: (item: T) => string;
-	removed: (item: T) => string;
-	changed: (before: T, after: T) => string[];
-}
-
-/** Pairs two versions' items by label (case and spaces ignored; repeated labels pair in order). */
-export function diffList<T extends Labelled>(
-	before: readonly T[],
-	after: readonly T[],
-	words: ListWords<T>
-): string[] {
-	const key = (item: T) => item.label.trim().toLowerCase();
-	const left = [...before];
-	const lines = after.flatMap((item) => {
-		const i = left.findIndex((old) => key(old) === key(item));
-		const [old] = i < 0 ? [] : left.splice(i, 1);
-		return old ? words.changed(old, item) : [words.added(item)];
-	});
-	return [...lines, ...left.map(words.removed)];
-}
+export { type Labelled, type ListWords, diffList } from './pair-by-label';
 
 const TYPE_WORDS = { flat: 'flat', tiered: 'tiered', tou: 'time-of-use' };
 
-/** "first 500 kWh", "500 to 1,000 kWh", "above 1,000 kWh". */
-function tierName(tiers: readonly TierInput[], i: number): string {
+/** "first 500 kWh", "500 to 1,000 kWh", "above 1,000 kWh" (" a day" when bounds are per day). */
+function tierName(tiers: readonly TierInput[], i: number, per: TiersPer): string {
 	const upto = tiers[i]?.uptoKwh ?? null;
 	const from = i === 0 ? 0 : (tiers[i - 1]?.uptoKwh ?? 0);
-	if (upto === null) return i === 0 ? 'all kWh' : `above ${figureText(from)} kWh`;
-	return i === 0 ? `first ${figureText(upto)} kWh` : `${figureText(from)} to ${figureText(upto)} kWh`;
+	const day = perDayWords(per);
+	if (upto === null) return i === 0 ? 'all kWh' : `above ${figureText(from)} kWh${day}`;
+	return i === 0
+		? `first ${figureText(upto)} kWh${day}`
+		: `${figureText(from)} to ${figureText(upto)} kWh${day}`;
 }
 
-function seasonChanges(label: string, a: TouSeasonInput, b: TouSeasonInput, ca: string, cb: string) {
-	const name = labelWithMonths(label, b.months);
-	const lines = diffList(a.periods, b.periods, {
-		added: (period) => `${name}: added ${touPeriodText(period, cb)}`,
-		removed: (period) => `${name}: ${period.label} removed`,
-		changed: (x, y) => [
-			...(x.perKwh !== y.perKwh
-				? [`${name}, ${y.label}: ${moneyText(x.perKwh, ca)} → ${moneyText(y.perKwh, cb)} per kWh`]
-				: []),
-			...(whenText(x.days, x.windows) !== whenText(y.days, y.windows)
-				? [`${name}, ${y.label}: now ${whenText(y.days, y.windows)}`]
-				: [])
-		]
-	});
-	if (a.otherPerKwh !== b.otherPerKwh) {
-		lines.push(
-			`${name}, other times: ${moneyText(a.otherPerKwh, ca)} → ${moneyText(b.otherPerKwh, cb)} per kWh`
-		);
-	}
-	return lines;
-}
+const perWords = (per: TiersPer) => (per === 'day' ? 'per day' : 'per billing period');
 
+/**
+ * What changed in an energy charge of the same label, one line per change; a change of type, of
+ * seasons or of whether tier bounds are per day restates the whole charge after one line saying so.
+ */
 export function energyChanges(a: EnergyInput, b: EnergyInput, ca: string, cb: string): string[] {
 	if (a.type !== b.type) {
 		return [`${b.label}: now ${TYPE_WORDS[b.type]} (was ${TYPE_WORDS[a.type]})`, ...energySentences(b, cb)];
+	}
+	const perA = a.type === 'flat' ? undefined : (a.tiersPer ?? 'period');
+	const perB = b.type === 'flat' ? undefined : (b.tiersPer ?? 'period');
+	if (perA !== perB) {
+		const now = `${b.label}: tier bounds now ${perWords(perB)} (were ${perWords(perA)})`;
+		return [now, ...energySentences(b, cb)];
 	}
 	if (a.type === 'tou' && b.type === 'tou') {
 		const seasonsA = a.seasons.map((season) => monthsText(season.months));
@@ -83,7 +52,7 @@ export function energyChanges(a: EnergyInput, b: EnergyInput, ca: string, cb: st
 		}
 		return b.seasons.flatMap((season, s) => {
 			const old = a.seasons[s];
-			return old ? seasonChanges(b.label, old, season, ca, cb) : [];
+			return old ? seasonChanges(b.label, old, season, [ca, cb], b.tiersPer) : [];
 		});
 	}
 	if (a.type === 'tou' || b.type === 'tou') return [];
@@ -105,7 +74,7 @@ export function energyChanges(a: EnergyInput, b: EnergyInput, ca: string, cb: st
 				const old = a.tiers[i];
 				if (!old || old.perKwh === tier.perKwh) return;
 				const rates = `${moneyText(old.perKwh, ca)} → ${moneyText(tier.perKwh, cb)} per kWh`;
-				lines.push(`${b.label}, ${tierName(b.tiers, i)}: ${rates}`);
+				lines.push(`${b.label}, ${tierName(b.tiers, i, b.tiersPer)}: ${rates}`);
 			});
 		}
 	}

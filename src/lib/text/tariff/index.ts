@@ -4,6 +4,9 @@
  */
 export * from './rate-phrases';
 export * from './charge-sentences';
+export * from './tou-sentences';
+export * from './demand-sentences';
+export { minimumLines } from './minimum-sentences';
 export { type TariffSection, describeTariff } from './tariff-summary';
 export { describeTariffDiff } from './version-diff';
 export { referenceBasisText, versionInForceText } from './reference-basis';

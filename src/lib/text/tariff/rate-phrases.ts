@@ -26,6 +26,11 @@ export function moneyText(amount: number, currency: string): string {
 	return format ? format.format(amount) : `${currency} ${figure(amount, 5)}`;
 }
 
+/** "$0.18 per kWh". */
+export function perKwhText(perKwh: number, currency: string): string {
+	return `${moneyText(perKwh, currency)} per kWh`;
+}
+
 /** A plain figure: 4 is "4", 1000 is "1,000", 4.125 is "4.125". */
 export function figureText(value: number): string {
 	return value.toLocaleString('en-US', { maximumFractionDigits: 5 });
@@ -79,4 +84,9 @@ export function whenText(days: DaysInput, windows: readonly WindowInput[] | unde
 	const dayWords = days === 'weekdays' || days === 'weekends' ? `on ${days}` : 'every day';
 	const times = windowsText(windows);
 	return times ? `${dayWords} ${times}` : dayWords;
+}
+
+/** "Energy", "Energy, June–September": the label with the months a charge is limited to. */
+export function labelWithMonths(label: string, months: readonly number[] | undefined): string {
+	return limitsMonths(months) ? `${label}, ${monthsText(months)}` : label;
 }

@@ -1,7 +1,8 @@
 /** The tariff page's plain-words description: each charge of a tariff in sentences, grouped by kind. */
 import type { AnyTariff } from './rate-phrases';
-import { moneyText } from './rate-phrases';
-import { demandText, energySentences, fixedText, riderText, taxText } from './charge-sentences';
+import { energySentences, fixedText, riderText, taxText } from './charge-sentences';
+import { demandText } from './demand-sentences';
+import { minimumLines } from './minimum-sentences';
 
 /** One block of the tariff page's plain-words description. */
 export interface TariffSection {
@@ -52,12 +53,7 @@ export function describeTariff(tariff: AnyTariff): TariffSection[] {
 		'Taxes',
 		(tariff.taxes ?? []).map((tax) => `${tax.label}: ${taxText(tax.percent)}.`)
 	);
-	if (tariff.minimumMonthly !== null && tariff.minimumMonthly !== undefined) {
-		add('Minimum bill', [
-			`Minimum bill: ${moneyText(tariff.minimumMonthly, currency)} a month.`,
-			'If the charges before tax come to less, the bill is raised to this amount before tax is added.'
-		]);
-	}
+	add('Minimum bill', minimumLines(tariff));
 	if (splitsWeekends(tariff)) {
 		add('Public holidays', [
 			(tariff.holidaysAsWeekends ?? true)

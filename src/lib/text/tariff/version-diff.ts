@@ -1,16 +1,38 @@
 /** The version history's words: what changed between two versions of a tariff, one line per change. */
 import { type AnyTariff, figureText, moneyText } from './rate-phrases';
-import { type FixedInput, demandText, energySentences, fixedText } from './charge-sentences';
+import { type FixedInput, energySentences, fixedText } from './charge-sentences';
+import { demandText } from './demand-sentences';
+import { demandChanges } from './demand-diff';
 import { type Labelled, diffList, energyChanges } from './diff-parts';
+
+const fixedUnit = (charge: FixedInput) =>
+	charge.perMonth !== undefined ? 'a month' : charge.perYear !== undefined ? 'a year' : 'a day';
 
 /** "$12.50 → $14.00 a month", or "$12.50 a month → $0.45 a day" when the charge changes kind. */
 function fixedChanges(a: FixedInput, b: FixedInput, ca: string, cb: string): string[] {
 	if (fixedText(a, ca) === fixedText(b, cb)) return [];
-	const monthly = (charge: FixedInput) => charge.perMonth !== undefined;
-	if (monthly(a) !== monthly(b)) return [`${b.label}: ${fixedText(a, ca)} → ${fixedText(b, cb)}`];
-	const amount = (charge: FixedInput) => charge.perMonth ?? charge.perDay ?? 0;
-	const unit = monthly(b) ? 'a month' : 'a day';
-	return [`${b.label}: ${moneyText(amount(a), ca)} → ${moneyText(amount(b), cb)} ${unit}`];
+	if (fixedUnit(a) !== fixedUnit(b)) return [`${b.label}: ${fixedText(a, ca)} → ${fixedText(b, cb)}`];
+	const amount = (charge: FixedInput) => charge.perMonth ?? charge.perDay ?? charge.perYear ?? 0;
+	return [`${b.label}: ${moneyText(amount(a), ca)} → ${moneyText(amount(b), cb)} ${fixedUnit(b)}`];
+}
+
+const MINIMUMS = [
+	['minimumMonthly', 'Minimum bill', 'a month'],
+	['minimumPerDay', 'Daily minimum bill', 'a day'],
+	['minimumPerYear', 'Yearly minimum bill', 'a year']
+] as const;
+
+/** "Added minimum bill $15.00 a month", "Yearly minimum bill: $200.00 → $240.00 a year", "… removed". */
+function minimumChanges(before: AnyTariff, after: AnyTariff): string[] {
+	return MINIMUMS.flatMap(([key, name, unit]) => {
+		const a = before[key] ?? null;
+		const b = after[key] ?? null;
+		if (a === null && b !== null)
+			return [`Added ${name.toLowerCase()} ${moneyText(b, after.currency)} ${unit}`];
+		if (a !== null && b === null) return [`${name} removed`];
+		if (a === null || b === null || a === b) return [];
+		return [`${name}: ${moneyText(a, before.currency)} → ${moneyText(b, after.currency)} ${unit}`];
+	});
 }
 
 /**
@@ -45,14 +67,7 @@ export function describeTariffDiff(before: AnyTariff, after: AnyTariff): string[
 		...diffList(before.demandCharges ?? [], after.demandCharges ?? [], {
 			added: (charge) => `Added demand charge ${charge.label} ${demandText(charge, cb)}`,
 			removed,
-			changed: (x, y) => [
-				...(x.perKw !== undefined && y.perKw !== undefined && x.perKw !== y.perKw
-					? [`${y.label}: ${moneyText(x.perKw, ca)} → ${moneyText(y.perKw, cb)} per kW`]
-					: []),
-				...(demandText({ ...x, perKw: y.perKw }, cb) !== demandText(y, cb)
-					? [`${y.label}: now ${demandText(y, cb)}`]
-					: [])
-			]
+			changed: (x, y) => demandChanges(x, y, ca, cb)
 		}),
 		...diffList(before.riders ?? [], after.riders ?? [], {
 			added: (rider) => `Added rider ${rider.label} ${moneyText(rider.perKwh, cb)} per kWh`,
@@ -69,12 +84,6 @@ export function describeTariffDiff(before: AnyTariff, after: AnyTariff): string[
 				x.percent === y.percent ? [] : [`${y.label}: ${figureText(x.percent)}% → ${figureText(y.percent)}%`]
 		})
 	);
-	const minA = before.minimumMonthly ?? null;
-	const minB = after.minimumMonthly ?? null;
-	if (minA === null && minB !== null) lines.push(`Added minimum bill ${moneyText(minB, cb)} a month`);
-	else if (minA !== null && minB === null) lines.push('Minimum bill removed');
-	else if (minA !== null && minB !== null && minA !== minB) {
-		lines.push(`Minimum bill: ${moneyText(minA, ca)} → ${moneyText(minB, cb)} a month`);
-	}
+	lines.push(...minimumChanges(before, after));
 	return lines;
 }
