@@ -59,7 +59,7 @@ function kwhPerKwRate() {
 }
 
 describe('POST /api/v1/tariffs/from-urdb', () => {
-	it('answers FPL RS-1 with a tariff the tariff schema accepts, its provenance and no notes (200)', async () => {
+	it('answers FPL RS-1 with a tariff the tariff schema accepts, its provenance and its comments named (200)', async () => {
 		const { status, body } = await post(rs1());
 		expect(status).toBe(200);
 		expect(tariffSchema.safeParse(body.tariff).success).toBe(true);
@@ -73,7 +73,8 @@ describe('POST /api/v1/tariffs/from-urdb', () => {
 			startDate: '2015-06-01',
 			endDate: '2015-08-31'
 		});
-		expect(body.notes).toEqual([]);
+		// The rate's free-text comments are named, never silently dropped.
+		expect(body.notes.map((note: { field: string }) => note.field)).toEqual(['energycomments']);
 	});
 
 	it('unwraps the database API answer of one rate: Georgia Power TOU-REO (200)', async () => {
