@@ -166,3 +166,5 @@ export { RateBook } from './rates';
 export { dayProfile } from './schedule';
 export { NUL_MESSAGE, storableText, SURROGATE_MESSAGE, UNSTORABLE, unstorableMessage } from './storable-text';
 export { METERS_PER_FOOT, STANDARD_GRAVITY_M_PER_S2 } from './units';
+export { urdbRateSchema } from './urdb.schema';
+export { tariffFromUrdb } from './urdb-import';

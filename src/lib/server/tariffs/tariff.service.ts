@@ -122,9 +122,12 @@ type NewTariff = {
 	structure: TariffInput;
 	workspaceId: string | null;
 	copiedFromId?: string;
+	/** The open rate database's label of the rate it was imported from. */
+	urdbLabel?: string | null;
 };
 
-async function insertTariff(tx: Tx, input: NewTariff, author: Author): Promise<string> {
+/** Inserts a tariff and its first version inside the caller's transaction (the bulk import's duplicate check). */
+export async function insertTariff(tx: Tx, input: NewTariff, author: Author): Promise<string> {
 	const { holidays, ...meta } = input.meta;
 	const [row] = await tx
 		.insert(tariffs)
@@ -133,6 +136,7 @@ async function insertTariff(tx: Tx, input: NewTariff, author: Author): Promise<s
 			holidays,
 			workspaceId: input.workspaceId,
 			copiedFromId: input.copiedFromId ?? null,
+			urdbLabel: input.urdbLabel ?? null,
 			revision: 1,
 			createdBy: author.id
 		})
