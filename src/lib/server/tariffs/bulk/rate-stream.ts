@@ -56,9 +56,12 @@ async function* pieces(source: AsyncIterable<Uint8Array>, progress: { bytes: num
 
 /** stream-json's parser, fed piece by piece, its tokens in order; the end of input flushes it. */
 async function* tokensOf(source: AsyncIterable<Uint8Array>, progress: { bytes: number }) {
-	const parse = parser({ packValues: false, streamValues: true });
-	for await (const piece of pieces(source, progress)) yield* parse(piece) as AsyncIterable<Token>;
-	yield* parse(none) as AsyncIterable<Token>;
+	// At run time the parser is stream-chain's gen(): each call answers an async iterable of tokens.
+	const parse = parser({ packValues: false, streamValues: true }) as unknown as (
+		input: Buffer | typeof none
+	) => AsyncIterable<Token>;
+	for await (const piece of pieces(source, progress)) yield* parse(piece);
+	yield* parse(none);
 }
 
 /**
