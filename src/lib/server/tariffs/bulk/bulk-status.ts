@@ -32,7 +32,8 @@ const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 /** Stores the running report on the job while it is active (a finished job's output is pg-boss's). */
 export async function writeProgress(jobId: string, report: BulkReport): Promise<void> {
-	await client`update pgboss.job set output = ${client.json(report as never)}
+	// Sent as text and cast, so the driver does not encode the JSON a second time.
+	await client`update pgboss.job set output = ${JSON.stringify(report)}::text::jsonb
 		where name = ${BULK_JOB} and id = ${jobId} and state = 'active'`;
 }
 
