@@ -123,7 +123,7 @@ describe('a small file: 3 good rates, 1 broken, 1 duplicate label, 1 filtered ou
 			effectiveTo: '2015-08-30',
 			source: RS1.uri
 		});
-		expect(first.version.structure.energyCharges[0]).toMatchObject({ type: 'tiered' });
+		expect(first.version.structure.energyCharges?.[0]).toMatchObject({ type: 'tiered' });
 		expect(report.importedList.find((r) => r.label === label(1))?.id).toBe(first.tariff.id);
 		expect(report.presentList[0]!.id).toBe(first.tariff.id);
 		// The upload's parts leave the store once the import is over.
