@@ -1,7 +1,15 @@
 import { bulkImportJob } from './bulk-job';
 import { bulkFiltersSchema, filtersFromForm, type BulkFilters } from './bulk-options';
 import type { Author } from './bulk-save';
-import { isUploadId, MAX_FILE_BYTES, MAX_PARTS, PART_BYTES, partSizes, putPart } from './bulk-upload';
+import {
+	dropUpload,
+	isUploadId,
+	MAX_FILE_BYTES,
+	MAX_PARTS,
+	PART_BYTES,
+	partSizes,
+	putPart
+} from './bulk-upload';
 
 /**
  * Starts a bulk import from the admin page's form: the filters chosen before import, and the file,
@@ -73,7 +81,14 @@ export async function startBulkImport(form: FormData, author: Author): Promise<S
 			const field = String(issue.path[0] ?? 'form');
 			errors[field] ??= issue.message;
 		}
-	if (Object.keys(errors).length) return { ok: false, status: 400, errors, values };
+	if (Object.keys(errors).length) {
+		// The page sent the file before the form: its parts go, and the next try sends it again.
+		const uploadId = text(form, 'uploadId');
+		const parts = Number(text(form, 'parts'));
+		if (isUploadId(uploadId) && Number.isInteger(parts) && parts >= 1 && parts <= MAX_PARTS)
+			await dropUpload(uploadId, parts);
+		return { ok: false, status: 400, errors, values };
+	}
 	const stored = await storedFile(form);
 	if ('error' in stored) return { ok: false, status: 400, errors: { file: stored.error }, values };
 	const data = { ...stored, filters: filters.data as BulkFilters, author };
