@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
 import { randomUUID } from 'node:crypto';
-import { and, eq, inArray, isNull } from 'drizzle-orm';
+import { and, eq, inArray, isNull, like } from 'drizzle-orm';
 import { client, db } from '$lib/server/db';
 import { tariffs, tariffVersions } from '$lib/server/db/schema';
 import { startJobs, stopJobs } from '$lib/server/jobs';
@@ -60,6 +60,8 @@ beforeAll(async () => {
 });
 
 afterAll(async () => {
+	// Hundreds of public tariffs would crowd the site form's choices in the files that run later.
+	await db.delete(tariffs).where(like(tariffs.urdbLabel, `${tag}-%`));
 	await stopJobs();
 	await client.end({ timeout: 5 });
 });
@@ -146,6 +148,23 @@ describe('a small file: 3 good rates, 1 broken, 1 duplicate label, 1 filtered ou
 		expect(report).toMatchObject({ read: 2, imported: 1, filteredByUtility: 1 });
 		expect((await publicByLabel([label(7), label(8)])).map((s) => s.tariff.urdbLabel)).toEqual([label(8)]);
 	});
+});
+
+describe('a larger file', () => {
+	it('imports 300 rates read from parts of 64 kB, each saved in its own transaction (time logged)', async () => {
+		const labels = Array.from({ length: 300 }, (_, i) => `${tag}-many-${i}`);
+		const text = JSON.stringify(labels.map((l) => ({ ...RS1, label: l })));
+		const started = performance.now();
+		const { report } = await runImport(text, {}, 64 * 1024);
+		const seconds = (performance.now() - started) / 1000;
+		console.log(
+			`300 rates (${(text.length / 1e6).toFixed(1)} MB) imported in ${seconds.toFixed(1)} s: ${((seconds * 1000) / 300).toFixed(1)} ms a rate`
+		);
+		expect(report).toMatchObject({ phase: 'done', read: 300, imported: 300, skipped: 0 });
+		expect(report.importedList).toHaveLength(25);
+		expect(report.unlisted).toBe(275);
+		expect(await publicByLabel(labels)).toHaveLength(300);
+	}, 60_000);
 });
 
 describe('a file that breaks off', () => {
