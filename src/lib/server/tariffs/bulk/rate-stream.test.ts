@@ -118,6 +118,14 @@ describe('a file that breaks', () => {
 		expect(seen).toEqual(['bulk-test-0', 'bulk-test-1', 'bulk-test-2']);
 	});
 
+	it('passes on a failure of the source itself as it is, not as broken JSON', async () => {
+		async function* failing() {
+			yield encoder.encode(`[${rateJson(0)},`);
+			throw new Error('Part 2 of the upload is gone from the store');
+		}
+		await expect(all(failing())).rejects.toThrow('Part 2 of the upload is gone from the store');
+	});
+
 	it.each([
 		['an object without items', '{"rates": []}'],
 		['a number', '42'],

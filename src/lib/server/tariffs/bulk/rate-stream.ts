@@ -54,14 +54,24 @@ async function* pieces(source: AsyncIterable<Uint8Array>, progress: { bytes: num
 	}
 }
 
+/** The parser refused the text: the JSON is broken here (the source's own failures stay as they are). */
+class BrokenJson extends Error {}
+
 /** stream-json's parser, fed piece by piece, its tokens in order; the end of input flushes it. */
 async function* tokensOf(source: AsyncIterable<Uint8Array>, progress: { bytes: number }) {
 	// At run time the parser is stream-chain's gen(): each call answers an async iterable of tokens.
 	const parse = parser({ packValues: false, streamValues: true }) as unknown as (
 		input: Buffer | typeof none
 	) => AsyncIterable<Token>;
-	for await (const piece of pieces(source, progress)) yield* parse(piece);
-	yield* parse(none);
+	const parsed = async function* (input: Buffer | typeof none) {
+		try {
+			yield* parse(input);
+		} catch {
+			throw new BrokenJson();
+		}
+	};
+	for await (const piece of pieces(source, progress)) yield* parsed(piece);
+	yield* parsed(none);
 }
 
 /**
@@ -130,7 +140,7 @@ export async function* readRates(
 			if (closes && level === listLevel - 1) listLevel = -1;
 		}
 	} catch (error) {
-		if (error instanceof RateFileError) throw error;
+		if (!(error instanceof BrokenJson)) throw error;
 		if (progress.bytes === 0) throw new RateFileError('The file is empty.');
 		throw new RateFileError(brokenAt(index + (asm ? 0 : 1), progress.bytes));
 	}
