@@ -56,9 +56,14 @@ type Step<I, O> = (input: I | typeof none) => O;
  * a promise per token. Throws where the JSON breaks.
  */
 function jsonTokens() {
-	const [decode, tokenize] = getFunctionList(
-		parser({ packValues: false, streamValues: true })
-	) as unknown as [Step<Buffer, string>, Step<string, unknown>];
+	// Typed as a plain step, the parser is at run time stream-chain's gen(), which carries its function list.
+	const made = parser({ packValues: false, streamValues: true }) as unknown as Parameters<
+		typeof getFunctionList
+	>[0];
+	const [decode, tokenize] = getFunctionList(made) as unknown as [
+		Step<Buffer, string>,
+		Step<string, unknown>
+	];
 	const list = (out: unknown): Token[] => (isMany(out) ? getManyValues(out as never) : []);
 	return {
 		write: (piece: Buffer) => list(tokenize(decode(piece))),
