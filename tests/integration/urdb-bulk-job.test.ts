@@ -9,6 +9,7 @@ import { bulkImportJob } from '$lib/server/tariffs/bulk/bulk-job';
 import type { BulkJobData } from '$lib/server/tariffs/bulk/bulk-status';
 import { bulkStatus, type BulkStatus } from '$lib/server/tariffs/bulk/bulk-status';
 import { putPart } from '$lib/server/tariffs/bulk/bulk-upload';
+import { startBulkImport } from '$lib/server/tariffs/bulk/bulk-start';
 import { getObject } from '$lib/server/storage/object-store';
 import { makeUser } from './fixtures';
 
@@ -147,6 +148,60 @@ describe('a small file: 3 good rates, 1 broken, 1 duplicate label, 1 filtered ou
 		const { report } = await runImport(JSON.stringify(rates), { utilityContains: 'georgia POWER' });
 		expect(report).toMatchObject({ read: 2, imported: 1, filteredByUtility: 1 });
 		expect((await publicByLabel([label(7), label(8)])).map((s) => s.tariff.urdbLabel)).toEqual([label(8)]);
+	});
+});
+
+describe('starting an import from the page’s form', () => {
+	const form = (fields: Record<string, string | string[]>, file?: File) => {
+		const data = new FormData();
+		for (const [name, value] of Object.entries(fields))
+			for (const one of [value].flat()) data.append(name, one);
+		if (file) data.append('file', file);
+		return data;
+	};
+	const filters = { sectors: ['Residential'], utilityContains: '', timezone: 'America/Chicago' };
+
+	it('refuses bad filters beside their fields, in words, and keeps what was typed', async () => {
+		const out = await startBulkImport(
+			form({ sectors: ['Residential', 'Farms'], utilityContains: 'x'.repeat(130), timezone: 'Mars/Olympus' }),
+			author
+		);
+		expect(out).toMatchObject({
+			ok: false,
+			status: 400,
+			errors: {
+				sectors: 'Pick sectors from the list',
+				utilityContains: 'Utility must be at most 120 characters',
+				timezone: 'Time zone must be an IANA name such as America/Chicago'
+			},
+			values: { sectors: ['Residential', 'Farms'], timezone: 'Mars/Olympus' }
+		});
+	});
+
+	it('refuses a form without a file, and an upload whose parts did not all arrive', async () => {
+		expect(await startBulkImport(form(filters), author)).toMatchObject({
+			ok: false,
+			errors: { file: 'Choose a JSON file of rates from the open rate database.' }
+		});
+		const uploadId = randomUUID();
+		await putPart(uploadId, 0, new TextEncoder().encode('[{"label":'));
+		expect(await startBulkImport(form({ ...filters, uploadId, parts: '2' }), author)).toMatchObject({
+			ok: false,
+			errors: { file: 'The upload is incomplete: part 2 of 2 did not arrive. Choose the file again.' }
+		});
+	});
+
+	it('queues the import of a file sent with the form itself (the page without scripts)', async () => {
+		const file = new File([JSON.stringify([{ ...RS1, label: label(20) }])], 'one-rate.json');
+		const out = await startBulkImport(form(filters, file), author);
+		expect(out.ok).toBe(true);
+		let status: BulkStatus | null = null;
+		for (const started = Date.now(); Date.now() - started < 30_000;) {
+			status = await bulkStatus(out.ok ? out.jobId : '');
+			if (status?.state === 'finished') break;
+			await new Promise((resolve) => setTimeout(resolve, 100));
+		}
+		expect(status).toMatchObject({ state: 'finished', fileName: 'one-rate.json', report: { imported: 1 } });
 	});
 });
 
