@@ -120,10 +120,10 @@ describe('a small file: 3 good rates, 1 broken, 1 duplicate label, 1 filtered ou
 			timezone: 'America/New_York',
 			holidays: null
 		});
-		// RS-1's startdate 1433116800 and enddate 1440975600 (Unix seconds) as UTC dates.
+		// RS-1's startdate 1433116800 and enddate 1440975600 (23:00 UTC on 30 August) as the dates entered.
 		expect(first.version).toMatchObject({
 			effectiveFrom: '2015-06-01',
-			effectiveTo: '2015-08-30',
+			effectiveTo: '2015-08-31',
 			source: RS1.uri
 		});
 		expect(first.version.structure.energyCharges?.[0]).toMatchObject({ type: 'tiered' });

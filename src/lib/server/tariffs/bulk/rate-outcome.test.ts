@@ -38,7 +38,7 @@ describe('one rate of the file', () => {
 		});
 		expect(outcome.submission.version).toMatchObject({
 			effectiveFrom: '2015-06-01',
-			effectiveTo: '2015-08-30',
+			effectiveTo: '2015-08-31',
 			source: 'https://openei.org/apps/USURDB/rate/view/5550d6fd5457a3187e8b4567',
 			checkedOn: TODAY
 		});

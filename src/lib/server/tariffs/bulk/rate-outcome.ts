@@ -28,12 +28,19 @@ const SOURCE_CHARS = 500;
 
 const textOf = (value: unknown) => (typeof value === 'string' ? value.trim() : '');
 
-/** Unix seconds as the UTC calendar date, or null when absent or out of the calendar's range. */
+const DAY_SECONDS = 86_400;
+
+/**
+ * The calendar date a database timestamp stands for, or null when absent or off the calendar. The
+ * database keeps dates as Unix seconds at about midnight of the zone they were entered in (RS-1's end is
+ * 23:00 UTC the day before), so the nearest UTC midnight gives the date as entered: the same rule as the
+ * single-rate import's provenance.
+ */
 function isoDay(seconds: unknown): string | null {
 	if (typeof seconds !== 'number' || !Number.isFinite(seconds)) return null;
-	const date = new Date(seconds * 1000);
+	const date = new Date(Math.round(seconds / DAY_SECONDS) * DAY_SECONDS * 1000);
 	const year = date.getUTCFullYear();
-	return Number.isNaN(date.getTime()) || year < 1900 || year > 9999 ? null : date.toISOString().slice(0, 10);
+	return Number.isNaN(year) || year < 1900 || year > 9999 ? null : date.toISOString().slice(0, 10);
 }
 
 const SECTION: Record<string, string> = {
