@@ -79,5 +79,6 @@ export const handleError: HandleServerError = ({ error, event, status, message }
 export const init: ServerInit = async () => {
 	await import('$lib/server/tariffs/tariff-notice.service');
 	await import('$lib/server/workspaces/deletion');
+	await import('$lib/server/tariffs/bulk/bulk-job');
 	await startJobs();
 };

@@ -156,6 +156,26 @@ export const routes: Route[] = [
 		json: { workspaceId: null },
 		expect: [401, 403, 403, 403, 403, 400, 403]
 	},
+	// The bulk import of open rate database rates: platform admins only, on every door.
+	{ method: 'GET', path: () => '/admin/urdb-import', expect: [303, 403, 403, 403, 403, 200, 403] },
+	{
+		method: 'POST',
+		path: () => '/admin/urdb-import?/start',
+		form: { none: '' },
+		expect: [401, 403, 403, 403, 403, 400, 403]
+	},
+	...['', '/status'].map((tail) => ({
+		method: 'GET' as const,
+		path: () => `/admin/urdb-import/00000000-0000-4000-8000-000000000000${tail}`,
+		expect: [303, 403, 403, 403, 403, 404, 403]
+	})),
+	{
+		method: 'PUT',
+		// Part 999 is past the last part an upload has: the guard lets the admin through to a 404.
+		path: () => '/admin/urdb-import/uploads/00000000-0000-4000-8000-000000000000/999',
+		json: {},
+		expect: [401, 403, 403, 403, 403, 404, 403]
+	},
 	// The workspace's own air pumps: viewers read, editors write.
 	{ method: 'GET', path: () => `${ws}/air-pumps`, expect: [303, 200, 200, 200, 404, 404, 404] },
 	...['create', 'update', 'delete'].map((action) => ({

@@ -22,7 +22,7 @@ const READERS: { who: Exclude<Who, 'guest'>; email?: string; sees: (path: string
 	{ who: 'anonymous', sees: () => true },
 	{ who: 'owner', email: 'owner@example.org', sees: () => true },
 	{ who: 'viewer', email: 'viewer@example.org', sees: (path) => /^\/(w|sites|compare)\//.test(path) },
-	{ who: 'admin', email: 'admin@example.org', sees: (path) => path.startsWith('/tariffs') }
+	{ who: 'admin', email: 'admin@example.org', sees: (path) => /^\/(tariffs|admin)\b/.test(path) }
 ];
 
 /** A reader's pages: those that answer them with 200, and one error page (all errors share one layout). */

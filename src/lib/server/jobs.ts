@@ -6,7 +6,7 @@ import { logger } from './log';
 // A PostgreSQL-backed job queue (pg-boss): work that must not hold up a request, and is retried when it fails.
 let boss: PgBoss | null = null;
 let starting: Promise<PgBoss> | null = null;
-const handlers = new Map<string, (data: never) => Promise<void>>();
+const handlers = new Map<string, (data: never, jobId: string) => Promise<unknown>>();
 const schedules = new Map<string, string>();
 
 export const RETRY = { retryLimit: 5, retryDelay: 5, retryBackoff: true } as const;
@@ -27,9 +27,11 @@ async function start(): Promise<PgBoss> {
 		const cron = schedules.get(name);
 		if (cron) await instance.schedule(name, cron, {}, RETRY);
 		await instance.work<object>(name, { pollingIntervalSeconds: 1 }, async (jobs) => {
+			// One job's answer becomes its output (pg-boss keeps it when a batch holds one job).
+			let output: unknown;
 			for (const job of jobs) {
 				try {
-					await handler(job.data as never);
+					output = await handler(job.data as never, job.id);
 				} catch (error) {
 					logger.error(
 						{ err: error, job: name, jobId: job.id },
@@ -38,6 +40,7 @@ async function start(): Promise<PgBoss> {
 					throw error;
 				}
 			}
+			return jobs.length === 1 ? output : undefined;
 		});
 	}
 	boss = instance;
@@ -53,11 +56,18 @@ function queue(): Promise<PgBoss> {
 	return starting;
 }
 
-/** Registers a job kind; the worker runs in the app process. Call at module load, before the queue starts. */
-export function defineJob<T extends object>(name: string, handler: (data: T) => Promise<void>) {
-	handlers.set(name, handler as (data: never) => Promise<void>);
+/**
+ * Registers a job kind; the worker runs in the app process. Call at module load, before the queue starts.
+ * The handler gets the job's data and id, and what it returns is the job's output; `options` replace the retries (e.g. a long job's expiry).
+ */
+export function defineJob<T extends object>(
+	name: string,
+	handler: (data: T, jobId: string) => Promise<unknown>,
+	options: PgBoss.SendOptions = RETRY
+) {
+	handlers.set(name, handler as (data: never, jobId: string) => Promise<unknown>);
 	return {
-		send: async (data: T) => (await queue()).send(name, data, RETRY)
+		send: async (data: T) => (await queue()).send(name, data, options)
 	};
 }
 
