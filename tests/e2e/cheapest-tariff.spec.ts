@@ -57,5 +57,13 @@ test.describe('which tariff is cheapest', () => {
 		await expect(current.getByRole('link')).toHaveAttribute('href', `/tariffs/${PUBLIC_TARIFF}`);
 		await expect(page.getByRole('heading', { level: 2, name: /comes first$/ })).toBeVisible();
 		await expect(page.getByText(/Its fixed charges come to \$[\d,.]+ a year/)).toBeVisible();
+
+		// At 390 px the page does not scroll sideways: the table scrolls in its own box.
+		await page.setViewportSize({ width: 390, height: 844 });
+		await expect(table).toBeVisible();
+		const overflow = await page.evaluate(
+			() => document.documentElement.scrollWidth - document.documentElement.clientWidth
+		);
+		expect(overflow).toBeLessThanOrEqual(0);
 	});
 });

@@ -112,6 +112,25 @@ describe('a night-heavy load', () => {
 	});
 });
 
+describe('a scenario’s estimated load instead of a meter', () => {
+	it('ranks the time-of-use tariff first for a 1 kW pump that runs only at night (derived from the rule)', () => {
+		const pump = {
+			name: 'Night pump',
+			power: { watts: 1000 },
+			schedule: { type: 'windows' as const, windows: [{ start: '22:00', end: '06:00' }] }
+		};
+		const ranking = rankTariffs([candidate('Flat', FLAT), candidate('Time of use', TOU)], {
+			...year(nightHeavyYear(60)),
+			meter: undefined,
+			equipment: [pump]
+		});
+		expect(ranking.ranked.map((r) => r.name)).toEqual(['Time of use', 'Flat']);
+		// 8 kWh a night, 365 nights: 2,920 kWh; all of it off-peak at 0.08 plus $15 × 12 (derived from the rule).
+		expect(ranking.ranked[0]!.annualCost).toBeCloseTo(2920 * 0.08 + 180, 0);
+		expect(ranking.topShares).toEqual([expect.objectContaining({ label: 'other hours', share: 1 })]);
+	});
+});
+
 describe('tariffs that are not priced', () => {
 	it('lists another currency and a tariff not in force all year instead of pricing them', () => {
 		const euro = candidate('Euro', { ...FLAT, currency: 'EUR' });

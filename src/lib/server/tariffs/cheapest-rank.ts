@@ -7,6 +7,7 @@ import {
 	parseRequest,
 	type CalculateRequest,
 	type DatedTariff,
+	type EquipmentInput,
 	type Meter,
 	type VersionedResponse
 } from '$lib/calc';
@@ -47,8 +48,10 @@ export type Ranking = {
 	topShares: TouShare[];
 };
 
+/** The year to price: a meter's readings, or a scenario's equipment (its estimated load), or both. */
 export type YearContext = {
-	meter: Meter;
+	meter?: Meter;
+	equipment?: EquipmentInput[];
 	/** 'YYYY-MM', the first of the 12 months priced. */
 	firstMonth: string;
 	timezone: string;
@@ -75,8 +78,8 @@ function baseRequest(year: YearContext): CalculateRequest | string {
 		timezone: year.timezone,
 		holidays: year.siteHolidays,
 		tariff: { currency: year.currency },
-		equipment: [],
-		meter: year.meter
+		equipment: year.equipment ?? [],
+		...(year.meter ? { meter: year.meter } : {})
 	});
 	return parsed.success ? parsed.data : (parsed.error.issues[0]?.message ?? 'This usage cannot be priced.');
 }

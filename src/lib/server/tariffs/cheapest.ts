@@ -1,8 +1,13 @@
 // "Which tariff is cheapest?": a site's metered year priced on every tariff it may use, ranked.
+import { DateTime } from 'luxon';
 import { tariffSchema, type DatedTariff } from '$lib/calc';
 import type { SiteRow } from '$lib/server/sites/site.service';
 import { meteredYear } from '$lib/server/usage/metered-year';
-import { rankTariffs, type Candidate, type Ranking } from './cheapest-rank';
+import { equipmentOf } from '$lib/server/sites/results.service';
+import { listDevices } from '$lib/server/sites/equipment.service';
+import type { ScenarioRow } from '$lib/server/sites/scenario.service';
+import { monthName } from '$lib/server/usage/metered-series';
+import { rankTariffs, type Candidate, type Ranking, type YearContext } from './cheapest-rank';
 import { cheapestWords } from './cheapest-words';
 import { findTariff, searchTariffs, type TariffRow, type VersionRow } from './tariff.service';
 import { tariffUsableBy } from './usable';
@@ -67,6 +72,34 @@ async function candidatesFor(site: SiteRow, viaGrant: boolean) {
 	return { candidates, total };
 }
 
+/** Ranks the candidates on `load` and explains the top one; `priced` says which months and which load. */
+async function rankAndExplain(
+	site: SiteRow,
+	viaGrant: boolean,
+	load: Pick<YearContext, 'meter' | 'equipment' | 'firstMonth'>,
+	currentTariffId: string | null,
+	priced: string
+): Promise<Cheapest> {
+	const { candidates, total } = await candidatesFor(site, viaGrant);
+	const ranking = rankTariffs(candidates, {
+		...load,
+		timezone: site.timezone,
+		siteHolidays: { country: site.country, ...(site.region ? { region: site.region } : {}) },
+		currency: site.currency,
+		currentTariffId
+	});
+	const top = ranking.ranked[0];
+	const current = ranking.ranked.find((r) => r.current) ?? null;
+	return {
+		ok: true,
+		...ranking,
+		priced,
+		currency: site.currency,
+		words: top ? cheapestWords(top, current, ranking.topShares, site.currency) : [],
+		moreThanCompared: total > MAX_COMPARED ? total : null
+	};
+}
+
 /**
  * Prices the site's last 12 whole metered months on each tariff it may use, within the page's load:
  * the ranking, the tariffs not priced and why, and the top one explained in words. A site without a
@@ -75,23 +108,27 @@ async function candidatesFor(site: SiteRow, viaGrant: boolean) {
 export async function cheapestTariffs(site: SiteRow, viaGrant: boolean): Promise<Cheapest> {
 	const year = await meteredYear(site);
 	if (!year.ok) return year;
-	const { candidates, total } = await candidatesFor(site, viaGrant);
-	const ranking = rankTariffs(candidates, {
-		meter: year.meter,
-		firstMonth: year.firstMonth,
-		timezone: site.timezone,
-		siteHolidays: { country: site.country, ...(site.region ? { region: site.region } : {}) },
-		currency: site.currency,
-		currentTariffId: site.tariffId
-	});
-	const top = ranking.ranked[0];
-	const current = ranking.ranked.find((r) => r.current) ?? null;
-	return {
-		ok: true,
-		...ranking,
-		priced: year.label ?? year.firstMonth,
-		currency: site.currency,
-		words: top ? cheapestWords(top, current, ranking.topShares, site.currency) : [],
-		moreThanCompared: total > MAX_COMPARED ? total : null
-	};
+	const load = { meter: year.meter, firstMonth: year.firstMonth };
+	return rankAndExplain(site, viaGrant, load, site.tariffId, year.label ?? year.firstMonth);
+}
+
+/**
+ * The same ranking for a scenario's estimated load (its equipment list) over the last 12 whole calendar
+ * months before today in the site's zone, so an adviser can pair a schedule change with a tariff change.
+ * The scenario's own tariff, else the site's, is the current one. The caller checks the scenario is the
+ * site's.
+ */
+export async function cheapestForScenario(
+	site: SiteRow,
+	viaGrant: boolean,
+	scenario: ScenarioRow
+): Promise<Cheapest> {
+	const devices = await listDevices(scenario.id);
+	if (!devices.length)
+		return { ok: false, message: `The scenario “${scenario.name}” has no equipment to price yet.` };
+	const to = DateTime.now().setZone(site.timezone).startOf('month');
+	const from = to.minus({ months: 12 });
+	const priced = `${monthName(from)} – ${monthName(to.minus({ months: 1 }))}, the estimated load of the scenario “${scenario.name}”`;
+	const load = { equipment: devices.map((d) => equipmentOf(d.spec)), firstMonth: from.toFormat('yyyy-MM') };
+	return rankAndExplain(site, viaGrant, load, scenario.tariffId ?? site.tariffId, priced);
 }
