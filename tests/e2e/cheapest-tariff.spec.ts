@@ -47,7 +47,7 @@ test.describe('which tariff is cheapest', () => {
 		await expect(page.getByRole('heading', { level: 1, name: 'Which tariff is cheapest?' })).toBeVisible();
 		await expect(page.getByText('January 2026 – December 2026, 8,760 values of 60 minutes')).toBeVisible();
 		await expect(
-			page.getByText(/check that the site is eligible with the utility before switching/)
+			page.getByText(/check that the site is eligible with the utility\s+before switching/)
 		).toBeVisible();
 
 		const table = page.getByRole('region', { name: 'Tariffs ranked by annual cost' });
