@@ -51,7 +51,7 @@ test.describe('which tariff is cheapest', () => {
 		).toBeVisible();
 
 		const table = page.getByRole('region', { name: 'Tariffs ranked by annual cost' });
-		const current = table.getByRole('row').filter({ hasText: 'current' });
+		const current = table.getByRole('row').filter({ has: page.getByText('current', { exact: true }) });
 		await expect(current).toHaveCount(1);
 		await expect(current).toContainText('current tariff');
 		await expect(current.getByRole('link')).toHaveAttribute('href', `/tariffs/${PUBLIC_TARIFF}`);
