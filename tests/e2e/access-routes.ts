@@ -312,7 +312,7 @@ export const routes: Route[] = [
 		expect: [401, 403, 200, 200, 404, 404, 404]
 	},
 	// Bills, their files and metered usage of the demo site.
-	...['bills', 'bills/template.csv', 'usage'].map((page) => ({
+	...['bills', 'bills/template.csv', 'usage', 'cheapest'].map((page) => ({
 		method: 'GET' as const,
 		path: () => `/sites/${SITE}/${page}`,
 		expect: [303, 200, 200, 200, 404, 404, 200]

@@ -1,0 +1,141 @@
+import { and, eq } from 'drizzle-orm';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { TariffInput } from '$lib/calc';
+import { client, db } from '$lib/server/db';
+import { usageIntervals } from '$lib/server/db/schema';
+import type { SiteRow } from '$lib/server/sites/site.service';
+import { cheapestTariffs } from '$lib/server/tariffs/cheapest';
+import { createTariff } from '$lib/server/tariffs/tariff.service';
+import type { Interval } from '$lib/server/usage/interval';
+import { importUsage } from '$lib/server/usage/usage.service';
+import { createWorkspace } from '$lib/server/workspaces/workspace.service';
+import type { Actor } from '$lib/server/workspaces/audit';
+import { flat, makeSite, makeUser, tariffMeta, versionMeta } from './fixtures';
+
+// Against the real PostgreSQL of `npm test`; invented utilities, tariffs, sites and readings. The utilities'
+// names start with "A0" so the library's utility order lists them first whatever other tests stored.
+const tag = `cheapest-${Date.now()}`;
+let owner: Actor;
+let workspaceId = '';
+const ids = { flat: '', tou: '', euro: '', foreign: '' };
+
+/** 30 cents on weekday afternoons (14:00–20:00), 8 cents at all other hours. */
+const touInput: TariffInput = {
+	currency: 'USD',
+	energyCharges: [
+		{
+			label: 'Energy',
+			type: 'tou',
+			seasons: [
+				{
+					months: [1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11, 12],
+					otherPerKwh: 0.08,
+					periods: [
+						{ label: 'on-peak', perKwh: 0.3, days: 'weekdays', windows: [{ start: '14:00', end: '20:00' }] }
+					]
+				}
+			]
+		}
+	]
+};
+
+/** Hourly readings from 2026-01-01 local (Chicago) for `hours` real hours: 4 kWh at night (22–06), 0.5 by day. */
+function nightHeavy(hours: number): Interval[] {
+	const start = Date.parse('2026-01-01T06:00:00Z');
+	return Array.from({ length: hours }, (_, i) => {
+		const at = new Date(start + i * 3_600_000);
+		const hour = Number(
+			at.toLocaleString('en-US', { timeZone: 'America/Chicago', hour: 'numeric', hourCycle: 'h23' })
+		);
+		return { start: at, seconds: 3600, kwh: hour >= 22 || hour < 6 ? 4 : 0.5 };
+	});
+}
+
+const tariff = (name: string, structure: TariffInput, ws: string | null, currency = 'USD') =>
+	createTariff(
+		{
+			meta: tariffMeta(`A0 Demo Valley Power ${tag}`, name, { currency }),
+			version: versionMeta('2025-01-01'),
+			structure,
+			workspaceId: ws
+		},
+		owner
+	);
+
+let site: SiteRow;
+
+beforeAll(async () => {
+	owner = await makeUser(`owner-${tag}@example.org`, 'Cheapest owner');
+	workspaceId = await createWorkspace(`Cheapest ${tag}`, owner.id);
+	const other = await createWorkspace(`Other ${tag}`, owner.id);
+	ids.flat = await tariff('Flat 12 cents', flat(0.12), workspaceId);
+	ids.tou = await tariff('Afternoon peak', touInput, workspaceId);
+	ids.euro = await tariff('Euro flat', { ...flat(0.05), currency: 'EUR' }, null, 'EUR');
+	ids.foreign = await tariff('Another workspace’s tariff', flat(0.01), other);
+	site = await makeSite(workspaceId, owner, `Greenhouse ${tag}`, { tariffId: ids.flat });
+	// 2026 in full (8,760 real hours in Chicago) and 5 hours of 2027: the last whole month is December 2026.
+	await importUsage(site, nightHeavy(8760 + 5), owner);
+});
+
+afterAll(async () => {
+	await client.end({ timeout: 5 });
+});
+
+describe('a site with a year of hourly usage and three tariffs', () => {
+	it('ranks the tariffs in its currency, lists the other currency, and hides another workspace’s', async () => {
+		const found = await cheapestTariffs(site, false);
+		expect(found.ok).toBe(true);
+		if (!found.ok) return;
+		expect(found.priced).toBe('January 2026 – December 2026, 8,760 values of 60 minutes');
+		const mine = found.ranked.filter((r) => r.id === ids.flat || r.id === ids.tou);
+		expect(mine.map((r) => r.name)).toEqual(['Afternoon peak', 'Flat 12 cents']);
+		const [tou, flatRow] = mine;
+		expect(flatRow).toMatchObject({ current: true, differenceToCurrent: 0 });
+		// Derived from the rule: 0.12 a kWh on every kWh the year holds.
+		const kwh = nightHeavy(8760).reduce((sum, r) => sum + r.kwh, 0);
+		expect(flatRow!.annualCost).toBeCloseTo(0.12 * kwh, 1);
+		expect(tou!.differenceToCurrent).toBeCloseTo(tou!.annualCost - flatRow!.annualCost, 2);
+		expect(found.unpriced).toContainEqual(
+			expect.objectContaining({ id: ids.euro, reason: 'Priced in EUR; this site pays in USD.' })
+		);
+		expect([...found.ranked, ...found.unpriced].some((r) => r.id === ids.foreign)).toBe(false);
+		if (found.ranked[0]!.id === ids.tou)
+			expect(found.words.join(' ')).toContain('less than your current tariff, Flat 12 cents');
+	});
+
+	it('a guest of the site sees only public tariffs and the current one', async () => {
+		const found = await cheapestTariffs(site, true);
+		if (!found.ok) throw new Error(found.message);
+		expect(found.ranked.some((r) => r.id === ids.flat)).toBe(true);
+		expect(found.ranked.some((r) => r.id === ids.tou)).toBe(false);
+	});
+});
+
+describe('usage that cannot be priced as a year', () => {
+	it('names the first gap instead of pricing it as zero', async () => {
+		const holed = await makeSite(workspaceId, owner, `Holed ${tag}`, { tariffId: ids.flat });
+		await importUsage(holed, nightHeavy(8760 + 5), owner);
+		await db
+			.delete(usageIntervals)
+			.where(
+				and(eq(usageIntervals.siteId, holed.id), eq(usageIntervals.start, new Date('2026-03-10T15:00:00Z')))
+			);
+		const found = await cheapestTariffs(holed, false);
+		expect(found.ok).toBe(false);
+		if (!found.ok)
+			expect(found.message).toContain(
+				'1 60-minute interval is missing between January 2026 and December 2026, the first at 2026-03-10 10:00 (America/Chicago)'
+			);
+	});
+
+	it('says how many whole months there are when fewer than 12', async () => {
+		const short = await makeSite(workspaceId, owner, `Short ${tag}`);
+		await importUsage(short, nightHeavy(24 * 100), owner);
+		const found = await cheapestTariffs(short, false);
+		expect(found).toEqual({
+			ok: false,
+			message:
+				'The stored usage holds 3 whole calendar months; comparing tariffs needs 12 whole months in a row. Import more usage.'
+		});
+	});
+});
