@@ -33,7 +33,9 @@ test.describe('import from the open rate database', () => {
 			)
 		).toBeVisible();
 		const notes = page.getByRole('region', { name: 'Notes on the import' });
-		await expect(notes).toContainText('Runrate took every charge this rate gives.');
+		// RS-1's free-text energy comments are named, not priced.
+		await expect(notes).toContainText('energycomments');
+		await expect(notes).toContainText('not priced by Runrate');
 		await expect(notes).toContainText('Holidays: none.');
 		const provenance = page.getByRole('region', { name: 'Where the rate comes from' });
 		await expect(provenance).toContainText('Florida Power & Light Co.');
