@@ -1,7 +1,9 @@
 /**
  * Benchmark of the calculation core (`npm run bench`): medians of calculate() for 100 and 1,000
  * devices and of a 5-scenario compare() over 12 months on a tariff with time-of-use seasons, tiers,
- * demand, riders and taxes. All data is invented ("Demo Valley Power" is fictional).
+ * demand, riders and taxes; then a year of 15-minute meter readings (35,040 values) on a tiered
+ * time-of-use tariff with ratcheted demand, alone and on 30 tariffs in turn (the "which tariff" page's
+ * work). All data is invented ("Demo Valley Power" is fictional).
  * With BENCH_URL set (e.g. http://localhost:5173), it also times POST ${BENCH_URL}/api/v1/calculate.
  */
 import {
@@ -12,7 +14,8 @@ import {
 	calculate,
 	calculateRequestSchema,
 	compare,
-	compareRequestSchema
+	compareRequestSchema,
+	tariffSchema
 } from '../src/lib/calc/index';
 import { tiered, tou, touPeriod } from '../src/lib/calc/tariffs.fixture';
 
@@ -259,6 +262,24 @@ const metered = calculateRequestSchema.parse({
 	}
 });
 await time('calculate(), 35,040 meter values, tiered TOU + demand', () => calculate(metered));
+
+// The "which tariff" page's work: the same year priced on 30 tariffs in turn (a third each of the tiered
+// time-of-use tariff with demand above, the seasonal tariff of the device cases, and a flat rate), as
+// `rankTariffs` does once the meter series is validated. The page adds two small queries and one read
+// of the year's rows (timed in the issue note through the running app).
+const flatTariff = tariffSchema.parse({
+	currency: 'USD',
+	fixedCharges: [{ label: 'Demo Valley Power basic charge', perMonth: 12 }],
+	energyCharges: [{ label: 'Energy', type: 'flat', perKwh: 0.14 }]
+});
+const thirty = Array.from({ length: 30 }, (_, i) =>
+	tariffSchema.parse([meterTariff, tariff, flatTariff][i % 3])
+);
+await time(
+	'which tariff: 30 tariffs × 35,040 meter values',
+	() => thirty.map((one) => calculate({ ...metered, tariff: one })),
+	2
+);
 
 const url = process.env.BENCH_URL;
 if (url) {
