@@ -81,4 +81,56 @@ describe('reference bills', () => {
 		// 100 × 10.5 + 11 × 35 × 10.5 = 5,092.50.
 		expect(total(calculate(request).periods, 'demand')).toBeCloseTo(100 * 10.5 + 11 * 35 * 10.5, 1);
 	});
+	/**
+	 * REopt.jl's lookback cases 2 and 3 (test/runtests.jl "Lookback Demand Charges"): 100 kW in every hour
+	 * of the year but four, 200 kW in hour 22 (January), 400 in hour 2,403 (April), 500 in hour 4,088
+	 * (June) and 300 in hour 8,333 (December); monthly demand prices 10, 10, 20, 50, 20, 10, 20, 20, 20,
+	 * 20, 20, 5 $/kW; a 75 % lookback. REopt treats the year as a loop, so its January to March look back at
+	 * the same year's later months; Runrate looks back only at months inside the calculation, so those three
+	 * months differ by design and the check is on April to December, where both rules see the same months.
+	 */
+	const LOOKBACK_PRICES = [10, 10, 20, 50, 20, 10, 20, 20, 20, 20, 20, 5];
+	const lookbackYear = (ratchet: Record<string, unknown>) => {
+		const kwh = Array.from({ length: 8760 }, () => 100);
+		kwh[22 - 1] = 200;
+		kwh[2403 - 1] = 400;
+		kwh[4088 - 1] = 500;
+		kwh[8333 - 1] = 300;
+		const request = calculateRequestSchema.parse({
+			period: { start: '2017-01', months: 12 },
+			timezone: 'UTC',
+			holidays: null,
+			tariff: {
+				currency: 'USD',
+				demandCharges: LOOKBACK_PRICES.map((perKw, m) => ({
+					label: `Demand ${m + 1}`,
+					perKw,
+					intervalMinutes: 60,
+					months: [m + 1],
+					ratchet: { percent: 75, ...ratchet }
+				}))
+			},
+			meter: { start: '2017-01-01T00:00', intervalMinutes: 60, kwh }
+		});
+		return calculate(request).periods.map((p) => total([p], 'demand'));
+	};
+	const fromApril = (costs: number[]) => costs.slice(3).reduce((sum, cost) => sum + cost, 0);
+
+	it('lookback months January, April and December (REopt’s case 2): April to December as REopt bills them', () => {
+		const costs = lookbackYear({ months: [1, 4, 12] });
+		// Source: REopt.jl test/runtests.jl, case 2: monthly peaks 300, 300, 300, 400, 300, 500, 300, 300, 300,
+		// 300, 300, 300 (300 = 400 × 0.75). April to December: 400 × 50 + 300 × 20 + 500 × 10 + 5 × 300 × 20
+		// + 300 × 5 = 62,500.
+		expect(fromApril(costs)).toBeCloseTo(62_500, 6);
+		// Derived from Runrate's rule (no later month is seen): January its own 200 kW, February and March
+		// 0.75 × 200 = 150 kW.
+		expect(costs.slice(0, 3)).toEqual([2000, 1500, 3000]);
+	});
+
+	it('lookback of 6 months (REopt’s case 3): April to December as REopt bills them', () => {
+		const costs = lookbackYear({ monthsBack: 6 });
+		// Source: REopt.jl test/runtests.jl, case 3: monthly peaks 225, 225, 225, 400, 300, 500, 375 × 6.
+		// April to December: 400 × 50 + 300 × 20 + 500 × 10 + 5 × 375 × 20 + 375 × 5 = 70,375.
+		expect(fromApril(costs)).toBeCloseTo(70_375, 6);
+	});
 });
