@@ -3,7 +3,7 @@ import { calculate } from './calculate';
 import { calculateRequestSchema } from './request.schema';
 import { tariffFromUrdb } from './urdb-import';
 import { urdbRateSchema } from './urdb.schema';
-import { sample, steady, total } from './urdb.fixture';
+import { grid, sample, steady, total } from './urdb.fixture';
 
 /**
  * Bills of open-rate-database rates as NREL's open engines price them, each check value beside its
@@ -132,5 +132,47 @@ describe('reference bills', () => {
 		// Source: REopt.jl test/runtests.jl, case 3: monthly peaks 225, 225, 225, 400, 300, 500, 375 × 6.
 		// April to December: 400 × 50 + 300 × 20 + 500 × 10 + 5 × 375 × 20 + 375 × 5 = 70,375.
 		expect(fromApril(costs)).toBeCloseTo(70_375, 6);
+	});
+	it('tiered time-of-use demand on one metered day (SAM’s demand-charge test): 200.00', () => {
+		// Source: NREL SAM Simulation Core, test/shared_test/lib_utility_rate_equations_test.cpp,
+		// test_demand_charges: on weekdays hours 15–19 are demand period 1 (20 $/kW up to 100 kW, then 15),
+		// the rest period 2 (10 $/kW up to 100 kW, then 5); one day's hourly load 1, 1, 2 … 10 … 2, 1, 1, 1,
+		// 1 kW peaks at 5 kW in period 1 and 10 kW in period 2: 5 × 20 + 10 × 10 = 200.00. SAM's year starts
+		// on a Monday, so the day is 1 January 2018 (a Monday); the rest of the month draws nothing.
+		const sam = {
+			energyratestructure: [[{ rate: 0.05 }]],
+			energyweekdayschedule: grid(0),
+			energyweekendschedule: grid(0),
+			demandratestructure: [
+				[{ max: 100, rate: 20 }, { rate: 15 }],
+				[{ max: 100, rate: 10 }, { rate: 5 }]
+			],
+			demandweekdayschedule: grid((_, hour) => (hour >= 15 && hour < 20 ? 0 : 1)),
+			demandweekendschedule: grid(1)
+		};
+		// SAM's weekends are all period 2, which then spans weekday windows and whole weekend days: one peak
+		// over both is not a charge Runrate has, so the rate as SAM gives it is refused, never priced wrongly.
+		expect(tariffFromUrdb(urdbRateSchema.parse(sam)).notes).toEqual([
+			expect.objectContaining({ code: 'demand-period-days', field: 'demandweekdayschedule' })
+		]);
+		// The load falls on a Monday only, so the weekend's schedule cannot change the bill: with the weekday
+		// schedule on weekends too, the rate is expressed exactly and the day's demand is SAM's.
+		const { tariff, notes } = tariffFromUrdb(
+			urdbRateSchema.parse({ ...sam, demandweekendschedule: sam.demandweekdayschedule })
+		);
+		expect(notes).toEqual([]);
+		const day = [1, 1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 9, 8, 7, 6, 5, 4, 3, 2, 1, 1, 1, 1, 1];
+		const request = calculateRequestSchema.parse({
+			period: { start: '2018-01', months: 1 },
+			timezone: 'UTC',
+			holidays: null,
+			tariff,
+			meter: {
+				start: '2018-01-01T00:00',
+				intervalMinutes: 60,
+				kwh: [...day, ...Array.from({ length: 30 * 24 }, () => 0)]
+			}
+		});
+		expect(total(calculate(request).periods, 'demand')).toBeCloseTo(200, 6);
 	});
 });
