@@ -32,7 +32,12 @@ export const urdbSaveSchema = z.object({
 	effectiveFrom: z
 		.string()
 		.optional()
-		.transform((s) => (s ? s.trim() : null))
+		.transform((s) => (s ? s.trim() : null)),
+	/** Leave out the end date the database gives: the person prices the rate as still in force. */
+	openEnded: z
+		.string()
+		.optional()
+		.transform((s) => s === 'on')
 });
 
 /** What the import page shows of a rate it read: the charges, the notes and where the rate came from. */

@@ -80,6 +80,19 @@ describe('the submission', () => {
 		expect(built.version.effectiveTo).toBeNull();
 	});
 
+	it('leaves out the rate’s end date only when the person asks, and says so in the change note', () => {
+		const reading = readUrdbRate(rs1());
+		if (reading.kind !== 'converted') throw new Error('RS-1 converts');
+		const kept = urdbSubmission(reading, { timezone: 'America/New_York' }, '2026-12-03');
+		expect(kept.version.effectiveTo).toBe('2015-08-31');
+		expect(kept.version.changeNote).not.toContain('left out');
+		const open = urdbSubmission(reading, { timezone: 'America/New_York', openEnded: true }, '2026-12-03');
+		expect(open.version.effectiveTo).toBeNull();
+		expect(open.version.effectiveFrom).toBe('2015-06-01');
+		expect(open.version.changeNote).toContain("The database's end date, 2015-08-31, was left out at import.");
+		expect(parseRequest(tariffSubmissionSchema, open).success).toBe(true);
+	});
+
 	it('cuts a name longer than the library holds, marking the cut', () => {
 		const rate = { ...rs1(), name: 'N'.repeat(300) };
 		const reading = readUrdbRate(rate);

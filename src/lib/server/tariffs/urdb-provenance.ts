@@ -27,8 +27,14 @@ export function sourceOf(rate: UrdbRateFields): string {
 	return cut(`OpenEI Utility Rate Database, label ${rate.label ?? '(none)'}`, 500);
 }
 
+/** The change note's words when the person priced a rate the database marks as ended as still in force. */
+function endLeftOut(rate: UrdbRateFields, choices: UrdbChoices): string {
+	const end = dateOf(rate.enddate);
+	return choices.openEnded && end ? ` The database's end date, ${end}, was left out at import.` : '';
+}
+
 /** What the person chooses, since the database does not say it: the time zone, and a start date if none. */
-export type UrdbChoices = { timezone: string; effectiveFrom?: string | null };
+export type UrdbChoices = { timezone: string; effectiveFrom?: string | null; openEnded?: boolean };
 
 /**
  * The submission the library's tariff schema checks (`tariffSubmissionSchema`): country US, US dollars,
@@ -62,11 +68,11 @@ export function urdbSubmission(
 		},
 		version: {
 			effectiveFrom: dateOf(rate.startdate) ?? choices.effectiveFrom ?? '',
-			effectiveTo: dateOf(rate.enddate),
+			effectiveTo: choices.openEnded ? null : dateOf(rate.enddate),
 			source: sourceOf(rate),
 			checkedOn: today,
 			changeNote: cut(
-				`Imported from the OpenEI Utility Rate Database.${left ? ` Not taken: ${left}.` : ''}`,
+				`Imported from the OpenEI Utility Rate Database.${endLeftOut(rate, choices)}${left ? ` Not taken: ${left}.` : ''}`,
 				2000
 			)
 		},

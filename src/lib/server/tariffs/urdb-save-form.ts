@@ -20,8 +20,8 @@ function fieldOf(issue: RequestIssue, hasStart: boolean): string {
 }
 
 /**
- * Saves a read rate where the caller (already guarded) chose: refused rates never; the time zone and,
- * for a rate without a start date, the start date from the form; everything else from the rate itself,
+ * Saves a read rate where the caller (already guarded) chose: refused rates never; the time zone, for a
+ * rate without a start date the start date, and whether to keep the rate's end date, from the form; everything else from the rate itself,
  * checked by the same schema as every other tariff. The same label already there is answered with a
  * link to it instead of a second copy.
  */
@@ -33,7 +33,8 @@ export async function saveImportedRate(
 ): Promise<{ saved: string } | Refused> {
 	const values = {
 		timezone: String(form.get('timezone') ?? ''),
-		effectiveFrom: String(form.get('effectiveFrom') ?? '')
+		effectiveFrom: String(form.get('effectiveFrom') ?? ''),
+		openEnded: form.get('openEnded') === 'on' ? 'on' : ''
 	};
 	if (reading.kind === 'refused') return { status: 422, data: { errors: { json: REFUSED }, values } };
 	const choices = urdbSaveSchema.safeParse(values);
