@@ -7,7 +7,7 @@ import { buildCalendar } from './calendar';
 import { billingSpans } from './periods';
 import { RateBook } from './rates';
 import { tariffSchema } from './tariff.schema';
-import { tiered, tou, touPeriod, usdTariff } from './tariffs.fixture';
+import { tiered, tieredTouSeason, tou, touPeriod, usdTariff } from './tariffs.fixture';
 
 /** Invented "Demo Valley Power" time-of-use supply: summer on-peak weekdays, a night rate past midnight. */
 function touTariff(more: Partial<TariffInput> = {}): TariffInput {
@@ -164,33 +164,13 @@ describe('the columns of energy charges', () => {
 			usdTariff({
 				energyCharges: [
 					tiered('Delivery', [500, 0.1], [null, 0.12]),
-					{
-						label: 'Supply',
-						type: 'tou',
-						seasons: [
-							{
-								months: [6, 7, 8, 9],
-								tierLimitsKwh: [500],
-								periods: [
-									{
-										label: 'Peak',
-										perKwh: 0.3,
-										abovePerKwh: [0.4],
-										windows: [{ start: '12:00', end: '18:00' }]
-									}
-								],
-								otherPerKwh: 0.1,
-								otherAbovePerKwh: [0.15]
-							},
-							{
-								months: [1, 2, 3, 4, 5, 10, 11, 12],
-								tierLimitsKwh: [500],
-								periods: [],
-								otherPerKwh: 0.08,
-								otherAbovePerKwh: [0.09]
-							}
-						]
-					},
+					tou('Supply', tieredTouSeason([6, 7, 8, 9]), {
+						months: [1, 2, 3, 4, 5, 10, 11, 12],
+						tierLimitsKwh: [500],
+						periods: [],
+						otherPerKwh: 0.08,
+						otherAbovePerKwh: [0.09]
+					}),
 					{ label: 'Energy', type: 'flat', perKwh: 0.02 }
 				]
 			})
