@@ -82,22 +82,35 @@ export function billLines(tariff: Tariff, input: BillInput): Bill {
 }
 
 /**
- * The yearly minimum's top-up of each billing period: the calculation's periods in runs of 12 (the
- * last run may be shorter, its floor prorated n/12); a run whose bills before taxes add up to less
- * than the floor gets the difference on its last period. `subtotals` are each period's bill before
- * taxes (fixed charges and monthly minimums included).
+ * The yearly minimum's top-up of each billing period. The calculation's periods go in runs of 12 from
+ * its start (the last run may be shorter). A run's floor is a twelfth of the yearly minimum for each of
+ * its periods priced on a tariff that has one — so a shorter run's floor is n/12 of it, and across a
+ * change of tariff version each version's minimum counts for the months it was in force (common
+ * practice: a changed rate is prorated by the time it applied). When those periods' bills before
+ * taxes (fixed charges and monthly minimums included) add up to less than the floor, the last of them
+ * gets the difference. A new version does not start a new year: the same tariff split into two
+ * versions bills as one.
+ *
+ * Example: 12 months, $120 a year before July and $240 from July, $5 billed a month: the floor is
+ * 6 × 10 + 6 × 20 = 180, the bills 60, and December gets 120.
  */
 export function yearlyMinimumTopUps(
-	perYear: number | null | undefined,
-	subtotals: readonly number[]
+	periods: ReadonlyArray<{ perYear: number | null | undefined; subtotal: number }>
 ): number[] {
-	const topUps = subtotals.map(() => 0);
-	if (perYear == null) return topUps;
-	for (let start = 0; start < subtotals.length; start += 12) {
-		const run = subtotals.slice(start, start + 12);
-		const floor = (perYear * run.length) / 12;
-		const billed = run.reduce((sum, value) => sum + value, 0);
-		if (billed < floor) topUps[start + run.length - 1] = roundMoney(floor - billed);
+	const topUps = periods.map(() => 0);
+	for (let start = 0; start < periods.length; start += 12) {
+		let floor = 0;
+		let billed = 0;
+		let last = -1;
+		for (let i = start; i < Math.min(start + 12, periods.length); i++) {
+			const { perYear, subtotal } = periods[i]!;
+			if (perYear == null) continue;
+			floor += perYear;
+			billed += subtotal;
+			last = i;
+		}
+		floor /= 12;
+		if (last >= 0 && billed < floor) topUps[last] = roundMoney(floor - billed);
 	}
 	return topUps;
 }

@@ -12,7 +12,8 @@ export interface MeasuredPeak {
  * whose month is listed. A period's peak is its highest demand over all its intervals, whatever price
  * or window applied then (as NREL's REopt looks back on the open rate database's ratchets), so a
  * summer charge's ratchet can be set by a winter peak. Only periods of the same calculation count
- * (earlier history is not known).
+ * (earlier history is not known), on whichever version of the tariff each was priced: across a rate
+ * change the new version's ratchet looks back on the old version's months too.
  */
 export function ratchetFloorKw(charge: DemandCharge, earlier: readonly MeasuredPeak[]): number {
 	const { ratchet } = charge;

@@ -3,7 +3,11 @@ import { describe, expect, it } from 'vitest';
 import { dayNumber, isWeekend } from './dates';
 import { type ScheduleInput, device, line, onlyPeriod } from './requests.fixture';
 import type { TariffInput } from './tariff.schema';
-import { tou, touPeriod } from './tariffs.fixture';
+import { buildCalendar } from './calendar';
+import { billingSpans } from './periods';
+import { RateBook } from './rates';
+import { tariffSchema } from './tariff.schema';
+import { tiered, tieredTouSeason, tou, touPeriod, usdTariff } from './tariffs.fixture';
 
 /** Invented "Demo Valley Power" time-of-use supply: summer on-peak weekdays, a night rate past midnight. */
 function touTariff(more: Partial<TariffInput> = {}): TariffInput {
@@ -151,5 +155,32 @@ describe('public holidays', () => {
 
 	it('treats a holiday as an ordinary day for equipment', () => {
 		expect(onlyPeriod(holidayRequest(true, 'weekdays')).kwh).toBeCloseTo(5, 12);
+	});
+});
+
+describe('the columns of energy charges', () => {
+	it("finds each charge's first column, a tiered time-of-use charge taking one per season and slot", () => {
+		const tariff = tariffSchema.parse(
+			usdTariff({
+				energyCharges: [
+					tiered('Delivery', [500, 0.1], [null, 0.12]),
+					tou('Supply', tieredTouSeason([6, 7, 8, 9]), {
+						months: [1, 2, 3, 4, 5, 10, 11, 12],
+						tierLimitsKwh: [500],
+						periods: [],
+						otherPerKwh: 0.08,
+						otherAbovePerKwh: [0.09]
+					}),
+					{ label: 'Energy', type: 'flat', perKwh: 0.02 }
+				]
+			})
+		);
+		const rates = new RateBook(
+			tariff,
+			buildCalendar('UTC', null, billingSpans({ start: '2027-06', months: 1 }))
+		);
+		// Delivery: column 0; Supply: summer peak, summer other, winter other (1–3); Energy: column 4.
+		expect(rates.columns).toHaveLength(5);
+		expect([0, 1, 2, 3].map((e) => rates.firstColumn(e))).toEqual([0, 1, 4, -1]);
 	});
 });

@@ -22,12 +22,17 @@ export class RateBook {
 	private readonly totals = new Map<Float64Array, number>();
 	/** The sums an energy charge needs (see `EnergyColumn`); weights are per column. */
 	readonly columns: readonly EnergyColumn[];
+	/** Per energy charge, the index of its first column (found once: it is asked per charge and device). */
+	private readonly firstColumns: readonly number[];
 
 	constructor(
 		readonly tariff: Tariff,
 		readonly calendar: Calendar
 	) {
 		this.columns = energyColumns(tariff);
+		this.firstColumns = tariff.energyCharges.map((_, e) =>
+			this.columns.findIndex((column) => column.charge === e)
+		);
 		this.weights = this.columns.map(() => new Array(calendar.classes.length));
 		this.masks = tariff.demandCharges.map(() => new Array(calendar.classes.length));
 	}
@@ -121,7 +126,7 @@ export class RateBook {
 
 	/** The first column of energy charge e (its only one unless it is a tiered time-of-use charge). */
 	firstColumn(charge: number): number {
-		return this.columns.findIndex((column) => column.charge === charge);
+		return this.firstColumns[charge] ?? -1;
 	}
 
 	/** Σ weight × hours over one day of the class. */

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { tariffSchema } from './tariff.schema';
 import { device, flatTariff, line, onlyPeriod, run } from './requests.fixture';
+import { tieredTouSeason, tou } from './tariffs.fixture';
 
 /**
  * The charges real tariffs use (issue 19). Each expected figure is a worked example derived from the
@@ -8,28 +9,7 @@ import { device, flatTariff, line, onlyPeriod, run } from './requests.fixture';
  */
 describe('tiers inside time-of-use periods', () => {
 	const tariff = flatTariff(0, {
-		energyCharges: [
-			{
-				label: 'Energy',
-				type: 'tou',
-				seasons: [
-					{
-						months: [1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11, 12],
-						tierLimitsKwh: [500],
-						periods: [
-							{
-								label: 'Peak',
-								perKwh: 0.3,
-								abovePerKwh: [0.4],
-								windows: [{ start: '12:00', end: '18:00' }]
-							}
-						],
-						otherPerKwh: 0.1,
-						otherAbovePerKwh: [0.15]
-					}
-				]
-			}
-		]
+		energyCharges: [tou('Energy', tieredTouSeason([1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11, 12]))]
 	});
 
 	it('tiers the month’s kWh across periods and shares each tier by the periods’ kWh', () => {

@@ -37,3 +37,19 @@ export function touPeriod(
 export function tou(label: string, ...seasons: TouSeasonInput[]): EnergyChargeInput {
 	return { label, type: 'tou', seasons };
 }
+
+/**
+ * A season with tiers inside its periods: 500 kWh at each period's first price, the rest at its second;
+ * "Peak" 12:00–18:00 at $0.30 then $0.40, the other hours $0.10 then $0.15.
+ */
+export function tieredTouSeason(months: number[]): TouSeasonInput {
+	return {
+		months,
+		tierLimitsKwh: [500],
+		periods: [
+			{ label: 'Peak', perKwh: 0.3, abovePerKwh: [0.4], windows: [{ start: '12:00', end: '18:00' }] }
+		],
+		otherPerKwh: 0.1,
+		otherAbovePerKwh: [0.15]
+	};
+}

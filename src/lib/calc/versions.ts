@@ -1,7 +1,7 @@
-import { calculate } from './calculate';
+import { priceRun, totalsOf, withYearlyMinimums } from './calculate';
+import type { MeasuredPeak } from './demand-charges';
 import { billingSpans, type BillingSpan } from './periods';
 import type { CalculateRequest } from './request.schema';
-import { roundMoney } from './rounding';
 import type { Tariff } from './tariff.schema';
 import type { CalculateResponse } from './types';
 
@@ -74,8 +74,11 @@ function earliestVersion<V extends Omit<DatedTariff, 'tariff'>>(versions: readon
 
 /**
  * Calculates with, for each billing period, the version in force on the period's first day (the rule
- * of the tariff library). Consecutive periods on the same version are calculated together, so a year
- * that crosses one rate change costs two calculate() runs. A pinned version is simply a one-element list.
+ * of the tariff library). Consecutive periods on the same version are priced together, so a year that
+ * crosses one rate change costs two runs, but it stays one calculation: a ratchet in the second run
+ * looks back on the whole-period peaks of the first run's months too, and the yearly minimum's years
+ * count from the first period (see `yearlyMinimumTopUps`). So pricing on two versions that hold the
+ * same tariff gives what one version gives. A pinned version is simply a one-element list.
  */
 export function calculateAcrossVersions(
 	request: CalculateRequest,
@@ -98,22 +101,24 @@ export function calculateAcrossVersions(
 		else groups.push({ version, spans: [span], firstIndex: index });
 	});
 
-	const results = groups.map((group) => {
+	// One calculation: each run sees the peaks of the runs before (a ratchet's history) and the years
+	// of a yearly minimum run from the first period, whatever version each period is on.
+	const history: MeasuredPeak[] = [];
+	const priced = groups.flatMap((group) => {
 		const period: CalculateRequest['period'] =
 			'months' in request.period
 				? { start: group.spans[0]!.label, months: group.spans.length }
 				: { billingPeriods: group.spans.map(({ from, to }) => ({ from, to })) };
-		return calculate({ ...request, period, tariff: group.version.tariff });
+		const { tariff } = group.version;
+		const run = priceRun({ ...request, period, tariff }, history);
+		history.push(...run.map((p) => p.peak));
+		return run.map((p) => ({ priced: p, perYear: tariff.minimumPerYear }));
 	});
-	const periods = results.flatMap((r) => r.periods);
+	const periods = withYearlyMinimums(priced);
 	return {
-		currency: results[0]?.currency ?? request.tariff.currency,
+		currency: groups[0]?.version.tariff.currency ?? request.tariff.currency,
 		periods,
-		totals: {
-			kwh: periods.reduce((sum, p) => sum + p.kwh, 0),
-			cost: roundMoney(periods.reduce((sum, p) => sum + p.total, 0)),
-			peakKw: periods.reduce((peak, p) => Math.max(peak, p.peakKw), 0)
-		},
+		totals: totalsOf(periods),
 		versions: groups.flatMap((g) =>
 			g.spans.map((s) => ({ label: s.label, versionId: g.version.id, number: g.version.number }))
 		),

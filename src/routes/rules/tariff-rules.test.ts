@@ -16,12 +16,17 @@ describe('the rules page on the charges real tariffs use', () => {
 		['ratchet months back', 'the given number of periods just before this'],
 		['ratchet listed months', 'those of the 11 periods before whose month is listed'],
 		['within the calculation', 'Only the billing periods of the same calculation count'],
+		['ratchet across versions', "a new version's ratchet looks back on the months priced on the old one"],
 		['ratchet shared cost', 'no device caused it and it is shared cost'],
 		['yearly fixed', 'a per-year charge is a twelfth of its amount on each billing period'],
 		['minimum per day', 'a minimum per day (× the days of the billing period)'],
 		[
 			'yearly minimum',
 			'on each run of 12 billing periods from the start of the calculation (a shorter last run on n/12 of it)'
+		],
+		[
+			'yearly minimum across versions',
+			"each version's yearly minimum counts a twelfth for each of its billing periods"
 		]
 	])('states %s', (_, words) => {
 		expect(body.replace(/\s+/g, ' ')).toContain(words);

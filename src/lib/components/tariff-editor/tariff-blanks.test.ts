@@ -11,14 +11,14 @@ import {
 	blankSeason,
 	blankTariff,
 	blankTax,
-	insertTier,
 	quarterHours,
-	removeTier,
 	setChargeMonths,
 	setFixedBasis,
 	toggleMonth,
 	unclaimedMonths
 } from './tariff-blanks';
+import type { DemandTierInput } from './demand-blanks';
+import { DEMAND_TIERS, ENERGY_TIERS, insertTier, removeTier } from './tier-steps';
 
 describe('a freshly added row', () => {
 	it('gives a tariff the shared schema accepts, whichever charges were added', () => {
@@ -61,7 +61,7 @@ describe('tiers', () => {
 			{ uptoKwh: 500, perKwh: 0.05 },
 			{ uptoKwh: null, perKwh: 0.08 }
 		];
-		insertTier(tiers);
+		insertTier(tiers, ENERGY_TIERS);
 		expect(tiers).toEqual([
 			{ uptoKwh: 500, perKwh: 0.05 },
 			{ uptoKwh: 1000, perKwh: 0.05 },
@@ -71,8 +71,26 @@ describe('tiers', () => {
 
 	it('starts an empty list with a tier and an open-ended one', () => {
 		const tiers: TierInput[] = [];
-		insertTier(tiers);
+		insertTier(tiers, ENERGY_TIERS);
 		expect(tiers.map((tier) => tier.uptoKwh)).toEqual([500, null]);
+	});
+
+	it('steps demand tiers by 100 kW, at the price of the tier before', () => {
+		const tiers: DemandTierInput[] = [
+			{ uptoKw: 100, perKw: 10 },
+			{ uptoKw: null, perKw: 15 }
+		];
+		insertTier(tiers, DEMAND_TIERS);
+		expect(tiers).toEqual([
+			{ uptoKw: 100, perKw: 10 },
+			{ uptoKw: 200, perKw: 10 },
+			{ uptoKw: null, perKw: 15 }
+		]);
+		removeTier(tiers, 2, DEMAND_TIERS);
+		expect(tiers).toEqual([
+			{ uptoKw: 100, perKw: 10 },
+			{ uptoKw: null, perKw: 10 }
+		]);
 	});
 
 	it('opens the new last tier when the last is removed', () => {
@@ -80,7 +98,7 @@ describe('tiers', () => {
 			{ uptoKwh: 500, perKwh: 0.05 },
 			{ uptoKwh: null, perKwh: 0.08 }
 		];
-		removeTier(tiers, 1);
+		removeTier(tiers, 1, ENERGY_TIERS);
 		expect(tiers).toEqual([{ uptoKwh: null, perKwh: 0.05 }]);
 	});
 
@@ -90,7 +108,7 @@ describe('tiers', () => {
 			{ uptoKwh: 900, perKwh: 0.06 },
 			{ uptoKwh: null, perKwh: 0.08 }
 		];
-		removeTier(tiers, 1);
+		removeTier(tiers, 1, ENERGY_TIERS);
 		expect(tiers.map((tier) => tier.uptoKwh)).toEqual([500, null]);
 	});
 });

@@ -82,27 +82,6 @@ export function blankTax(): TaxInput {
 	return { label: 'Tax', percent: 0 };
 }
 
-/**
- * Adds a tier just before the open-ended last one, ending a step above the last closed tier (500 kWh
- * steps: a round number a person then types over), at the rate of the tier before it.
- */
-export function insertTier(tiers: TierInput[]): void {
-	const closed = tiers.map((tier) => tier.uptoKwh).filter((kwh): kwh is number => typeof kwh === 'number');
-	const top = closed.length ? Math.max(...closed) : 0;
-	const before = tiers[tiers.length - 2] ?? tiers[tiers.length - 1];
-	const tier: TierInput = { uptoKwh: top + 500, perKwh: before?.perKwh ?? 0 };
-	if (tiers.length === 0) tiers.push({ uptoKwh: null, perKwh: 0 });
-	tiers.splice(tiers.length - 1, 0, tier);
-}
-
-/** Removes a tier; when the last goes, the one before becomes open-ended ("and above"). */
-export function removeTier(tiers: TierInput[], index: number): void {
-	const wasLast = index === tiers.length - 1;
-	tiers.splice(index, 1);
-	const last = tiers[tiers.length - 1];
-	if (wasLast && last) last.uptoKwh = null;
-}
-
 /** Months with one switched on or off, in calendar order. */
 export function toggleMonth(months: readonly number[], month: number): number[] {
 	const next = months.includes(month) ? months.filter((m) => m !== month) : [...months, month];

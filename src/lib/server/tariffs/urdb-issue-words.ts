@@ -1,5 +1,5 @@
 // Where a problem of an open-rate-database rate sits, in words a person can find in the file.
-import type { RequestIssue } from '$lib/calc';
+import { MONTH_NAMES, type RequestIssue } from '$lib/calc';
 
 const FIELDS: Record<string, string> = {
 	energyratestructure: 'Energy rate structure',
@@ -25,21 +25,6 @@ const FIELDS: Record<string, string> = {
 	uri: 'Address (uri)'
 };
 
-const MONTHS = [
-	'January',
-	'February',
-	'March',
-	'April',
-	'May',
-	'June',
-	'July',
-	'August',
-	'September',
-	'October',
-	'November',
-	'December'
-];
-
 const clock = (hour: number) => `${String(hour).padStart(2, '0')}:00`;
 
 /** The place a dotted path names: "Weekday energy schedule, April, 05:00–06:00"; "" for the rate itself. */
@@ -53,7 +38,7 @@ export function placeInWords(path: string): string {
 	if (field.endsWith('schedule')) {
 		const [month, hour] = at;
 		const words = [name];
-		if (month !== undefined) words.push(MONTHS[month] ?? `month ${month + 1}`);
+		if (month !== undefined) words.push(MONTH_NAMES[month] ?? `month ${month + 1}`);
 		if (hour !== undefined) words.push(`${clock(hour)}–${clock(hour + 1)}`);
 		return words.join(', ');
 	}

@@ -99,6 +99,19 @@ describe('one rate of the file', () => {
 		});
 	});
 
+	it('is the single-rate import’s submission: the label in the description, what was not taken in the change note', () => {
+		const outcome = rateOutcome({ ...RS1, dgrules: 'Net Metering', sector: 'Agriculture' }, ALL, TODAY);
+		expect(outcome.kind).toBe('ready');
+		if (outcome.kind !== 'ready') return;
+		expect(outcome.submission.meta.customerClass).toBe('agricultural');
+		expect(outcome.submission.meta.description).toMatch(
+			/^Imported from the OpenEI Utility Rate Database, label 5550d6fd5457a3187e8b4567\./
+		);
+		expect(outcome.submission.version.changeNote).toMatch(
+			/^Imported from the OpenEI Utility Rate Database\. Not taken: .*dgrules/i
+		);
+	});
+
 	it('keeps a long name, shortened to the library’s 120 characters, with a note saying so', () => {
 		const outcome = rateOutcome({ ...RS1, name: 'Very long invented rate name '.repeat(10) }, ALL, TODAY);
 		expect(outcome.kind).toBe('ready');

@@ -1,6 +1,7 @@
-import { parseRequest, tariffFromUrdb, urdbRateSchema, type RequestIssue } from '$lib/calc';
-import type { CustomerClass } from '$lib/forms/tariff-meta.schema';
+import { parseRequest, tariffFromUrdb, urdbDate, urdbRateSchema, type RequestIssue } from '$lib/calc';
 import { tariffSubmissionSchema, type TariffSubmission } from '../submission';
+import { urdbSubmission } from '../urdb-provenance';
+import type { UrdbRateFields } from '../urdb-read';
 import type { BulkFilters } from './bulk-options';
 
 /**
@@ -14,34 +15,10 @@ export type RateOutcome =
 	| { kind: 'skipped'; label: string | null; name: string | null; reasons: string[] }
 	| { kind: 'ready'; label: string; name: string; submission: TariffSubmission; notes: string[] };
 
-/** The open rate database's sectors as Runrate's customer classes (street lighting has none of its own). */
-const CLASS_OF_SECTOR: Record<string, CustomerClass> = {
-	residential: 'residential',
-	commercial: 'commercial',
-	industrial: 'industrial',
-	agricultural: 'agricultural'
-};
-
-/** Lengths the tariff library keeps (tariff-meta.schema.ts): longer names are shortened, with a note. */
+/** The library's length of a name (tariff-meta.schema.ts): a longer one is shortened, with a note. */
 const NAME_CHARS = 120;
-const SOURCE_CHARS = 500;
 
 const textOf = (value: unknown) => (typeof value === 'string' ? value.trim() : '');
-
-const DAY_SECONDS = 86_400;
-
-/**
- * The calendar date a database timestamp stands for, or null when absent or off the calendar. The
- * database keeps dates as Unix seconds at about midnight of the zone they were entered in (RS-1's end is
- * 23:00 UTC the day before), so the nearest UTC midnight gives the date as entered: the same rule as the
- * single-rate import's provenance.
- */
-function isoDay(seconds: unknown): string | null {
-	if (typeof seconds !== 'number' || !Number.isFinite(seconds)) return null;
-	const date = new Date(Math.round(seconds / DAY_SECONDS) * DAY_SECONDS * 1000);
-	const year = date.getUTCFullYear();
-	return Number.isNaN(year) || year < 1900 || year > 9999 ? null : date.toISOString().slice(0, 10);
-}
 
 const SECTION: Record<string, string> = {
 	energyratestructure: 'Energy rates',
@@ -72,12 +49,6 @@ export function filteredBy(rate: unknown, filters: BulkFilters): 'sector' | 'uti
 	return null;
 }
 
-const shortened = (text: string, max: number, notes: string[], what: string) => {
-	if (text.length <= max) return text;
-	notes.push(`The ${what} was shortened to ${max} characters`);
-	return `${text.slice(0, max - 1)}…`;
-};
-
 /** One rate of the file: filtered, skipped with its reasons, or ready to save. */
 export function rateOutcome(rate: unknown, filters: BulkFilters, checkedOn: string): RateOutcome {
 	const by = filteredBy(rate, filters);
@@ -94,37 +65,24 @@ export function rateOutcome(rate: unknown, filters: BulkFilters, checkedOn: stri
 	const converted = tariffFromUrdb(parsed.data);
 	const notes = converted.notes.map((n) => n.message);
 	if (!converted.tariff) return skip(notes.length ? notes : ['Its charges cannot be expressed in Runrate']);
-	const effectiveFrom = isoDay(raw.startdate);
-	if (!effectiveFrom)
+	if (!urdbDate(parsed.data.startdate))
 		return skip(['The rate has no start date, so Runrate cannot tell from when it applies']);
-	const utility = shortened(textOf(raw.utility) || 'Unnamed utility', NAME_CHARS, notes, 'utility’s name');
-	const tariffName = shortened(name ?? label, NAME_CHARS, notes, 'rate’s name');
-	const uri = textOf(raw.uri);
-	const source =
-		uri && uri.length <= SOURCE_CHARS ? uri : `OpenEI Utility Rate Database, label ${label.slice(0, 200)}`;
-	const submission = parseRequest(tariffSubmissionSchema, {
-		meta: {
-			utility,
-			name: tariffName,
-			code: null,
-			country: 'US',
-			region: null,
-			area: null,
-			customerClass: CLASS_OF_SECTOR[textOf(raw.sector).toLowerCase()] ?? 'other',
-			currency: 'USD',
-			timezone: filters.timezone,
-			holidays: null,
-			description: null
+	// The single-rate import's submission: provenance, customer class, description and what was not taken.
+	const built = urdbSubmission(
+		{
+			tariff: converted.tariff,
+			meta: converted.meta,
+			notes: converted.notes,
+			rate: parsed.data as UrdbRateFields
 		},
-		version: {
-			effectiveFrom,
-			effectiveTo: isoDay(raw.enddate),
-			source,
-			checkedOn,
-			changeNote: 'Imported from the OpenEI Utility Rate Database'
-		},
-		structure: converted.tariff
-	});
+		{ timezone: filters.timezone },
+		checkedOn
+	);
+	if (textOf(converted.meta.utility).length > NAME_CHARS)
+		notes.push(`The utility’s name was shortened to ${NAME_CHARS} characters`);
+	if (textOf(converted.meta.name).length > NAME_CHARS)
+		notes.push(`The rate’s name was shortened to ${NAME_CHARS} characters`);
+	const submission = parseRequest(tariffSubmissionSchema, built);
 	if (!submission.success) return skip(submission.error.issues.map((issue) => issue.message));
-	return { kind: 'ready', label, name: tariffName, submission: submission.data, notes };
+	return { kind: 'ready', label, name: submission.data.meta.name, submission: submission.data, notes };
 }
