@@ -197,8 +197,8 @@ describe('the printable report and the workbook', () => {
 		if (!data.cheapest.ok) throw new Error(data.cheapest.message);
 		expect(data.cheapest.priced).toMatch(/^March 2027 – February 2028, the estimated load of the scenario/);
 		const flatRow = data.cheapest.ranked.find((r) => r.id === ids.flat)!;
-		// Derived from the rule: 24 kWh a day for the 365 days from March 2027 at 0.12 a kWh.
-		expect(flatRow.annualCost).toBeCloseTo(24 * 365 * 0.12, 1);
+		// Derived from the rule: 24 kWh a day for the 366 days from March 2027 (February 2028 has 29) at 0.12 a kWh.
+		expect(flatRow.annualCost).toBeCloseTo(24 * 366 * 0.12, 1);
 		expect(flatRow.provenance).toEqual({
 			urdbLabel: null,
 			versions: [expect.objectContaining({ number: 1, effectiveFrom: '2025-01-01', effectiveTo: null })]
