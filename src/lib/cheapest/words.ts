@@ -19,9 +19,9 @@ const MONTHS = [
 
 /** "2027-01" → "January 2027"; anything else as it is. */
 export function monthWords(month: string): string {
-	const [year, number] = month.split('-');
-	const name = MONTHS[Number(number) - 1];
-	return name && year ? `${name} ${year}` : month;
+	const parts = /^(\d{4})-(\d{2})$/.exec(month);
+	const name = parts && MONTHS[Number(parts[2]) - 1];
+	return name ? `${name} ${parts[1]}` : month;
 }
 
 /** "saves $120.00 a year (−$120.00)" / "costs $40.00 more a year (+$40.00)" / "current tariff" / "—" */
@@ -32,6 +32,14 @@ export function differenceWords(amount: number | null, currency: string, current
 	return amount < 0
 		? `saves ${money(-amount, currency)} a year (−${money(-amount, currency)})`
 		: `costs ${money(amount, currency)} more a year (+${money(amount, currency)})`;
+}
+
+/** The difference as a signed amount, for the printed table: "−$120.00" / "+$40.00" / "current" / "—". */
+export function differenceFigure(amount: number | null, currency: string, current: boolean): string {
+	if (current) return 'current';
+	if (amount === null) return '—';
+	if (Math.abs(amount) < 0.005) return money(0, currency);
+	return amount < 0 ? `−${money(-amount, currency)}` : `+${money(amount, currency)}`;
 }
 
 /** "in force from 2027-01-01" / "in force from 2026-01-01 to 2026-12-31" */
