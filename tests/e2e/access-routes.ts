@@ -317,6 +317,12 @@ export const routes: Route[] = [
 		path: () => `/sites/${SITE}/${page}`,
 		expect: [303, 200, 200, 200, 404, 404, 200]
 	})),
+	// The cheapest-tariff report and workbook of a demo scenario's coming year.
+	...['cheapest/report', 'cheapest/export.xlsx'].map((page) => ({
+		method: 'GET' as const,
+		path: () => `/sites/${SITE}/${page}?scenario=${SCENARIO}`,
+		expect: [303, 200, 200, 200, 404, 404, 200]
+	})),
 	...['bills?/add', 'bills?/import', 'usage?/import'].map((action) => ({
 		method: 'POST' as const,
 		path: () => `/sites/${SITE}/${action}`,

@@ -1,4 +1,5 @@
-import { expect, test } from '@playwright/test';
+import { expect, test, type Page } from '@playwright/test';
+import { readFileSync } from 'node:fs';
 import { gotoReady, signInWithPassword } from './helpers';
 import { createSite, PUBLIC_TARIFF } from './site-setup';
 
@@ -18,6 +19,23 @@ function yearCsv(): string {
 	}
 	return lines.join('\n') + '\n';
 }
+
+/** Elements reaching past the window's right edge, outside a box that scrolls on its own (none expected). */
+const pastRightEdge = (page: Page) =>
+	page.evaluate(() => {
+		const width = document.documentElement.clientWidth;
+		return [...document.querySelectorAll('main *')]
+			.filter(
+				(el) => !el.closest('[role="region"][tabindex]') && el.getBoundingClientRect().right > width + 0.5
+			)
+			.map((el) => `${el.tagName.toLowerCase()}.${el.className}`);
+	});
+
+const demoSite = (
+	JSON.parse(readFileSync('data/demo-sites.json', 'utf8')) as {
+		sites: { id: string; scenarios: { id: string }[] }[];
+	}
+).sites[0]!;
 
 test.describe('which tariff is cheapest', () => {
 	test('cheapest tariff: a site with a year of metered usage sees the tariffs ranked and the top one explained', async ({
@@ -61,15 +79,81 @@ test.describe('which tariff is cheapest', () => {
 		// At 390 px the page does not scroll sideways: the table scrolls in its own box.
 		await page.setViewportSize({ width: 390, height: 844 });
 		await expect(table).toBeVisible();
-		// Elements reaching past the window's right edge, outside a box that scrolls on its own (none expected).
-		const past = await page.evaluate(() => {
-			const width = document.documentElement.clientWidth;
-			return [...document.querySelectorAll('main *')]
-				.filter(
-					(el) => !el.closest('[role="region"][tabindex]') && el.getBoundingClientRect().right > width + 0.5
-				)
-				.map((el) => `${el.tagName.toLowerCase()}.${el.className}`);
-		});
-		expect(past).toEqual([]);
+		expect(await pastRightEdge(page)).toEqual([]);
+	});
+
+	test('cheapest tariff: a demo scenario priced over the coming year, with its report and workbook', async ({
+		page
+	}) => {
+		await signInWithPassword(page, 'owner@example.org');
+		await gotoReady(page, `/sites/${demoSite.id}/cheapest`);
+		// The first month belongs to a scenario's estimate: it shows once a scenario is picked.
+		await expect(page.getByLabel('First month')).toHaveCount(0);
+		const scenario = demoSite.scenarios[0]!.id;
+		await page.getByLabel('Load to price').selectOption(scenario);
+		await expect(page.getByLabel('First month')).toBeVisible();
+		await page.getByRole('button', { name: 'Price it' }).click();
+		await page.waitForURL((url) => url.searchParams.get('scenario') === scenario);
+
+		// The coming 12 months: the demo's tariffs are in force then, so they are ranked, not set aside.
+		await expect(
+			page.getByText(/^Months priced: \w+ \d{4} – \w+ \d{4}, the estimated load of the scenario/)
+		).toBeVisible();
+		const table = page.getByRole('region', { name: 'Tariffs ranked by annual cost' });
+		await expect(table.getByRole('row').nth(1)).toBeVisible();
+		await expect(
+			page.getByRole('table', { name: 'Energy and peak demand of each month priced' })
+		).toBeVisible();
+		const sources = page.getByRole('region', { name: 'Sources' });
+		await sources.locator('summary').first().click();
+		await expect(sources.getByText(/source: .+; checked on \d{4}-\d{2}-\d{2}/).first()).toBeVisible();
+
+		// A month out of reach is refused beside its field; the coming year is still priced.
+		await page.getByLabel('First month').fill('2099-01');
+		await page.getByRole('button', { name: 'Price it' }).click();
+		await expect(page.getByLabel('First month')).toHaveAttribute('aria-invalid', 'true');
+		await expect(page.getByText(/^Choose a first month within 10 years of today/)).toBeVisible();
+		await expect(table.getByRole('row').nth(1)).toBeVisible();
+
+		await page.getByLabel('First month').fill('2027-03');
+		await page.getByRole('button', { name: 'Price it' }).click();
+		await expect(
+			page.getByText(/^Months priced: March 2027 – February 2028, the estimated load/)
+		).toBeVisible();
+		await expect(page.getByLabel('First month')).not.toHaveAttribute('aria-invalid', 'true');
+
+		// At 390 px the page with both fields does not scroll sideways.
+		await page.setViewportSize({ width: 390, height: 844 });
+		await expect(page.getByLabel('First month')).toBeVisible();
+		expect(await pastRightEdge(page)).toEqual([]);
+		await page.setViewportSize({ width: 1366, height: 900 });
+
+		await page.getByRole('link', { name: 'Printable report' }).click();
+		await page.waitForURL(/\/cheapest\/report\?scenario=.+&from=2027-03$/);
+		await expect(page.locator('body[data-hydrated="true"]')).toBeAttached();
+		await expect(page.getByRole('button', { name: 'Print or save as PDF' })).toBeVisible();
+		await expect(
+			page.getByText(/^These are estimates from the tariffs as stored; check eligibility with the utility/)
+		).toBeVisible();
+		await expect(page.getByText('Prepared by')).toBeVisible();
+		await expect(page.getByRole('heading', { level: 2, name: 'Sources' })).toBeVisible();
+		await expect(page.getByText(/^March 2027 – February 2028, the estimated load/)).toBeVisible();
+
+		const download = page.waitForEvent('download');
+		await page.getByRole('link', { name: 'Download the workbook (.xlsx)' }).click();
+		const file = await download;
+		expect(file.suggestedFilename()).toMatch(/^alder-creek-trout-hatchery-demo-cheapest-tariff-.+\.xlsx$/);
+		const answer = await page.request.get(
+			new URL(page.url()).pathname.replace(/report$/, 'export.xlsx') + new URL(page.url()).search
+		);
+		expect(answer.status()).toBe(200);
+		expect(answer.headers()['content-type']).toBe(
+			'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet'
+		);
+		// An .xlsx is a zip archive: it starts with "PK".
+		expect((await answer.body()).subarray(0, 2).toString()).toBe('PK');
+
+		await page.setViewportSize({ width: 390, height: 844 });
+		expect(await pastRightEdge(page)).toEqual([]);
 	});
 });

@@ -1,8 +1,12 @@
+import type { RequestEvent } from '@sveltejs/kit';
 import { and, eq } from 'drizzle-orm';
+import ExcelJS from 'exceljs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { TariffInput } from '$lib/calc';
 import { client, db } from '$lib/server/db';
-import { usageIntervals } from '$lib/server/db/schema';
+import { usageIntervals, type DeviceSpec } from '$lib/server/db/schema';
+import { saveDevices } from '$lib/server/sites/equipment.service';
+import { listScenarios } from '$lib/server/sites/scenario.service';
 import type { SiteRow } from '$lib/server/sites/site.service';
 import { cheapestTariffs } from '$lib/server/tariffs/cheapest';
 import { createTariff } from '$lib/server/tariffs/tariff.service';
@@ -10,6 +14,8 @@ import type { Interval } from '$lib/server/usage/interval';
 import { importUsage } from '$lib/server/usage/usage.service';
 import { createWorkspace } from '$lib/server/workspaces/workspace.service';
 import type { Actor } from '$lib/server/workspaces/audit';
+import { GET as exportXlsx } from '../../src/routes/sites/[siteId]/cheapest/export.xlsx/+server';
+import { load as reportLoad } from '../../src/routes/sites/[siteId]/cheapest/report/+page.server';
 import { flat, makeSite, makeUser, tariffMeta, versionMeta } from './fixtures';
 
 // Against the real PostgreSQL of `npm test`; invented utilities, tariffs, sites and readings. The utilities'
@@ -137,5 +143,89 @@ describe('usage that cannot be priced as a year', () => {
 			message:
 				'The stored usage holds 3 whole calendar months; comparing tariffs needs 12 whole months in a row. Import more usage.'
 		});
+	});
+});
+
+describe('the printable report and the workbook', () => {
+	/** A 1 kW pump running all day: 24 kWh a day whatever the tariff. */
+	const pump = {
+		name: 'Circulation pump',
+		category: 'water-pump',
+		power: { watts: 1000 },
+		schedule: { type: 'always' }
+	} as DeviceSpec;
+	let stranger: SessionUser;
+	let scenarioId = '';
+
+	beforeAll(async () => {
+		stranger = await makeUser(`stranger-${tag}@example.org`, 'Stranger');
+		await createWorkspace(`Stranger's own ${tag}`, stranger.id);
+		const [baseline] = await listScenarios(site.id);
+		scenarioId = baseline!.id;
+		await saveDevices(site, baseline!, baseline!.revision, [pump], owner);
+	});
+
+	const eventFor = (user: SessionUser, path: string, search = '') =>
+		({
+			locals: { user },
+			params: { siteId: site.id },
+			url: new URL(`http://127.0.0.1/sites/${site.id}/cheapest/${path}${search}`),
+			request: new Request(`http://127.0.0.1/sites/${site.id}/cheapest/${path}${search}`)
+		}) as unknown as RequestEvent;
+
+	async function statusOf(run: () => unknown): Promise<number> {
+		try {
+			const answer = await run();
+			return answer instanceof Response ? answer.status : 200;
+		} catch (e) {
+			return (e as { status: number }).status;
+		}
+	}
+
+	it('refuses a stranger to the site as the site page does (404), on the report and the workbook', async () => {
+		const report = await statusOf(() => reportLoad(eventFor(stranger, 'report') as never));
+		const workbook = await statusOf(() => exportXlsx(eventFor(stranger, 'export.xlsx') as never));
+		expect([report, workbook]).toEqual([404, 404]);
+	});
+
+	it('gives the owner the report of a scenario’s chosen year, with the sources and the usage priced', async () => {
+		const data = (await reportLoad(
+			eventFor(owner as SessionUser, 'report', `?scenario=${scenarioId}&from=2027-03`) as never
+		)) as Exclude<Awaited<ReturnType<typeof reportLoad>>, void>;
+		expect(data.author).toBe('Cheapest owner');
+		expect(data.search).toBe(`?scenario=${scenarioId}&from=2027-03`);
+		if (!data.cheapest.ok) throw new Error(data.cheapest.message);
+		expect(data.cheapest.priced).toMatch(/^March 2027 – February 2028, the estimated load of the scenario/);
+		const flatRow = data.cheapest.ranked.find((r) => r.id === ids.flat)!;
+		// Derived from the rule: 24 kWh a day for the 366 days from March 2027 (February 2028 has 29) at 0.12 a kWh.
+		expect(flatRow.annualCost).toBeCloseTo(24 * 366 * 0.12, 1);
+		expect(flatRow.provenance).toEqual({
+			urdbLabel: null,
+			versions: [expect.objectContaining({ number: 1, effectiveFrom: '2025-01-01', effectiveTo: null })]
+		});
+		// 31 days of 24 hours, less the hour Chicago skips when daylight saving time starts (14 March 2027).
+		expect(data.cheapest.usage[0]).toEqual({ month: '2027-03', kwh: 24 * 31 - 1, peakKw: 1 });
+	});
+
+	it('gives the owner the workbook of the metered year as an .xlsx download', async () => {
+		const answer = (await exportXlsx(eventFor(owner as SessionUser, 'export.xlsx') as never)) as Response;
+		expect(answer.status).toBe(200);
+		expect(answer.headers.get('content-type')).toBe(
+			'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet'
+		);
+		expect(answer.headers.get('content-disposition')).toMatch(
+			/^attachment; filename="greenhouse-cheapest-.*-cheapest-tariff-metered\.xlsx"$/
+		);
+		const workbook = new ExcelJS.Workbook();
+		await workbook.xlsx.load((await answer.arrayBuffer()) as unknown as ExcelJS.Buffer);
+		const usage = workbook.getWorksheet('Usage priced')!;
+		expect(usage.getCell('A4').value).toBe('January 2026');
+		expect(workbook.getWorksheet('Sources')!.getCell('B2').value).toBe(site.name);
+	});
+
+	it('says what is missing instead of an empty workbook when nothing can be priced', async () => {
+		const empty = await makeSite(workspaceId, owner, `Empty ${tag}`);
+		const event = { ...eventFor(owner as SessionUser, 'export.xlsx'), params: { siteId: empty.id } };
+		expect(await statusOf(() => exportXlsx(event as never))).toBe(409);
 	});
 });

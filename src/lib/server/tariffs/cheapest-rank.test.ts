@@ -147,6 +147,37 @@ describe('tariffs that are not priced', () => {
 	});
 });
 
+describe('the usage priced and the versions used', () => {
+	it('gives each month’s kWh and peak kW, the versions priced and each month’s bill', () => {
+		const meter = nightHeavyYear(60);
+		const ranking = rankTariffs([candidate('Flat', FLAT)], year(meter));
+		expect(ranking.usage.map((m) => m.month)).toEqual(
+			Array.from({ length: 12 }, (_, i) => `2027-${String(i + 1).padStart(2, '0')}`)
+		);
+		// Derived from the readings: the months' kWh add up to the year's, and 4 kWh in an hour is 4 kW.
+		const kwh = meter.kwh.reduce((a, b) => a + b, 0);
+		expect(ranking.usage.reduce((sum, m) => sum + m.kwh, 0)).toBeCloseTo(kwh, 6);
+		expect(ranking.usage.every((m) => m.peakKw === 4)).toBe(true);
+		const [flat] = ranking.ranked;
+		expect(flat!.versionNumbers).toEqual([1]);
+		expect(flat!.monthlyCosts).toHaveLength(12);
+		expect(flat!.monthlyCosts.reduce((a, b) => a + b, 0)).toBeCloseTo(flat!.annualCost, 2);
+	});
+
+	it('still gives the usage when no tariff could price the year', () => {
+		const late = candidate('Late', FLAT, { versions: [dated(FLAT, '2027-06-01')] });
+		const ranking = rankTariffs([late], year(nightHeavyYear(60)));
+		expect(ranking.ranked).toEqual([]);
+		expect(ranking.usage).toHaveLength(12);
+		expect(ranking.usage[0]!.kwh).toBeCloseTo(
+			nightHeavyYear(60)
+				.kwh.slice(0, 31 * 24)
+				.reduce((a, b) => a + b, 0),
+			6
+		);
+	});
+});
+
 describe('bench: 30 tariffs on a year of 15-minute readings', () => {
 	it('prints how long the ranking takes (a figure for the lead, no limit asserted)', () => {
 		const meter = nightHeavyYear(15);

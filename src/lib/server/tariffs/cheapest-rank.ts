@@ -1,5 +1,6 @@
 // Prices one metered year on each candidate tariff and ranks them by annual cost (no database here).
 import {
+	calculate,
 	calculateAcrossVersions,
 	calculateRequestSchema,
 	holidaysSchema,
@@ -11,6 +12,7 @@ import {
 	type Meter,
 	type VersionedResponse
 } from '$lib/calc';
+import type { RankedTariff, UnpricedTariff, UsageMonth } from '$lib/cheapest/types';
 import { touShares, type TouShare } from './cheapest-shares';
 
 /** A tariff the site may use, with every version, ready to price. */
@@ -24,28 +26,15 @@ export type Candidate = {
 	versions: DatedTariff[];
 };
 
-/** A tariff priced on the year: its annual cost and what it is made of. */
-export type RankedTariff = {
-	id: string;
-	name: string;
-	utility: string;
-	current: boolean;
-	annualCost: number;
-	energyCost: number;
-	fixedCost: number;
-	demandCost: number;
-	/** Annual cost minus the current tariff's; null when the current tariff was not priced. */
-	differenceToCurrent: number | null;
-};
-
-/** A tariff that was not priced, and why in words. */
-export type UnpricedTariff = { id: string; name: string; utility: string; current: boolean; reason: string };
+export type { RankedTariff, UnpricedTariff, UsageMonth } from '$lib/cheapest/types';
 
 export type Ranking = {
 	ranked: RankedTariff[];
 	unpriced: UnpricedTariff[];
 	/** The top tariff's share of the year's kWh in each time-of-use period (empty when it has none). */
 	topShares: TouShare[];
+	/** The load priced, month by month (the same on every tariff); empty when the year cannot be priced. */
+	usage: UsageMonth[];
 };
 
 /** The year to price: a meter's readings, or a scenario's equipment (its estimated load), or both. */
@@ -119,7 +108,9 @@ export function rankTariffs(candidates: readonly Candidate[], year: YearContext)
 				energyCost: cents(sumKind(result, 'energy')),
 				fixedCost: cents(sumKind(result, 'fixed')),
 				demandCost: cents(sumKind(result, 'demand')),
-				differenceToCurrent: null
+				differenceToCurrent: null,
+				versionNumbers: [...new Set(result.versions.map((v) => v.number))],
+				monthlyCosts: result.periods.map((p) => p.total)
 			});
 		} catch (error) {
 			const reason =
@@ -140,5 +131,15 @@ export function rankTariffs(candidates: readonly Candidate[], year: YearContext)
 		typeof base !== 'string' && topTariff && topResult
 			? touShares({ ...base, tariff: topTariff.tariff }, topResult.totals.kwh)
 			: [];
-	return { ranked, unpriced, topShares };
+	return { ranked, unpriced, topShares, usage: usageOf(base, results.values().next().value) };
+}
+
+/**
+ * The months of the load with their kWh and peak kW: from a priced result when there is one, else the
+ * year priced once on the empty tariff of the base request (every figure but the money is the same).
+ */
+function usageOf(base: CalculateRequest | string, priced: VersionedResponse | undefined): UsageMonth[] {
+	if (typeof base === 'string') return [];
+	const periods = (priced ?? calculate(base)).periods;
+	return periods.map((p) => ({ month: p.label, kwh: p.kwh, peakKw: p.peakKw }));
 }

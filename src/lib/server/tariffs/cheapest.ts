@@ -7,7 +7,9 @@ import { equipmentOf } from '$lib/server/sites/results.service';
 import { listDevices } from '$lib/server/sites/equipment.service';
 import type { ScenarioRow } from '$lib/server/sites/scenario.service';
 import { monthName } from '$lib/server/usage/metered-series';
+import type { RankedTariff, UnpricedTariff, WithProvenance } from '$lib/cheapest/types';
 import { rankTariffs, type Candidate, type Ranking, type YearContext } from './cheapest-rank';
+import { provenanceOf, type StoredTariff } from './cheapest-sources';
 import { cheapestWords } from './cheapest-words';
 import { findTariff, searchTariffs, type TariffRow, type VersionRow } from './tariff.service';
 import { tariffUsableBy } from './usable';
@@ -17,8 +19,10 @@ const MAX_COMPARED = 100;
 
 export type Cheapest =
 	| { ok: false; message: string }
-	| (Ranking & {
+	| (Omit<Ranking, 'ranked' | 'unpriced'> & {
 			ok: true;
+			ranked: WithProvenance<RankedTariff>[];
+			unpriced: WithProvenance<UnpricedTariff>[];
 			/** "December 2026 – November 2027, 35,040 values of 15 minutes" */
 			priced: string;
 			currency: string;
@@ -59,17 +63,16 @@ async function candidatesFor(site: SiteRow, viaGrant: boolean) {
 		const current = await findTariff(site.tariffId);
 		if (current) items.push(current);
 	}
-	const candidates: Candidate[] = items
-		.filter(({ tariff }) => tariffUsableBy(site.workspaceId, tariff))
-		.map(({ tariff, versions }) => ({
-			id: tariff.id,
-			name: tariff.name,
-			utility: tariff.utility,
-			currency: tariff.currency,
-			holidays: tariff.holidays,
-			versions: datedVersions(tariff, versions, tariff.id === site.tariffId ? site.tariffVersion : null)
-		}));
-	return { candidates, total };
+	const usable = items.filter(({ tariff }) => tariffUsableBy(site.workspaceId, tariff));
+	const candidates: Candidate[] = usable.map(({ tariff, versions }) => ({
+		id: tariff.id,
+		name: tariff.name,
+		utility: tariff.utility,
+		currency: tariff.currency,
+		holidays: tariff.holidays,
+		versions: datedVersions(tariff, versions, tariff.id === site.tariffId ? site.tariffVersion : null)
+	}));
+	return { candidates, stored: new Map<string, StoredTariff>(usable.map((i) => [i.tariff.id, i])), total };
 }
 
 /** Ranks the candidates on `load` and explains the top one; `priced` says which months and which load. */
@@ -80,7 +83,7 @@ async function rankAndExplain(
 	currentTariffId: string | null,
 	priced: string
 ): Promise<Cheapest> {
-	const { candidates, total } = await candidatesFor(site, viaGrant);
+	const { candidates, stored, total } = await candidatesFor(site, viaGrant);
 	const ranking = rankTariffs(candidates, {
 		...load,
 		timezone: site.timezone,
@@ -90,9 +93,16 @@ async function rankAndExplain(
 	});
 	const top = ranking.ranked[0];
 	const current = ranking.ranked.find((r) => r.current) ?? null;
+	const pinnedOf = (id: string) => (id === site.tariffId ? site.tariffVersion : null);
+	const withSources = <T extends { id: string }>(row: T, numbers: number[]) => ({
+		...row,
+		provenance: provenanceOf(stored.get(row.id)!, numbers, pinnedOf(row.id))
+	});
 	return {
 		ok: true,
 		...ranking,
+		ranked: ranking.ranked.map((r) => withSources(r, r.versionNumbers)),
+		unpriced: ranking.unpriced.map((u) => withSources(u, [])),
 		priced,
 		currency: site.currency,
 		words: top ? cheapestWords(top, current, ranking.topShares, site.currency) : [],
@@ -113,22 +123,22 @@ export async function cheapestTariffs(site: SiteRow, viaGrant: boolean): Promise
 }
 
 /**
- * The same ranking for a scenario's estimated load (its equipment list) over the last 12 whole calendar
- * months before today in the site's zone, so an adviser can pair a schedule change with a tariff change.
- * The scenario's own tariff, else the site's, is the current one. The caller checks the scenario is the
- * site's.
+ * The same ranking for a scenario's estimated load (its equipment list) over the 12 months from
+ * `firstMonth` ('YYYY-MM'; the page's default is the coming year, see `firstMonthOf`), so an adviser can
+ * pair a schedule change with a tariff change. The scenario's own tariff, else the site's, is the current
+ * one. The caller checks the scenario is the site's.
  */
 export async function cheapestForScenario(
 	site: SiteRow,
 	viaGrant: boolean,
-	scenario: ScenarioRow
+	scenario: ScenarioRow,
+	firstMonth: string
 ): Promise<Cheapest> {
 	const devices = await listDevices(scenario.id);
 	if (!devices.length)
 		return { ok: false, message: `The scenario “${scenario.name}” has no equipment to price yet.` };
-	const to = DateTime.now().setZone(site.timezone).startOf('month');
-	const from = to.minus({ months: 12 });
-	const priced = `${monthName(from)} – ${monthName(to.minus({ months: 1 }))}, the estimated load of the scenario “${scenario.name}”`;
-	const load = { equipment: devices.map((d) => equipmentOf(d.spec)), firstMonth: from.toFormat('yyyy-MM') };
+	const from = DateTime.fromFormat(firstMonth, 'yyyy-MM', { zone: site.timezone });
+	const priced = `${monthName(from)} – ${monthName(from.plus({ months: 11 }))}, the estimated load of the scenario “${scenario.name}”`;
+	const load = { equipment: devices.map((d) => equipmentOf(d.spec)), firstMonth };
 	return rankAndExplain(site, viaGrant, load, scenario.tariffId ?? site.tariffId, priced);
 }
