@@ -1,0 +1,91 @@
+import { expect, test, type Page } from '@playwright/test';
+import { gotoReady } from './helpers';
+import { callerOn, createSite } from './site-setup';
+
+// The site form reaches every tariff the site may use: the workspace's own in full, the public library
+// by a search box that works with and without scripts. The tariffs are the invented demo library's.
+
+const SEARCH = 'Find a tariff: utility, name or open-data label';
+const publicOptions = (page: Page) =>
+	page.getByLabel('Tariff', { exact: true }).locator('optgroup[label="Public library"] option');
+
+test.describe('the site form’s tariff search', () => {
+	test('an owner finds a demo tariff by its utility, chooses it and sees it on the site', async ({
+		page,
+		baseURL
+	}) => {
+		const caller = await callerOn(page, 'owner@example.org', baseURL!);
+		const siteId = await createSite(caller, 'Tariff search');
+		await gotoReady(page, `/sites/${siteId}/edit`);
+
+		await page.getByLabel(SEARCH).fill('Kestrel');
+		await expect(page.getByRole('status').filter({ hasText: 'found for' })).toHaveText(
+			'2 public tariffs found for “Kestrel”.'
+		);
+		await expect(publicOptions(page)).toHaveText([
+			'Kestrel Sound Energy (invented) — Residential two-step',
+			'Kestrel Sound Energy (invented) — Small farm time-of-use'
+		]);
+		await page
+			.getByLabel('Tariff', { exact: true })
+			.selectOption({ label: 'Kestrel Sound Energy (invented) — Small farm time-of-use' });
+		await page.getByRole('button', { name: 'Save the site' }).click();
+		await expect(page).toHaveURL(new RegExp(`/sites/${siteId}$`));
+		await expect(page.getByText('Small farm time-of-use')).toBeVisible();
+	});
+
+	test('without scripts, Find asks the page itself and keeps what was typed', async ({
+		browser,
+		baseURL
+	}) => {
+		const signedIn = await browser.newContext({ baseURL });
+		const caller = await callerOn(await signedIn.newPage(), 'owner@example.org', baseURL!);
+		const siteId = await createSite(caller, 'Tariff search, no scripts');
+		const context = await browser.newContext({
+			baseURL,
+			javaScriptEnabled: false,
+			storageState: await signedIn.storageState()
+		});
+		const page = await context.newPage();
+		await page.goto(`/sites/${siteId}/edit`);
+		const name = `Renamed without scripts ${Date.now()} (invented)`;
+		await page.getByLabel('Site name').fill(name);
+		await page.getByLabel(SEARCH).fill('Northmere');
+		await page.getByRole('button', { name: 'Find' }).click();
+		await expect(page).toHaveURL(/[?&]tariffs=Northmere(&|$)/);
+		await expect(page.getByLabel('Site name')).toHaveValue(name);
+		await expect(page.getByLabel(SEARCH)).toHaveValue('Northmere');
+		await expect(page.getByRole('status').filter({ hasText: 'found for' })).toHaveText(
+			'3 public tariffs found for “Northmere”.'
+		);
+		await expect(publicOptions(page)).toHaveCount(3);
+		await page
+			.getByLabel('Tariff', { exact: true })
+			.selectOption({ label: 'Northmere Electric (invented) — Farm service' });
+		await page.getByRole('button', { name: 'Save the site' }).click();
+		await expect(page).toHaveURL(new RegExp(`/sites/${siteId}$`));
+		await expect(page.getByRole('heading', { level: 1, name })).toBeVisible();
+		await expect(page.getByText('Farm service')).toBeVisible();
+		await context.close();
+		await signedIn.close();
+	});
+
+	test('at 390 px the form fits the screen and the search’s controls are 44 px high', async ({
+		browser,
+		baseURL
+	}) => {
+		const context = await browser.newContext({ baseURL, viewport: { width: 390, height: 844 } });
+		const page = await context.newPage();
+		const caller = await callerOn(page, 'owner@example.org', baseURL!);
+		const siteId = await createSite(caller, 'Tariff search phone');
+		await gotoReady(page, `/sites/${siteId}/edit`);
+		await page.getByLabel(SEARCH).fill('Demo Valley');
+		await expect(page.getByRole('status').filter({ hasText: 'found for' })).toContainText('4 public tariffs');
+		expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+		for (const control of [page.getByLabel(SEARCH), page.getByRole('button', { name: 'Find' })]) {
+			const box = await control.boundingBox();
+			expect(box!.height).toBeGreaterThanOrEqual(44);
+		}
+		await context.close();
+	});
+});
