@@ -51,3 +51,18 @@ export function foundWords(found: PublicFound): string {
 		? `${count}; the first ${PUBLIC_CHOICES} are listed. Add words to narrow it.`
 		: `${count}.`;
 }
+
+/**
+ * The public group to show: the tariffs last found, with the one chosen in front when the search left it
+ * out (so a new search never drops the choice made).
+ */
+export function keptChoice(
+	groups: TariffChoices | null,
+	found: TariffChoice[],
+	chosenId: string
+): TariffChoice[] {
+	if (!chosenId || found.some((c) => c.id === chosenId)) return found;
+	if (groups?.own.choices.some((c) => c.id === chosenId)) return found;
+	const kept = groups?.public.choices.find((c) => c.id === chosenId);
+	return kept ? [kept, ...found] : found;
+}
