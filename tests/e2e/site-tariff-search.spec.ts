@@ -1,4 +1,5 @@
 import { expect, test, type Page } from '@playwright/test';
+import { AXE_CONTEXT, blockingFindings } from './axe';
 import { gotoReady } from './helpers';
 import { baselineOf, callerOn, createSite } from './site-setup';
 
@@ -70,11 +71,15 @@ test.describe('the site form’s tariff search', () => {
 		await signedIn.close();
 	});
 
-	test('at 390 px the form fits the screen and the search’s controls are 44 px high', async ({
+	test('at 390 px the form fits the screen, the search’s controls are 44 px high, and axe finds nothing serious', async ({
 		browser,
 		baseURL
 	}) => {
-		const context = await browser.newContext({ baseURL, viewport: { width: 390, height: 844 } });
+		const context = await browser.newContext({
+			baseURL,
+			viewport: { width: 390, height: 844 },
+			...AXE_CONTEXT
+		});
 		const page = await context.newPage();
 		const caller = await callerOn(page, 'owner@example.org', baseURL!);
 		const siteId = await createSite(caller, 'Tariff search phone');
@@ -90,6 +95,7 @@ test.describe('the site form’s tariff search', () => {
 			const box = await control.boundingBox();
 			expect(box!.height).toBeGreaterThanOrEqual(44);
 		}
+		expect(await blockingFindings(page)).toEqual([]);
 		await context.close();
 	});
 });
