@@ -44,6 +44,10 @@ test('a site viewer finds the cost justification, reads the summary and download
 	await expect(main).toContainText('Installed (already paid for)');
 	await expect(main).toContainText('CO₂ is not set');
 	await expect(page.getByRole('heading', { name: 'Sources' })).toBeVisible();
+	// The tariff version's provenance, in words: its dates in force and when its source was checked.
+	await expect(page.getByRole('region', { name: 'Sources' })).toContainText(
+		/, version \d+, in force from \d{1,2} \w+ \d{4}.*: (source: .+|no source given), checked \d{1,2} \w+ \d{4}/
+	);
 	await expect(page.getByRole('heading', { name: 'Cautions' })).toBeVisible();
 	await expect(page.getByRole('link', { name: 'Printable report' })).toBeVisible();
 	// At a phone's width the page does not scroll sideways (wide tables scroll inside their own region).

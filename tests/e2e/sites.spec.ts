@@ -15,6 +15,9 @@ test.describe('sites and scenarios', () => {
 		await expect(page.locator('body[data-hydrated="true"]')).toBeAttached();
 		await page.getByLabel('Site name').fill('Test tank room (invented)');
 		await page.getByLabel('State or province (optional)').fill('WI');
+		// The public library is reached by its search (other tests add public tariffs of their own).
+		await page.getByLabel('Find a tariff: utility, name or open-data label').fill('Northmere');
+		await expect(page.getByRole('status').filter({ hasText: 'found for “Northmere”' })).toBeVisible();
 		await page
 			.getByLabel('Tariff', { exact: true })
 			.selectOption({ label: 'Northmere Electric (invented) — Farm service' });

@@ -34,8 +34,9 @@ test.describe('import from the open rate database', () => {
 		).toBeVisible();
 		const notes = page.getByRole('region', { name: 'Notes on the import' });
 		// RS-1's free-text energy comments are named, not priced.
-		await expect(notes).toContainText('energycomments');
-		await expect(notes).toContainText('not priced by Runrate');
+		await expect(notes).toContainText('energycomments is not priced by Runrate');
+		// The message names its field, so the field is not printed before it again.
+		await expect(notes).not.toContainText('energycomments: energycomments');
 		await expect(notes).toContainText('Holidays: none.');
 		const provenance = page.getByRole('region', { name: 'Where the rate comes from' });
 		await expect(provenance).toContainText('Florida Power & Light Co.');
@@ -114,6 +115,15 @@ test.describe('import from the open rate database', () => {
 			await page.getByRole('button', { name: 'Read the rate' }).click();
 			await expect(page.getByRole('heading', { name: heading })).toBeVisible();
 			expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+			// Every field of the save form fits inside the form, not cut off at its right edge.
+			const saveForm = page.getByRole('form', { name: 'Save it in the library' });
+			const form = await saveForm.boundingBox();
+			for (const field of await saveForm.getByRole('combobox').all()) {
+				const box = await field.boundingBox();
+				expect(box!.x + box!.width, (await field.getAttribute('name')) ?? 'a select').toBeLessThanOrEqual(
+					form!.x + form!.width
+				);
+			}
 			for (const name of ['Read the rate', 'Save the tariff']) {
 				const box = await page.getByRole('button', { name }).boundingBox();
 				expect(box!.height, name).toBeGreaterThanOrEqual(44);

@@ -52,6 +52,13 @@ export interface ComparedScenario {
 	/** Where the tariff version's figures come from, and when someone last checked them. */
 	tariffSource: string;
 	tariffCheckedOn: string;
+	/** The tariff's utility, as its name begins ("Fernhollow Power (demo)"). */
+	tariffUtility: string;
+	/** The dates the version is in force, both ends included; null: no end date. */
+	tariffEffectiveFrom: string;
+	tariffEffectiveTo: string | null;
+	/** The open rate database's label of the rate the tariff was imported from; null for one typed in. */
+	tariffUrdbLabel: string | null;
 	deviceCount: number;
 	/** Annual kWh per device category (water-pump, air-pump, …), only the categories present. */
 	kwhByCategory: Record<string, number>;

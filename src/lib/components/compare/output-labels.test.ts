@@ -68,4 +68,14 @@ describe('the sources', () => {
 		expect(body).toContain('https://runrate.example.org/rules');
 		expect(body.match(/Demo flat rate \(invented\), version 1/g)).toHaveLength(1);
 	});
+
+	it("give each tariff version's provenance in words: dates in force, source, check, open-data label", () => {
+		const body = render(ComparisonSources, {
+			props: { report: retrofitReport(), origin: ORIGIN }
+		}).body;
+		// The invented provenance of retrofit.fixture.ts.
+		expect(body).toContain(
+			'Demo flat rate (invented), version 1, in force from 1 July 2026 to 31 December 2027: source: Invented for a test, checked 1 December 2026; OpenEI Utility Rate Database label demo-label-0001'
+		);
+	});
 });

@@ -46,6 +46,10 @@ interface Loaded {
 	holidays: unknown;
 	source: string;
 	checkedOn: string;
+	utility: string;
+	effectiveFrom: string;
+	effectiveTo: string | null;
+	urdbLabel: string | null;
 	workspaceName: string;
 }
 
@@ -70,6 +74,11 @@ async function load(event: RequestEvent, id: string, firstDay: string): Promise<
 		workspaceName: viaGrant ? '' : ((await siteWorkspace(site))?.name ?? ''),
 		source: stored?.source ?? '',
 		checkedOn: stored?.checkedOn ?? '',
+		// The stored row's dates: a pinned version is priced as if always in force, but was not.
+		effectiveFrom: stored?.effectiveFrom ?? version.effectiveFrom,
+		effectiveTo: stored ? stored.effectiveTo : version.effectiveTo,
+		utility: resolved.tariff.utility,
+		urdbLabel: resolved.tariff.urdbLabel,
 		site,
 		scenario,
 		specs,
@@ -172,6 +181,10 @@ export async function buildComparison(event: RequestEvent, query: ComparisonQuer
 		tariffVersion: l.tariffVersion,
 		tariffSource: l.source,
 		tariffCheckedOn: l.checkedOn,
+		tariffUtility: l.utility,
+		tariffEffectiveFrom: l.effectiveFrom,
+		tariffEffectiveTo: l.effectiveTo,
+		tariffUrdbLabel: l.urdbLabel,
 		deviceCount: l.specs.length,
 		kwhByCategory: kwhByCategory(l.specs, result.scenarios[i]?.periods ?? []),
 		redundancy: redundancy(parsed.data.scenarios[i]?.equipment ?? []),

@@ -11,6 +11,7 @@ import { DEVICE, scenarioLayout } from './scenario-layout';
 import { writeScenarioSheet } from './scenario-sheet';
 import { SUMMARY_SHEET, type SummarySources, summaryCells, writeSummarySheet } from './summary-sheet';
 import { printSetup } from './print-setup';
+import type { TariffOrigin } from './tariff-provenance';
 import { writeTariffSheet } from './tariff-sheet';
 import { tariffUses } from './tariff-uses';
 import { WATER_AIR_SHEET, type WaterAirScenario, writeWaterAirSheet } from './water-air-sheet';
@@ -24,8 +25,13 @@ export interface ComparisonExport {
 	request: CompareRequest;
 	/** compare(request) — the figures the workbook must reproduce. */
 	response: CompareResponse;
-	/** Per scenario, same order: where it comes from and which tariff it was priced on. */
-	scenarios: { siteName: string; tariffName: string; tariffVersion: number | null }[];
+	/** Per scenario, same order: where it comes from, which tariff it was priced on and where that is from. */
+	scenarios: {
+		siteName: string;
+		tariffName: string;
+		tariffVersion: number | null;
+		tariffOrigin: TariffOrigin | null;
+	}[];
 	/** The emission factor's source as the user typed it (e.g. "Example value, not a published factor"). */
 	emissionSource: string;
 	/** Safety cautions to print (plain sentences), may be empty. */

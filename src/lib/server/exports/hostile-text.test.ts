@@ -32,7 +32,16 @@ describe('the comparison workbook', () => {
 	input.scenarios = input.scenarios.map((s) => ({
 		...s,
 		siteName: FORMULA_TEXTS[4],
-		tariffName: FORMULA_TEXTS[5]
+		tariffName: FORMULA_TEXTS[5],
+		// The provenance is typed by whoever saved the tariff version, so it is hostile too.
+		tariffOrigin: {
+			utility: FORMULA_TEXTS[1],
+			effectiveFrom: '2026-01-01',
+			effectiveTo: null,
+			source: FORMULA_TEXTS[0],
+			checkedOn: '2026-11-20',
+			urdbLabel: FORMULA_TEXTS[3]
+		}
 	}));
 
 	let cells: ReturnType<typeof cellsOf>;
@@ -44,6 +53,13 @@ describe('the comparison workbook', () => {
 		const { texts } = cells;
 		expect(texts.filter((text) => LOOKS_LIKE_FORMULA.test(text))).toEqual([]);
 		for (const text of FORMULA_TEXTS) expect(texts).toContain(readBackAs(text));
+	});
+
+	it("writes the tariff's source and utility as text, a HYPERLINK source too", () => {
+		const { texts } = cells;
+		expect(texts).toContain(`'=HYPERLINK("http://example.org/x","Pump")`);
+		expect(texts).toContain("'+1+1");
+		expect(texts).toContain(`'@SUM(1+1) (OpenEI Utility Rate Database)`);
 	});
 
 	it('keeps numbers as number cells, a negative rider and savings below the baseline among them', () => {

@@ -2,6 +2,7 @@ import type { Tariff } from '$lib/calc';
 import { demandText, riderText, taxText } from '$lib/text/tariff';
 import type { SheetWriter } from './cells';
 import { formatsFor } from './formats';
+import { type TariffOrigin, writeTariffOrigin } from './tariff-provenance';
 import { type DemandCells, type EnergyCells, TariffRows } from './tariff-rows';
 import { valueReasons } from './value-lines';
 
@@ -28,6 +29,8 @@ export interface TariffUse {
 	name: string;
 	version: number | null;
 	scenarios: string[];
+	/** Where the version comes from; null when the comparison did not say (then no rows are written). */
+	origin: TariffOrigin | null;
 }
 
 const sum = (values: readonly number[]) => values.reduce((total, value) => total + value, 0);
@@ -71,10 +74,11 @@ function writeBlock(out: SheetWriter, use: TariffUse, start: number): { cells: T
 	const version = use.version === null ? 'no version number' : `version ${use.version}`;
 	out.text(start, 1, `${use.name} (${version})`, 'heading');
 	out.text(start + 1, 1, `Used by: ${use.scenarios.join('; ')}`);
+	const about = use.origin ? writeTariffOrigin(out, use.origin, start + 2) : start + 2;
 	const holidays = tariff.holidaysAsWeekends ? 'yes' : 'no';
-	out.text(start + 2, 1, `Currency ${currency}. Public holidays price as weekends: ${holidays}.`);
-	out.headers(start + 3, 1, COLUMNS);
-	const rows = new TariffRows(out, formats, start + 4);
+	out.text(about, 1, `Currency ${currency}. Public holidays price as weekends: ${holidays}.`);
+	out.headers(about + 1, 1, COLUMNS);
+	const rows = new TariffRows(out, formats, about + 2);
 	const fixed = tariff.fixedCharges.map((charge) => {
 		if (charge.perMonth !== undefined) {
 			return { perMonth: rows.put('Fixed', charge.label, charge.perMonth, formats.money, 'per month') };

@@ -1,15 +1,18 @@
 import type { Tariff } from '$lib/calc';
+import type { TariffOrigin } from './tariff-provenance';
 import type { TariffUse } from './tariff-sheet';
 
 /**
- * The distinct tariffs of a comparison (equal JSON is one tariff), each with the name and version the
- * first scenario priced on it gives, and the sheets of the scenarios that use it; `useOf[s]` is the
+ * The distinct tariffs of a comparison (equal JSON is one tariff), each with the name, version and
+ * provenance the first scenario priced on it gives, and the sheets of the scenarios that use it; `useOf[s]` is the
  * index of scenario s's tariff among them.
  */
 export function tariffUses(
 	tariffs: readonly Tariff[],
 	sheets: readonly string[],
-	meta: ReadonlyArray<{ tariffName: string; tariffVersion: number | null } | undefined>
+	meta: ReadonlyArray<
+		{ tariffName: string; tariffVersion: number | null; tariffOrigin?: TariffOrigin | null } | undefined
+	>
 ): { uses: TariffUse[]; useOf: number[] } {
 	const uses: TariffUse[] = [];
 	const keys: string[] = [];
@@ -23,6 +26,7 @@ export function tariffUses(
 				tariff,
 				name: about?.tariffName ?? 'Tariff',
 				version: about?.tariffVersion ?? null,
+				origin: about?.tariffOrigin ?? null,
 				scenarios: []
 			});
 		}

@@ -17,7 +17,17 @@ export function exportOf(input: CompareRequestInput, title: string): ComparisonE
 			tariffName: scenario.tariff
 				? 'Demo Valley Power: own rate (invented)'
 				: 'Demo Valley Power: standard rate (invented)',
-			tariffVersion: s === 0 ? 3 : null
+			tariffVersion: s === 0 ? 3 : null,
+			tariffOrigin: {
+				utility: 'Demo Valley Power (invented)',
+				effectiveFrom: scenario.tariff ? '2026-07-01' : '2026-01-01',
+				effectiveTo: scenario.tariff ? '2027-06-30' : null,
+				source: scenario.tariff
+					? 'Own rate sheet (invented)'
+					: 'https://demo-valley.example.org/rates (invented)',
+				checkedOn: '2026-11-20',
+				urdbLabel: scenario.tariff ? null : '5cd0000000000000000demo'
+			}
 		})),
 		emissionSource: 'Example value, not a published factor',
 		cautions: [

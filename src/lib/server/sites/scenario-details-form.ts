@@ -100,3 +100,17 @@ export function readDetailsForm(
 		values
 	};
 }
+
+/**
+ * What the details form sent with its Find button when scripts do not run (a GET to the page itself, the
+ * search in `tariffs`), read as a post would be, so the page shows it again as typed. Null for a plain visit.
+ */
+export function searchedDetails(
+	url: URL,
+	scenario: Pick<ScenarioRow, 'tariffId' | 'tariffVersion'>
+): DetailsValues | null {
+	if (!url.searchParams.has('tariffs') || !url.searchParams.has('name')) return null;
+	const form = new FormData();
+	for (const [key, value] of url.searchParams) form.append(key, value);
+	return readDetailsForm(form, scenario).values;
+}

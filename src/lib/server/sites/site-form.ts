@@ -8,7 +8,16 @@ import { readWaterDraft } from '$lib/components/site-form/tank-read';
 import { tariffChoiceProblem, type TariffChooser } from '../tariffs/usable';
 import type { SiteFields } from './site.service';
 
-export { tariffChoices } from '../tariffs/usable';
+export { tariffChoices } from '../tariffs/tariff-choices';
+
+/**
+ * What a site form sent with its Find button when scripts do not run (a GET to the page itself, the
+ * search in `tariffs`): the page shows it again as typed. Null for a plain visit.
+ */
+export function searchedForm(url: URL): { values: Record<string, string> } | null {
+	if (!url.searchParams.has('tariffs') || !url.searchParams.has('name')) return null;
+	return { values: Object.fromEntries([...url.searchParams].filter(([key]) => key !== 'revision')) };
+}
 
 /**
  * Validates a site form: the shared schema, the water (altitude and tank rows, `tank-read.ts`), then

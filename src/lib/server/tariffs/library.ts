@@ -46,6 +46,8 @@ export async function libraryPage(userId: string | undefined, query: LibraryQuer
 				? { number: latest.number, effectiveFrom: latest.effectiveFrom, checkedOn: latest.checkedOn }
 				: null,
 			features: latest ? features(latest.structure) : null,
+			// Every version's number and start: a site form offers them to pin one.
+			versions: versions.map((v) => ({ number: v.number, effectiveFrom: v.effectiveFrom })),
 			// The version in force today, not the newest: a version ahead of its date is not yet paid.
 			typicalMonthFor1Kw: typicalMonth(tariff, priced),
 			typicalMonthVersion: priced?.number ?? null

@@ -40,7 +40,10 @@ export type TariffFilters = {
 	pageSize?: number;
 };
 
-/** The library's search: text over utility, name, code and area; filters; newest version's features. */
+/**
+ * The library's search: text over utility, name, code, area and open-data label; filters; newest
+ * version's features.
+ */
 export async function searchTariffs(workspaceIds: string[], f: TariffFilters) {
 	const latest = sql`(select structure from tariff_version v where v.tariff_id = ${tariffs.id} order by v.number desc limit 1)`;
 	const where: SQL[] = [visibleTo(workspaceIds)];
@@ -51,7 +54,8 @@ export async function searchTariffs(workspaceIds: string[], f: TariffFilters) {
 				ilike(tariffs.utility, like),
 				ilike(tariffs.name, like),
 				ilike(tariffs.code, like),
-				ilike(tariffs.area, like)
+				ilike(tariffs.area, like),
+				ilike(tariffs.urdbLabel, like)
 			)!
 		);
 	}

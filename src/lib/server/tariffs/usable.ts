@@ -1,5 +1,5 @@
 // The one rule for which tariff a site may use, asked where a tariff is chosen and again where it is used.
-import { findTariff, searchTariffs, type TariffRow } from '$lib/server/tariffs/tariff.service';
+import { findTariff, type TariffRow } from '$lib/server/tariffs/tariff.service';
 
 /** What pricing, comparisons and exports say instead of anything about a tariff the site may not use. */
 export const TARIFF_UNAVAILABLE = "This site's tariff is not available to this workspace";
@@ -34,7 +34,8 @@ export const chooserFor = (
 	guestKeeps: access.viaGrant ? [access.site.tariffId, scenario?.tariffId ?? null] : undefined
 });
 
-const mayChoose = (chooser: TariffChooser, tariff: Pick<TariffRow, 'id' | 'workspaceId'>) =>
+/** Whether this chooser may choose the tariff (the rule `tariffChoiceProblem` and the form's list share). */
+export const mayChoose = (chooser: TariffChooser, tariff: Pick<TariffRow, 'id' | 'workspaceId'>) =>
 	tariffUsableBy(chooser.workspaceId, tariff) &&
 	(!chooser.guestKeeps || tariff.workspaceId === null || chooser.guestKeeps.includes(tariff.id));
 
@@ -63,25 +64,4 @@ export async function tariffChoiceProblem(
 	if (choice.tariffVersion !== null && !found.versions.some((v) => v.number === choice.tariffVersion))
 		return { field: 'tariffVersion', message: `That tariff has no version ${choice.tariffVersion}` };
 	return null;
-}
-
-/** The tariffs a site form offers this chooser: public ones, and the workspace's own to its members. */
-export async function tariffChoices(chooser: TariffChooser) {
-	const guest = !!chooser.guestKeeps;
-	const { items } = await searchTariffs(guest ? [] : [chooser.workspaceId], {
-		sort: 'utility',
-		pageSize: 100
-	});
-	const kept = guest
-		? await Promise.all(chooser.guestKeeps!.filter((id): id is string => !!id).map((id) => findTariff(id)))
-		: [];
-	for (const found of kept)
-		if (found && found.tariff.workspaceId && mayChoose(chooser, found.tariff))
-			if (!items.some((i) => i.tariff.id === found.tariff.id)) items.push(found);
-	return items.map(({ tariff, versions }) => ({
-		id: tariff.id,
-		label: `${tariff.utility} — ${tariff.name}${tariff.workspaceId ? (guest ? " (this site's)" : ' (ours)') : ''}`,
-		currency: tariff.currency,
-		versions: versions.map((v) => ({ number: v.number, effectiveFrom: v.effectiveFrom }))
-	}));
 }

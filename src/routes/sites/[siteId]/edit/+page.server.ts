@@ -1,14 +1,18 @@
 import { fail, redirect } from '@sveltejs/kit';
 import { requireSiteAccess } from '$lib/server/guard';
 import { StaleWrite, updateSite } from '$lib/server/sites/site.service';
-import { readSiteForm, tariffChoices } from '$lib/server/sites/site-form';
+import { readSiteForm, searchedForm, tariffChoices } from '$lib/server/sites/site-form';
 import { chooserFor } from '$lib/server/tariffs/usable';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load = (async (event) => {
 	// A guest of this site is offered public tariffs and the site's own, never the workspace's others.
 	const access = await requireSiteAccess(event, event.params.siteId, 'editor');
-	return { tariffs: await tariffChoices(chooserFor(access)) };
+	const search = event.url.searchParams.get('tariffs') ?? '';
+	return {
+		tariffs: await tariffChoices(chooserFor(access), { search, current: [access.site.tariffId] }),
+		searched: searchedForm(event.url)
+	};
 }) satisfies PageServerLoad;
 
 export const actions = {

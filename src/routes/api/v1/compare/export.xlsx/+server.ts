@@ -20,7 +20,15 @@ export const GET: RequestHandler = async (event) => {
 		scenarios: report.scenarios.map((s) => ({
 			siteName: s.siteName,
 			tariffName: s.tariffName,
-			tariffVersion: s.tariffVersion
+			tariffVersion: s.tariffVersion,
+			tariffOrigin: {
+				utility: s.tariffUtility,
+				effectiveFrom: s.tariffEffectiveFrom,
+				effectiveTo: s.tariffEffectiveTo,
+				source: s.tariffSource,
+				checkedOn: s.tariffCheckedOn,
+				urdbLabel: s.tariffUrdbLabel
+			}
 		})),
 		emissionSource: report.query.emissionSource || 'Not given',
 		cautions: report.scenarios.some((s) => s.caution) ? [ELECTRICAL_CAUTION] : [],

@@ -2,9 +2,10 @@ import { error, fail } from '@sveltejs/kit';
 import { requireScenarioAccess } from '$lib/server/guard';
 import { listDevices } from '$lib/server/sites/equipment.service';
 import { deliveryInputs } from '$lib/server/sites/delivery';
-import { readDetailsForm } from '$lib/server/sites/scenario-details-form';
+import { readDetailsForm, searchedDetails } from '$lib/server/sites/scenario-details-form';
 import { saveScenarioDetails } from '$lib/server/sites/scenario-details';
-import { chooserFor, tariffChoices, TARIFF_UNAVAILABLE, usableTariff } from '$lib/server/tariffs/usable';
+import { chooserFor, TARIFF_UNAVAILABLE, usableTariff } from '$lib/server/tariffs/usable';
+import { tariffChoices } from '$lib/server/tariffs/tariff-choices';
 import { needsElectricalCaution } from '$lib/cautions';
 import { listAirPumps } from '$lib/server/workspaces/air-pumps';
 import { airDesignFormAction } from '$lib/server/sites/air-design-form';
@@ -16,6 +17,16 @@ async function ownTariffName(workspaceId: string, tariffId: string | null): Prom
 	const found = await usableTariff(workspaceId, tariffId);
 	return found ? `${found.tariff.utility} — ${found.tariff.name}` : TARIFF_UNAVAILABLE;
 }
+
+/** The scenario's tariff choices: the scenario's and the site's tariffs always among them. */
+const scenarioTariffChoices = (
+	access: Parameters<typeof chooserFor>[0] & { scenario: { tariffId: string | null } },
+	url: URL
+) =>
+	tariffChoices(chooserFor(access, access.scenario), {
+		search: url.searchParams.get('tariffs') ?? '',
+		current: [access.scenario.tariffId, access.site.tariffId]
+	});
 
 export const load = (async (event) => {
 	const access = await requireScenarioAccess(event, event.params.scenarioId, 'viewer');
@@ -37,9 +48,8 @@ export const load = (async (event) => {
 			revision: scenario.revision
 		},
 		// Only those who may choose see the choices: a guest, only public ones and those already chosen.
-		tariffs: canEdit
-			? (await tariffChoices(chooserFor(access, scenario))).map(({ id, label }) => ({ id, label }))
-			: [],
+		tariffs: canEdit ? await scenarioTariffChoices(access, event.url) : null,
+		searched: canEdit ? searchedDetails(event.url, scenario) : null,
 		devices: specs,
 		caution: needsElectricalCaution(specs),
 		// The stored air design and the site's water: the page works out the delivery of the list as edited.

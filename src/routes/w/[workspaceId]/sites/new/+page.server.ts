@@ -1,12 +1,16 @@
 import { redirect } from '@sveltejs/kit';
 import { requireRole } from '$lib/server/guard';
 import { createSite } from '$lib/server/sites/site.service';
-import { readSiteForm, tariffChoices } from '$lib/server/sites/site-form';
+import { readSiteForm, searchedForm, tariffChoices } from '$lib/server/sites/site-form';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load = (async (event) => {
 	const { workspace } = await requireRole(event, event.params.workspaceId, 'editor');
-	return { tariffs: await tariffChoices({ workspaceId: workspace.id }) };
+	const search = event.url.searchParams.get('tariffs') ?? '';
+	return {
+		tariffs: await tariffChoices({ workspaceId: workspace.id }, { search }),
+		searched: searchedForm(event.url)
+	};
 }) satisfies PageServerLoad;
 
 export const actions = {
