@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { render } from 'svelte/server';
 import { type TariffInput, tariffSchema } from '$lib/calc';
-import { metaDraftFrom, submission } from '$lib/components/tariff-form/tariff-form';
 import TariffEditor from './TariffEditor.svelte';
+import { postedStructure } from './posted.fixture';
 import { describeField, tariffIssues } from './tariff-editor';
 
 // An invented tariff (no real utility's rates): an off-peak demand charge measured on weekday nights
@@ -26,29 +26,12 @@ const stored = (): TariffInput => ({
 	taxes: []
 });
 
-const posted = (structure: TariffInput) =>
-	JSON.parse(
-		JSON.stringify(
-			submission(
-				metaDraftFrom({ utility: 'Demo Valley Power (invented)', name: 'Weekend demand', timezone: 'UTC' }),
-				{
-					effectiveFrom: '2027-01-01',
-					effectiveTo: '',
-					source: 'Invented for this test',
-					checkedOn: '2026-12-04',
-					changeNote: ''
-				},
-				structure
-			)
-		)
-	).structure as TariffInput;
-
 describe('the tariff editor on a demand charge with other hours at weekends', () => {
 	it('loads it valid and posts the weekend hours as they are', () => {
 		expect(tariffIssues(stored())).toEqual([]);
-		expect(tariffSchema.parse(posted(stored())).demandCharges[0]?.weekendWindows).toEqual([
-			{ start: '00:00', end: '24:00' }
-		]);
+		expect(
+			tariffSchema.parse(postedStructure(stored(), 'Weekend demand')).demandCharges[0]?.weekendWindows
+		).toEqual([{ start: '00:00', end: '24:00' }]);
 	});
 
 	it('shows the weekday and weekend hours, each in its own list', () => {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { TariffInput } from '$lib/calc';
-import { formulaAt, readBackOnce, sheet, texts } from './workbook-read';
+import { formulaAt, monthlyColumn, readBackOnce, sheet, texts } from './workbook-read';
 import { exportOf } from './workbook-exports';
 import { hatcheryRequest } from './workbook-fixtures';
 
@@ -23,16 +23,7 @@ describe('a workbook on a tariff whose demand charge has other hours at weekends
 	const input = exportOf(hatcheryRequest({ tariff: WEEKEND_DEMAND_TARIFF }), 'Weekend demand (invented)');
 	const workbook = readBackOnce(input);
 	const monthly = () => sheet(workbook(), 'Monthly');
-	const column = (header: string) => {
-		let found = 0;
-		monthly()
-			.getRow(4)
-			.eachCell((cell, col) => {
-				if (!found && cell.value === header) found = col;
-			});
-		if (!found) throw new Error(`no column ${header}`);
-		return monthly().getColumn(found).letter;
-	};
+	const column = (header: string) => monthlyColumn(monthly(), header);
 
 	it('says on the Tariff sheet when the charge is measured', () => {
 		expect(texts(sheet(workbook(), 'Tariff'))).toContain(
