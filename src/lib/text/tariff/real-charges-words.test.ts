@@ -98,6 +98,7 @@ describe('describeTariff, the charges real tariffs use', () => {
 				}
 			]
 		});
+		expect(section(offPeak, 'Public holidays')).toEqual(['Holidays price like weekends.']);
 		expect(section(offPeak, 'Demand charges')).toEqual([
 			'Off-peak demand: $3.00 per kW of the highest 15-minute demand in the billing period (weekdays 00:00–15:00 and 20:00–24:00 and all day at weekends).'
 		]);
