@@ -1,4 +1,4 @@
-import { expect, test } from '@playwright/test';
+import { type Page, expect, test } from '@playwright/test';
 import { gotoReady, signInWithPassword } from './helpers';
 
 // The tariff editor as an editor of a workspace uses it: a new tariff starts empty, the country and the
@@ -68,12 +68,11 @@ test('an editor adds a private tariff with a summer-only time-of-use adder', asy
 	await expect(page.getByText(/Published/)).toHaveCount(0);
 });
 
-// The charges real tariffs use (issue 19) in the editor: tiered demand, a ratchet checked at its field,
-// a daily minimum; saved, the tariff page reads them in plain words. Invented rates.
-test('an editor saves tiered, ratcheted demand and a daily minimum', async ({ page }) => {
+/** Signs in as an editor and fills a new tariff's details and one flat energy charge; gives its name. */
+async function newTariff(page: Page, what: string): Promise<string> {
 	await signInWithPassword(page, 'editor@example.org');
 	await gotoReady(page, '/tariffs/new');
-	const name = `Ratchet ${Date.now()} (invented)`;
+	const name = `${what} ${Date.now()} (invented)`;
 	await page.locator('#meta-utility').fill('Invented Test Power');
 	await page.locator('#meta-name').fill(name);
 	await page.locator('#meta-country').fill('US');
@@ -81,6 +80,13 @@ test('an editor saves tiered, ratcheted demand and a daily minimum', async ({ pa
 	await page.getByRole('textbox', { name: 'Source', exact: true }).fill('Invented for a test');
 	await page.locator('#te-currency').fill('USD');
 	await page.locator('#te-energyCharges-0-perKwh').fill('0.1');
+	return name;
+}
+
+// The charges real tariffs use (issue 19) in the editor: tiered demand, a ratchet checked at its field,
+// a daily minimum; saved, the tariff page reads them in plain words. Invented rates.
+test('an editor saves tiered, ratcheted demand and a daily minimum', async ({ page }) => {
+	const name = await newTariff(page, 'Ratchet');
 
 	await page.getByRole('button', { name: 'Add a demand charge' }).click();
 	await page.locator('#te-demandCharges-0-pricing').selectOption('tiers');
@@ -108,16 +114,7 @@ test('an editor saves tiered, ratcheted demand and a daily minimum', async ({ pa
 // A demand charge of every day measured on weekday nights and all day at weekends (issue 19): the
 // weekend hours are their own list, their message shows at them, and the saved tariff reads the rule.
 test('an editor saves a demand charge with other hours at weekends', async ({ page }) => {
-	await signInWithPassword(page, 'editor@example.org');
-	await gotoReady(page, '/tariffs/new');
-	const name = `Weekend demand ${Date.now()} (invented)`;
-	await page.locator('#meta-utility').fill('Invented Test Power');
-	await page.locator('#meta-name').fill(name);
-	await page.locator('#meta-country').fill('US');
-	await page.locator('#meta-timezone').fill('America/Chicago');
-	await page.getByRole('textbox', { name: 'Source', exact: true }).fill('Invented for a test');
-	await page.locator('#te-currency').fill('USD');
-	await page.locator('#te-energyCharges-0-perKwh').fill('0.1');
+	const name = await newTariff(page, 'Weekend demand');
 
 	await page.getByRole('button', { name: 'Add a demand charge' }).click();
 	await page.locator('#te-demandCharges-0-perKw').fill('3');
