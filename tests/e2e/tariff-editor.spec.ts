@@ -1,4 +1,4 @@
-import { expect, test } from '@playwright/test';
+import { type Page, expect, test } from '@playwright/test';
 import { gotoReady, signInWithPassword } from './helpers';
 
 // The tariff editor as an editor of a workspace uses it: a new tariff starts empty, the country and the
@@ -68,12 +68,11 @@ test('an editor adds a private tariff with a summer-only time-of-use adder', asy
 	await expect(page.getByText(/Published/)).toHaveCount(0);
 });
 
-// The charges real tariffs use (issue 19) in the editor: tiered demand, a ratchet checked at its field,
-// a daily minimum; saved, the tariff page reads them in plain words. Invented rates.
-test('an editor saves tiered, ratcheted demand and a daily minimum', async ({ page }) => {
+/** Signs in as an editor and fills a new tariff's details and one flat energy charge; gives its name. */
+async function newTariff(page: Page, what: string): Promise<string> {
 	await signInWithPassword(page, 'editor@example.org');
 	await gotoReady(page, '/tariffs/new');
-	const name = `Ratchet ${Date.now()} (invented)`;
+	const name = `${what} ${Date.now()} (invented)`;
 	await page.locator('#meta-utility').fill('Invented Test Power');
 	await page.locator('#meta-name').fill(name);
 	await page.locator('#meta-country').fill('US');
@@ -81,6 +80,13 @@ test('an editor saves tiered, ratcheted demand and a daily minimum', async ({ pa
 	await page.getByRole('textbox', { name: 'Source', exact: true }).fill('Invented for a test');
 	await page.locator('#te-currency').fill('USD');
 	await page.locator('#te-energyCharges-0-perKwh').fill('0.1');
+	return name;
+}
+
+// The charges real tariffs use (issue 19) in the editor: tiered demand, a ratchet checked at its field,
+// a daily minimum; saved, the tariff page reads them in plain words. Invented rates.
+test('an editor saves tiered, ratcheted demand and a daily minimum', async ({ page }) => {
+	const name = await newTariff(page, 'Ratchet');
 
 	await page.getByRole('button', { name: 'Add a demand charge' }).click();
 	await page.locator('#te-demandCharges-0-pricing').selectOption('tiers');
@@ -103,4 +109,31 @@ test('an editor saves tiered, ratcheted demand and a daily minimum', async ({ pa
 	).toBeVisible();
 	await expect(page.getByText(/billed on at least 80% of the highest peak/).first()).toBeVisible();
 	await expect(page.getByText('Minimum bill: $0.50 a day of the billing period.')).toBeVisible();
+});
+
+// A demand charge of every day measured on weekday nights and all day at weekends (issue 19): the
+// weekend hours are their own list, their message shows at them, and the saved tariff reads the rule.
+test('an editor saves a demand charge with other hours at weekends', async ({ page }) => {
+	const name = await newTariff(page, 'Weekend demand');
+
+	await page.getByRole('button', { name: 'Add a demand charge' }).click();
+	await page.locator('#te-demandCharges-0-perKw').fill('3');
+	await page.getByLabel('Only at some hours').check();
+	await page.locator('#te-demandCharges-0-windows-0-start').selectOption('20:00');
+	await page.locator('#te-demandCharges-0-windows-0-end').selectOption('15:00');
+	await page.getByLabel('Other hours at weekends').check();
+	await expect(page.locator('#te-demandCharges-0-weekendWindows-0-start')).toHaveValue('00:00');
+	await expect(page.locator('#te-demandCharges-0-weekendWindows-0-end')).toHaveValue('24:00');
+
+	const message = 'Other hours at weekends need a charge measured every day';
+	await page.locator('#te-demandCharges-0-days').selectOption('weekdays');
+	await expect(page.locator('#te-demandCharges-0-weekendWindows')).toContainText(message);
+	await expect(page.getByText(message)).toHaveCount(1);
+	await page.locator('#te-demandCharges-0-days').selectOption('all');
+	await expect(page.getByText(message)).toHaveCount(0);
+	await expect(page.getByText('The tariff checks out.')).toBeVisible();
+
+	await page.getByRole('button', { name: 'Save the tariff' }).click();
+	await expect(page.getByRole('heading', { name, level: 1 })).toBeVisible();
+	await expect(page.getByText(/\(weekdays 20:00–15:00 and all day at weekends\)/).first()).toBeVisible();
 });

@@ -1,5 +1,6 @@
 import type { Calendar, DayClass } from './calendar';
 import { INTERVAL_HOURS, daysMatch, windowMask } from './clock';
+import { demandWindowsOn } from './demand-windows';
 import { type EnergyColumn, energyColumns } from './rate-columns';
 import type { Tariff, TouCharge } from './tariff.schema';
 
@@ -141,20 +142,19 @@ export class RateBook {
 		return total;
 	}
 
-	/** Intervals of a day class that a demand charge measures (months, days, windows), or null for none. */
+	/**
+	 * Intervals of a day class that a demand charge measures (months, days, windows; weekend windows on
+	 * a day that prices as a weekend), or null for none.
+	 */
 	demandMask(index: number, classIndex: number): Uint8Array | null {
 		const known = this.masks[index]?.[classIndex];
 		if (known !== undefined) return known;
 		const charge = this.tariff.demandCharges[index];
 		const day = this.calendar.classes[classIndex];
 		let mask: Uint8Array | null = null;
-		if (
-			charge &&
-			day &&
-			monthMask(charge.months)[day.month] === 1 &&
-			daysMatch(charge.days, this.pricesAsWeekend(day))
-		) {
-			mask = windowMask(charge.windows, day.shape);
+		const weekend = !!day && this.pricesAsWeekend(day);
+		if (charge && day && monthMask(charge.months)[day.month] === 1 && daysMatch(charge.days, weekend)) {
+			mask = windowMask(demandWindowsOn(charge, weekend), day.shape);
 		}
 		const row = this.masks[index];
 		if (row) row[classIndex] = mask;

@@ -1,13 +1,8 @@
 import { z } from 'zod';
 import { daysSchema, monthsSchema, windowSchema, windowsSchema } from './common.schema';
+import { demandWindowIssues } from './demand-windows';
 import { amount, list, record, text } from './fields';
-import {
-	type RuleIssue,
-	hourlyWindowIssues,
-	periodOverlapIssues,
-	seasonCoverageIssues,
-	tierIssues
-} from './tariff';
+import { type RuleIssue, periodOverlapIssues, seasonCoverageIssues, tierIssues } from './tariff';
 import {
 	demandPriceIssues,
 	demandTierIssues,
@@ -126,14 +121,12 @@ const demandChargeSchema = record('Demand charge', {
 	intervalMinutes: z.literal([15, 60], { error: 'Interval minutes must be 15 or 60' }).default(15),
 	months: monthsSchema.optional(),
 	days: daysSchema.default('all'),
-	windows: windowsSchema.optional()
+	windows: windowsSchema.optional(),
+	/** Hours measured on weekend days instead of `windows` (see `DemandHours` in demand-windows.ts). */
+	weekendWindows: list('Weekend windows', windowSchema, { min: 1, max: 24 }).optional()
 }).superRefine((charge, ctx) => {
 	report(demandPriceIssues(charge), ctx);
-	if (charge.intervalMinutes !== 60) return;
-	report(
-		hourlyWindowIssues(charge.windows).map((issue) => ({ ...issue, path: ['windows', ...issue.path] })),
-		ctx
-	);
+	report(demandWindowIssues(charge), ctx);
 });
 
 /** A rate schedule: fixed, energy (flat, tiered, time-of-use), demand, riders, taxes, minimum bill. */

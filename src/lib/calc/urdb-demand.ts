@@ -59,10 +59,11 @@ function flatCharges(
 
 /**
  * Time-of-use demand: each period's hours by day type, per season; a period whose windows are the same
- * in several seasons becomes one charge listing all their months. A period with different hours on
- * weekdays and weekends cannot be one charge (its peak spans both), so it is refused with a note.
+ * in several seasons becomes one charge listing all their months. A period with hours on both kinds of
+ * day but different ones (weekday nights and whole weekends) is one charge of every day, its weekday
+ * hours in `windows` and its weekend hours in `weekendWindows`, so its one peak spans both.
  */
-function touCharges(rate: UrdbRate, minutes: 15 | 60, notes: ImportNote[]): DemandInput[] | null {
+function touCharges(rate: UrdbRate, minutes: 15 | 60): DemandInput[] {
 	const structure = rate.demandratestructure;
 	if (!structure) return [];
 	const weekday = rate.demandweekdayschedule!;
@@ -76,17 +77,11 @@ function touCharges(rate: UrdbRate, minutes: 15 | 60, notes: ImportNote[]): Dema
 			const onWeekdays = weekday[first]!.flatMap((v, h) => (v === index ? [h] : []));
 			const onWeekends = weekend[first]!.flatMap((v, h) => (v === index ? [h] : []));
 			const same = onWeekdays.join() === onWeekends.join();
-			if (!same && onWeekdays.length > 0 && onWeekends.length > 0) {
-				notes.push({
-					code: 'demand-period-days',
-					field: 'demandweekdayschedule',
-					message: `Demand period ${index + 1} has different hours on weekdays and weekends; Runrate prices one peak per charge, so the rate was not imported`
-				});
-				return null;
-			}
-			const days = same ? 'all' : onWeekdays.length > 0 ? 'weekdays' : 'weekends';
+			const split = !same && onWeekdays.length > 0 && onWeekends.length > 0;
+			const days = same || split ? 'all' : onWeekdays.length > 0 ? 'weekdays' : 'weekends';
 			const windows = hourWindows(onWeekdays.length > 0 ? onWeekdays : onWeekends);
-			const key = `${index}|${days}|${JSON.stringify(windows)}`;
+			const weekendWindows = split ? hourWindows(onWeekends) : undefined;
+			const key = `${index}|${days}|${JSON.stringify(windows)}|${JSON.stringify(weekendWindows)}`;
 			const found = charges.get(key);
 			if (found) found.months.push(...season.months);
 			else
@@ -96,7 +91,8 @@ function touCharges(rate: UrdbRate, minutes: 15 | 60, notes: ImportNote[]): Dema
 					intervalMinutes: minutes,
 					months: [...season.months],
 					days,
-					windows
+					windows,
+					...(weekendWindows ? { weekendWindows } : {})
 				});
 		}
 	}
@@ -116,9 +112,9 @@ export function demandCharges(rate: UrdbRate, notes: ImportNote[]): DemandInput[
 	}
 	const minutes = interval(rate, notes);
 	const flat = flatCharges(rate, minutes, notes);
-	const tou = touCharges(rate, minutes, notes);
+	const tou = touCharges(rate, minutes);
 	const held = ratchet(rate, notes);
-	if (!flat || !tou || held === null) return null;
+	if (!flat || held === null) return null;
 	if (held && flat.length === 0) {
 		notes.push({
 			code: 'ratchet-without-demand',

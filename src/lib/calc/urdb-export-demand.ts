@@ -71,8 +71,9 @@ function touFields(charges: DemandCharge[], notes: ExportNote[]): Record<string,
 	const none = book.index(JSON.stringify([{ rate: 0 }]), null);
 	const grids = [filledGrid(none), filledGrid(none)];
 	charges.forEach((charge, i) => {
-		const { hours, whole } = windowHours(charge.windows);
-		if (!whole)
+		// Weekend windows, when given, fill the weekend grid instead of the weekday windows.
+		const hoursOf = [windowHours(charge.windows), windowHours(charge.weekendWindows ?? charge.windows)];
+		if (hoursOf.some((h) => !h.whole))
 			notes.push({ field: 'demandCharges', message: `"${charge.label}": windows written to whole hours` });
 		if (charge.ratchet)
 			notes.push({
@@ -81,7 +82,7 @@ function touFields(charges: DemandCharge[], notes: ExportNote[]): Record<string,
 			});
 		for (const month of charge.months ?? ALL_MONTHS)
 			for (const g of gridsOf(charge.days))
-				for (const hour of hours) {
+				for (const hour of hoursOf[g]!.hours) {
 					const row = grids[g]![month - 1]!;
 					if (row[hour] !== none)
 						notes.push({

@@ -64,6 +64,12 @@ const KINDS: Record<string, Record<string, unknown>> = {
 		demandweekdayschedule: grid((m, h) => (h >= 14 && h < 19 ? (m >= 6 && m <= 9 ? 1 : 2) : 0)),
 		demandweekendschedule: grid(0)
 	},
+	'time-of-use demand with other hours at weekends': {
+		demandratestructure: [[{ rate: 3 }], [{ rate: 12 }]],
+		demandweekdayschedule: grid((_m, h) => (h >= 15 && h < 20 ? 1 : 0)),
+		demandweekendschedule: grid((m, h) => (m >= 6 && m <= 9 && h >= 17 && h < 19 ? 1 : 0)),
+		demandwindow: 60
+	},
 	'fixed per month': { fixedchargefirstmeter: 9.5, fixedchargeunits: '$/month' },
 	'fixed per day': { fixedchargefirstmeter: 0.4, fixedchargeunits: '$/day' },
 	'fixed per year': { fixedchargefirstmeter: 120, fixedchargeunits: '$/year' },

@@ -181,14 +181,32 @@ describe('demand charges', () => {
 		]);
 	});
 
-	it('refuses a priced demand period with different weekday and weekend hours', () => {
+	it('imports a priced demand period with different weekday and weekend hours as one charge', () => {
 		const result = imported({
 			demandratestructure: [[{ rate: 3 }], [{ rate: 12 }]],
 			demandweekdayschedule: grid((_m, h) => (h >= 14 && h < 19 ? 1 : 0)),
 			demandweekendschedule: grid(0)
 		});
-		expect(result.tariff).toBeNull();
-		expect(result.notes).toContainEqual(expect.objectContaining({ code: 'demand-period-days' }));
+		expect(result.notes).toEqual([]);
+		expect(result.tariff?.demandCharges).toEqual([
+			{
+				label: 'Demand, period 1',
+				perKw: 3,
+				intervalMinutes: 15,
+				months: [1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11, 12],
+				days: 'all',
+				windows: [{ start: '19:00', end: '14:00' }],
+				weekendWindows: [{ start: '00:00', end: '24:00' }]
+			},
+			{
+				label: 'Demand, period 2',
+				perKw: 12,
+				intervalMinutes: 15,
+				months: [1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11, 12],
+				days: 'weekdays',
+				windows: [{ start: '14:00', end: '19:00' }]
+			}
+		]);
 	});
 
 	it('ratchets: equal monthly percentages look back 11 months; lookback fields map the same way', () => {

@@ -150,17 +150,15 @@ describe('reference bills', () => {
 			demandweekdayschedule: grid((_, hour) => (hour >= 15 && hour < 20 ? 0 : 1)),
 			demandweekendschedule: grid(1)
 		};
-		// SAM's weekends are all period 2, which then spans weekday windows and whole weekend days: one peak
-		// over both is not a charge Runrate has, so the rate as SAM gives it is refused, never priced wrongly.
-		expect(tariffFromUrdb(urdbRateSchema.parse(sam)).notes).toEqual([
-			expect.objectContaining({ code: 'demand-period-days', field: 'demandweekdayschedule' })
-		]);
-		// The load falls on a Monday only, so the weekend's schedule cannot change the bill: with the weekday
-		// schedule on weekends too, the rate is expressed exactly and the day's demand is SAM's.
-		const { tariff, notes } = tariffFromUrdb(
-			urdbRateSchema.parse({ ...sam, demandweekendschedule: sam.demandweekdayschedule })
-		);
+		// SAM's weekends are all period 2, which then spans weekday hours and whole weekend days: one charge
+		// of every day, measured in its weekday windows on weekdays and all day at weekends.
+		const { tariff, notes } = tariffFromUrdb(urdbRateSchema.parse(sam));
 		expect(notes).toEqual([]);
+		expect(tariff?.demandCharges?.[1]).toMatchObject({
+			days: 'all',
+			windows: [{ start: '20:00', end: '15:00' }],
+			weekendWindows: [{ start: '00:00', end: '24:00' }]
+		});
 		const day = [1, 1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 9, 8, 7, 6, 5, 4, 3, 2, 1, 1, 1, 1, 1];
 		const request = calculateRequestSchema.parse({
 			period: { start: '2018-01', months: 1 },

@@ -13,6 +13,10 @@ describe('the rules page on the charges real tariffs use', () => {
 		['sharing by kWh', "in proportion to each period's kWh"],
 		['proration', "prorated by the share of the period's days that fall in its months"],
 		['demand tiers', 'price the billing kW tier by tier'],
+		[
+			'other hours at weekends',
+			'weekend days (and holidays the tariff prices as weekends) in its weekend windows, with one peak over both'
+		],
 		['ratchet months back', 'the given number of periods just before this'],
 		['ratchet listed months', 'those of the 11 periods before whose month is listed'],
 		['within the calculation', 'Only the billing periods of the same calculation count'],

@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { render } from 'svelte/server';
 import { type TariffInput, tariffSchema } from '$lib/calc';
-import { metaDraftFrom, submission } from '$lib/components/tariff-form/tariff-form';
 import TariffEditor from './TariffEditor.svelte';
+import { postedStructure } from './posted.fixture';
 import { setDemandPricing } from './demand-blanks';
 import { setFixedBasis } from './tariff-blanks';
 import { tariffIssues, writeDraft } from './tariff-editor';
@@ -69,22 +69,7 @@ const stored = (): TariffInput => ({
 	minimumPerYear: 240
 });
 
-const payload = (structure: TariffInput) =>
-	JSON.parse(
-		JSON.stringify(
-			submission(
-				metaDraftFrom({ utility: 'Demo Valley Power (invented)', name: 'Real charges', timezone: 'UTC' }),
-				{
-					effectiveFrom: '2027-01-01',
-					effectiveTo: '',
-					source: 'Invented for this test',
-					checkedOn: '2026-12-03',
-					changeNote: ''
-				},
-				structure
-			)
-		)
-	).structure as TariffInput;
+const payload = (structure: TariffInput) => postedStructure(structure);
 
 describe('the tariff editor on a tariff with the new charges', () => {
 	it('loads it valid', () => {

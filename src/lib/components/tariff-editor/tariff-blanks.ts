@@ -39,6 +39,11 @@ export function blankWindow(): ClockWindowInput {
 	return { start: '16:00', end: '21:00' };
 }
 
+/** The whole day as one window, the usual weekend hours of a demand charge measured every day. */
+export function wholeDay(): ClockWindowInput {
+	return { start: '00:00', end: '24:00' };
+}
+
 export function blankPeriod(label = 'On-peak'): TouPeriodInput {
 	return { label, perKwh: 0, days: 'weekdays', windows: [blankWindow()] };
 }

@@ -55,7 +55,8 @@ const ITEM_NAMES: Record<string, string> = {
 	seasons: 'season',
 	periods: 'period',
 	tiers: 'tier',
-	windows: 'window'
+	windows: 'window',
+	weekendWindows: 'weekend window'
 };
 
 /** Where a path is, in words for the summary: "energyCharges.0.seasons.1.months.2" → "Energy charge 1 · season 2". */
@@ -94,6 +95,7 @@ const FIELD_NAMES: Record<string, string> = {
 	periods: 'Periods',
 	tiers: 'Tiers',
 	windows: 'Hours',
+	weekendWindows: 'Other hours at weekends',
 	label: 'Name',
 	type: 'Kind of charge',
 	perMonth: 'Per month',

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { formulaAt, readBackOnce, sheet, texts } from './workbook-read';
+import { formulaAt, monthlyColumn, readBackOnce, sheet, texts } from './workbook-read';
 import { exportOf } from './workbook-exports';
 import { hatcheryRequest } from './workbook-fixtures';
 import { REAL_CHARGES_TARIFF } from './workbook-tariffs';
@@ -10,16 +10,7 @@ describe('a workbook on a tariff with every new charge', () => {
 	const input = exportOf(hatcheryRequest({ tariff: REAL_CHARGES_TARIFF }), 'Real charges (invented)');
 	const workbook = readBackOnce(input);
 	const monthly = () => sheet(workbook(), 'Monthly');
-	const column = (header: string) => {
-		let found = 0;
-		monthly()
-			.getRow(4)
-			.eachCell((cell, col) => {
-				if (!found && cell.value === header) found = col;
-			});
-		if (!found) throw new Error(`no column ${header}`);
-		return monthly().getColumn(found).letter;
-	};
+	const column = (header: string) => monthlyColumn(monthly(), header);
 
 	it('writes the yearly fixed charge as a twelfth and the daily tiers × the days, as formulas', () => {
 		expect(formulaAt(monthly(), `${column('Meter charge')}5`).formula).toMatch(

@@ -21,7 +21,7 @@ export const RULES: ReadonlyArray<readonly [string, string]> = [
 	],
 	[
 		'Demand charges',
-		'The largest kW of the month over the charge’s months, days and windows, counting each device at full running power wherever its schedule may run it (a deliberate worst case) and at standby otherwise; for 60-minute demand, each hour’s kW is the mean of its four quarter hours. Demand tiers price the billing kW tier by tier. A ratchet bills the larger of the month’s peak and its percent of the highest whole-month peak (over all intervals, whatever price or window applied) of earlier months of this calculation only: the given number of months just before, or the listed months among the 11 before; a charge limited to some months bills nothing outside them. Demand a ratchet bills in a month that measured none is shared cost.'
+		'The largest kW of the month over the charge’s months, days and windows, counting each device at full running power wherever its schedule may run it (a deliberate worst case) and at standby otherwise; for 60-minute demand, each hour’s kW is the mean of its four quarter hours. A charge with other hours at weekends measures weekdays in its windows and weekend days in its weekend windows, one peak over both. Demand tiers price the billing kW tier by tier. A ratchet bills the larger of the month’s peak and its percent of the highest whole-month peak (over all intervals, whatever price or window applied) of earlier months of this calculation only: the given number of months just before, or the listed months among the 11 before; a charge limited to some months bills nothing outside them. Demand a ratchet bills in a month that measured none is shared cost.'
 	],
 	[
 		'Fixed charges, riders, minimum bill and taxes',

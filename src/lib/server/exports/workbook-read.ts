@@ -31,6 +31,16 @@ export function sheet(workbook: ExcelJS.Workbook, name: string): ExcelJS.Workshe
 	return found;
 }
 
+/** The letter of the Monthly sheet's column headed `header` (row 4, the first such); none fails the test. */
+export function monthlyColumn(monthly: ExcelJS.Worksheet, header: string): string {
+	let found = 0;
+	monthly.getRow(4).eachCell((cell, col) => {
+		if (!found && cell.value === header) found = col;
+	});
+	if (!found) throw new Error(`no column ${header}`);
+	return monthly.getColumn(found).letter;
+}
+
 /** A formula cell's formula (shared copies give theirs translated) and cached result. */
 export function formulaAt(
 	worksheet: ExcelJS.Worksheet,

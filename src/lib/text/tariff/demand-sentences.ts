@@ -6,16 +6,30 @@ export type DemandInput = NonNullable<TariffInput['demandCharges']>[number];
 export type RatchetInput = NonNullable<DemandInput['ratchet']>;
 
 /**
+ * The days and hours a charge measures: "weekdays 12:00–20:00", "every day 17:00–21:00"; with other
+ * hours at weekends "weekdays 00:00–15:00 and 20:00–24:00 and all day at weekends" (or "and at weekends
+ * 17:00–19:00"); "" when it measures every hour of every day.
+ */
+export function demandHoursText(charge: DemandInput): string {
+	const windows = windowsText(charge.windows);
+	const weekend = charge.weekendWindows;
+	if (weekend) {
+		const whole = weekend.length === 1 && weekend[0]?.start === '00:00' && weekend[0]?.end === '24:00';
+		return `weekdays ${windows} and ${whole ? 'all day at weekends' : `at weekends ${windowsText(weekend)}`}`;
+	}
+	if ((charge.days ?? 'all') === 'all' && !windows) return '';
+	return [daysText(charge.days), windows].filter(Boolean).join(' ');
+}
+
+/**
  * "$8.00 per kW of the highest 15-minute demand in the billing period (weekdays 12:00–20:00,
  * June–September)"; the brackets hold only the limits the charge has; a ratchet follows after a
  * semicolon.
  */
 export function demandText(charge: DemandInput, currency: string): string {
 	const limits: string[] = [];
-	const windows = windowsText(charge.windows);
-	if ((charge.days ?? 'all') !== 'all' || windows) {
-		limits.push([daysText(charge.days), windows].filter(Boolean).join(' '));
-	}
+	const hours = demandHoursText(charge);
+	if (hours) limits.push(hours);
 	if (limitsMonths(charge.months)) limits.push(monthsText(charge.months));
 	const minutes = charge.intervalMinutes ?? 15;
 	const of = `of the highest ${minutes}-minute demand in the billing period`;

@@ -84,6 +84,31 @@ describe('describeTariff, the charges real tariffs use', () => {
 		]);
 	});
 
+	it('writes a demand charge with other hours at weekends', () => {
+		const offPeak = usdTariff({
+			demandCharges: [
+				{
+					label: 'Off-peak demand',
+					perKw: 3,
+					windows: [
+						{ start: '00:00', end: '15:00' },
+						{ start: '20:00', end: '24:00' }
+					],
+					weekendWindows: [{ start: '00:00', end: '24:00' }]
+				}
+			]
+		});
+		expect(section(offPeak, 'Public holidays')).toEqual(['Holidays price like weekends.']);
+		expect(section(offPeak, 'Demand charges')).toEqual([
+			'Off-peak demand: $3.00 per kW of the highest 15-minute demand in the billing period (weekdays 00:00–15:00 and 20:00–24:00 and all day at weekends).'
+		]);
+		const later = structuredClone(offPeak);
+		later.demandCharges![0]!.weekendWindows = [{ start: '17:00', end: '19:00' }];
+		expect(describeTariffDiff(offPeak, later)).toContain(
+			'Off-peak demand: now $3.00 per kW of the highest 15-minute demand in the billing period (weekdays 00:00–15:00 and 20:00–24:00 and at weekends 17:00–19:00)'
+		);
+	});
+
 	it('writes a yearly fixed charge as a twelfth a billing period', () => {
 		expect(section(tieredTou(), 'Fixed charges')).toEqual([
 			'Meter charge: $120.00 a year (a twelfth each billing period).'

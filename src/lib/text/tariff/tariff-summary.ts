@@ -10,13 +10,15 @@ export interface TariffSection {
 	lines: string[];
 }
 
-/** Whether any time-of-use period or demand charge treats weekdays and weekends differently. */
+/** Whether any time-of-use period or demand charge treats weekdays and weekends differently (holidays matter). */
 function splitsWeekends(tariff: AnyTariff): boolean {
 	const periodDays = (tariff.energyCharges ?? []).flatMap((charge) =>
 		charge.type === 'tou' ? charge.seasons.flatMap((season) => season.periods.map((p) => p.days)) : []
 	);
 	const demandDays = (tariff.demandCharges ?? []).map((charge) => charge.days);
-	return [...periodDays, ...demandDays].some((days) => days !== undefined && days !== 'all');
+	// A charge of every day with other hours at weekends treats them differently too.
+	const weekendHours = (tariff.demandCharges ?? []).some((charge) => charge.weekendWindows !== undefined);
+	return weekendHours || [...periodDays, ...demandDays].some((days) => days !== undefined && days !== 'all');
 }
 
 /**
