@@ -1,26 +1,12 @@
 // The cheapest-tariff figures in words, the same on the page and in the printable report.
+import { MONTH_NAMES } from '$lib/calc';
 import { money } from '$lib/text/numbers';
 import type { TariffProvenance, VersionSource } from './types';
-
-const MONTHS = [
-	'January',
-	'February',
-	'March',
-	'April',
-	'May',
-	'June',
-	'July',
-	'August',
-	'September',
-	'October',
-	'November',
-	'December'
-];
 
 /** "2027-01" → "January 2027"; anything else as it is. */
 export function monthWords(month: string): string {
 	const parts = /^(\d{4})-(\d{2})$/.exec(month);
-	const name = parts && MONTHS[Number(parts[2]) - 1];
+	const name = parts && MONTH_NAMES[Number(parts[2]) - 1];
 	return name ? `${name} ${parts[1]}` : month;
 }
 

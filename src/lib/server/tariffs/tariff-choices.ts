@@ -1,8 +1,8 @@
 // The tariffs a site form or a scenario's details offer: own ones in full, the public library by search.
-import { asc, eq, inArray } from 'drizzle-orm';
+import { asc, eq } from 'drizzle-orm';
 import { db } from '../db';
-import { tariffs, tariffVersions } from '../db/schema';
-import { findTariff, searchTariffs, type TariffRow, type VersionRow } from './tariff.service';
+import { tariffs } from '../db/schema';
+import { findTariff, searchTariffs, withVersions, type TariffRow, type VersionRow } from './tariff.service';
 import { mayChoose, type TariffChooser } from './usable';
 import {
 	PUBLIC_CHOICES,
@@ -33,19 +33,7 @@ async function workspaceTariffs(workspaceId: string) {
 		.where(eq(tariffs.workspaceId, workspaceId))
 		.orderBy(asc(tariffs.utility), asc(tariffs.name))
 		.limit(OWN_CHOICES);
-	const versions = rows.length
-		? await db
-				.select()
-				.from(tariffVersions)
-				.where(
-					inArray(
-						tariffVersions.tariffId,
-						rows.map((r) => r.id)
-					)
-				)
-				.orderBy(asc(tariffVersions.number))
-		: [];
-	return rows.map((tariff) => ({ tariff, versions: versions.filter((v) => v.tariffId === tariff.id) }));
+	return withVersions(rows);
 }
 
 /**

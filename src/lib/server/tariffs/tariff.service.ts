@@ -83,6 +83,16 @@ export async function searchTariffs(workspaceIds: string[], f: TariffFilters) {
 		.orderBy(...order)
 		.limit(pageSize)
 		.offset((page - 1) * pageSize);
+	return {
+		page,
+		pageSize,
+		total: rows[0]?.total ?? 0,
+		items: await withVersions(rows.map((r) => r.tariff))
+	};
+}
+
+/** Each tariff with its versions, oldest first: one query for them all, grouped by tariff. */
+export async function withVersions(rows: TariffRow[]) {
 	const versions = rows.length
 		? await db
 				.select()
@@ -90,20 +100,18 @@ export async function searchTariffs(workspaceIds: string[], f: TariffFilters) {
 				.where(
 					inArray(
 						tariffVersions.tariffId,
-						rows.map((r) => r.tariff.id)
+						rows.map((r) => r.id)
 					)
 				)
 				.orderBy(asc(tariffVersions.number))
 		: [];
-	return {
-		page,
-		pageSize,
-		total: rows[0]?.total ?? 0,
-		items: rows.map((r) => ({
-			tariff: r.tariff,
-			versions: versions.filter((v) => v.tariffId === r.tariff.id)
-		}))
-	};
+	const byTariff = new Map<string, VersionRow[]>();
+	for (const version of versions) {
+		const list = byTariff.get(version.tariffId);
+		if (list) list.push(version);
+		else byTariff.set(version.tariffId, [version]);
+	}
+	return rows.map((tariff) => ({ tariff, versions: byTariff.get(tariff.id) ?? [] }));
 }
 
 export async function findTariff(id: string) {
