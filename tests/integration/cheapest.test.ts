@@ -169,6 +169,7 @@ describe('the printable report and the workbook', () => {
 		({
 			locals: { user },
 			params: { siteId: site.id },
+			getClientAddress: () => '127.0.0.1',
 			url: new URL(`http://127.0.0.1/sites/${site.id}/cheapest/${path}${search}`),
 			request: new Request(`http://127.0.0.1/sites/${site.id}/cheapest/${path}${search}`)
 		}) as unknown as RequestEvent;
@@ -227,5 +228,24 @@ describe('the printable report and the workbook', () => {
 		const empty = await makeSite(workspaceId, owner, `Empty ${tag}`);
 		const event = { ...eventFor(owner as SessionUser, 'export.xlsx'), params: { siteId: empty.id } };
 		expect(await statusOf(() => exportXlsx(event as never))).toBe(409);
+	});
+
+	it('answers 429 once a person has compared tariffs 60 times in a minute, before pricing anything', async () => {
+		const busy = await makeUser(`busy-${tag}@example.org`, 'Busy');
+		const own = await createWorkspace(`Busy's own ${tag}`, busy.id);
+		const empty = await makeSite(own, busy as Actor, `Budget ${tag}`);
+		const event = { ...eventFor(busy as SessionUser, 'export.xlsx'), params: { siteId: empty.id } };
+		const statuses: number[] = [];
+		for (let i = 0; i < 61; i++) statuses.push(await statusOf(() => exportXlsx(event as never)));
+		// The budget is 60 a minute per person (src/lib/server/http/rate-limits.ts): 60 answers, then 429.
+		expect(statuses.slice(0, 60).every((status) => status === 409)).toBe(true);
+		expect(statuses[60]).toBe(429);
+		const report = (await reportLoad({
+			...event,
+			url: new URL(event.url.href.replace('export.xlsx', 'report'))
+		} as never)) as {
+			cheapest: { ok: boolean; message?: string };
+		};
+		expect(report.cheapest).toMatchObject({ ok: false, message: expect.stringContaining('wait a minute') });
 	});
 });

@@ -1,6 +1,6 @@
 // The calculation endpoints' request budgets.
 import { json, type RequestEvent } from '@sveltejs/kit';
-import { RateLimiter } from 'sveltekit-rate-limiter/server';
+import { type Rate, RateLimiter, type RateLimiterPlugin } from 'sveltekit-rate-limiter/server';
 import { env } from '$env/dynamic/private';
 import { PerClient } from '../rate-limit-client';
 
@@ -9,6 +9,22 @@ import { PerClient } from '../rate-limit-client';
 const anonymousLimiter = new RateLimiter({ IP: [120, 'm'], plugins: [new PerClient([60, 'm'])] });
 // MEMBER_REQUESTS_PER_MINUTE lifts the members' budget for a load test on loopback (npm run load).
 const memberLimiter = new RateLimiter({ IP: [Number(env.MEMBER_REQUESTS_PER_MINUTE ?? 600), 'm'] });
+
+/** Counts a signed-in person's requests, wherever they come from (the guard refuses anyone else first). */
+class PerUser implements RateLimiterPlugin {
+	constructor(readonly rate: Rate) {}
+	hash(event: RequestEvent) {
+		return event.locals.user ? `user:${event.locals.user.id}` : false;
+	}
+}
+
+// "Which tariff is cheapest?" prices a whole year on up to 100 tariffs (the page, its report and its
+// workbook alike, about 30 single calculations' work): a budget of its own, per person and per address.
+const comparisonLimiter = new RateLimiter({ IP: [240, 'm'], plugins: [new PerUser([60, 'm'])] });
+
+/** Whether the caller has spent the which-tariff budget (each page, report or workbook counts once). */
+export const tariffComparisonBudgetSpent = (event: RequestEvent): Promise<boolean> =>
+	comparisonLimiter.isLimited(event);
 
 /** Whether the caller is over its budget (members' budget if signed in); form actions answer fail(429). */
 export const calculationBudgetSpent = (event: RequestEvent): Promise<boolean> =>

@@ -18,7 +18,11 @@ import { tariffUsableBy } from './usable';
 const MAX_COMPARED = 100;
 
 export type Cheapest =
-	| { ok: false; message: string }
+	| {
+			ok: false;
+			message: string;
+			/** The caller's budget is spent: a 429, not a fact of the site. */ limited?: true;
+	  }
 	| (Omit<Ranking, 'ranked' | 'unpriced'> & {
 			ok: true;
 			ranked: WithProvenance<RankedTariff>[];

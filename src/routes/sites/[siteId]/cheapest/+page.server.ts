@@ -5,7 +5,7 @@ import type { PageServerLoad } from './$types';
 export const load = (async (event) => {
 	const { site, role, viaGrant } = await requireSiteAccess(event, event.params.siteId, 'viewer');
 	return {
-		...(await cheapestFromQuery(site, viaGrant, event.url)),
+		...(await cheapestFromQuery(site, viaGrant, event)),
 		canImport: role !== 'viewer'
 	};
 }) satisfies PageServerLoad;

@@ -7,7 +7,7 @@ import type { PageServerLoad } from './$types';
 export const load = (async (event) => {
 	const { site, user, viaGrant } = await requireSiteAccess(event, event.params.siteId, 'viewer');
 	return {
-		...(await cheapestFromQuery(site, viaGrant, event.url)),
+		...(await cheapestFromQuery(site, viaGrant, event)),
 		author: authorOf(user),
 		printedAt: new Date().toISOString()
 	};
