@@ -51,6 +51,9 @@ test.describe('the public quick estimate', () => {
 		await gotoReady(page, '/');
 		await page.getByLabel('Billing month').fill('2026-06');
 		await page.getByRole('radio', { name: 'A tariff from the library' }).check();
+		// The list opens on the library's first page; the search box finds the rest, as a person would.
+		await page.getByLabel('Find a tariff: utility, name or open-data label').fill('Northmere');
+		await expect(page.getByRole('status').filter({ hasText: 'found for “Northmere”' })).toBeVisible();
 		await page
 			.getByLabel('Library tariff')
 			.selectOption({ label: 'Northmere Electric (invented) — Residential time-of-use' });

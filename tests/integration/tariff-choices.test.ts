@@ -1,5 +1,5 @@
-import { beforeAll, describe, expect, it } from 'vitest';
-import { eq } from 'drizzle-orm';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { eq, like } from 'drizzle-orm';
 import { db } from '$lib/server/db';
 import { tariffs } from '$lib/server/db/schema';
 import { createTariff } from '$lib/server/tariffs/tariff.service';
@@ -45,6 +45,12 @@ beforeAll(async () => {
 	lastPublic = ids.at(-1)!;
 	await db.update(tariffs).set({ urdbLabel: LABEL }).where(eq(tariffs.id, ids[7]!));
 }, 120_000);
+
+// The 120 public tariffs would otherwise sort first in every public list the later suites read (the e2e
+// run shares this database): they go once the tests here are done.
+afterAll(async () => {
+	await db.delete(tariffs).where(like(tariffs.utility, `Aa ${tag}%`));
+});
 
 describe('a member of the workspace', () => {
 	it('is offered every own tariff, grouped first, even with more than 100 public ones', async () => {
