@@ -5,6 +5,8 @@
  * time-of-use tariff with ratcheted demand, alone and on 30 tariffs in turn (the "which tariff" page's
  * work). All data is invented ("Demo Valley Power" is fictional).
  * With BENCH_URL set (e.g. http://localhost:5173), it also times POST ${BENCH_URL}/api/v1/calculate.
+ * Last, the growth curves (`bench/growth.ts`): calculate() by devices and by months, compare() by
+ * scenarios and the comparison workbook by scenarios × devices, each with the ratio of step to step.
  */
 import {
 	type CalculateRequestInput,
@@ -18,6 +20,7 @@ import {
 	tariffSchema
 } from '../src/lib/calc/index';
 import { tiered, tou, touPeriod } from '../src/lib/calc/tariffs.fixture';
+import { growth, median, workbookModules } from './bench/growth';
 
 const WARM_UP = 10;
 const ITERATIONS = 50;
@@ -119,9 +122,9 @@ function equipment(count: number, seed: number): EquipmentInput[] {
 	});
 }
 
-function calculation(devices: number, seed = 1): CalculateRequestInput {
+function calculation(devices: number, seed = 1, months = 12): CalculateRequestInput {
 	return {
-		period: { start: '2027-01', months: 12 },
+		period: { start: '2027-01', months },
 		timezone: 'America/Chicago',
 		holidays: { country: 'US', region: 'TX' },
 		tariff,
@@ -141,12 +144,6 @@ function comparison(count = 5, devices = 100): CompareRequestInput {
 		finance: { horizonYears: 10, discountPercent: 5, escalationPercent: 3 },
 		emissionFactorKgPerKwh: 0.4
 	};
-}
-
-function median(samples: number[]): number {
-	const sorted = [...samples].sort((a, b) => a - b);
-	const middle = Math.floor(sorted.length / 2);
-	return sorted.length % 2 ? (sorted[middle] ?? 0) : ((sorted[middle - 1] ?? 0) + (sorted[middle] ?? 0)) / 2;
 }
 
 /** Medians after a warm-up; a run may report its own duration (to leave out waits it had to make). */
@@ -289,3 +286,81 @@ if (url) {
 } else {
 	console.log('BENCH_URL not set: skipping the HTTP endpoint.');
 }
+
+// Growth curves: the same work at growing sizes. Requests are parsed before timing; fewer runs for the
+// big sizes keep the whole bench within about three minutes on a 2-core machine.
+// The two largest sizes lie past what a request may ask (2,000 devices, 36 months): they are parsed
+// within those limits, 2,000 devices at a time, and then widened, to time the core beyond them.
+function parsed(devices: number, months = 12) {
+	const all = equipment(devices, 1);
+	const chunks = Array.from({ length: Math.max(1, Math.ceil(devices / 2000)) }, (_, i) =>
+		calculateRequestSchema.parse({
+			...calculation(0, 1, Math.min(months, 36)),
+			equipment: all.slice(i * 2000, (i + 1) * 2000)
+		})
+	);
+	const [first] = chunks;
+	if (!first || !('months' in first.period)) throw new Error('The bench request did not parse');
+	return {
+		...first,
+		period: { ...first.period, months },
+		equipment: chunks.flatMap((chunk) => chunk.equipment)
+	};
+}
+const byDevices = [10, 100, 1000, 10_000].map((devices) => ({ devices, request: parsed(devices) }));
+await growth(
+	'Growth: calculate() by devices (12 months)',
+	byDevices.map(({ devices, request }) => ({
+		label: `${devices.toLocaleString('en-US')} devices`,
+		size: devices,
+		run: () => calculate(request),
+		n: devices >= 10_000 ? 10 : devices >= 1000 ? 20 : 50,
+		warmUp: devices >= 10_000 ? 2 : 10
+	}))
+);
+const byMonths = [1, 12, 60].map((months) => ({ months, request: parsed(100, months) }));
+await growth(
+	'Growth: calculate() by months (100 devices)',
+	byMonths.map(({ months, request }) => ({
+		label: `${months} month${months === 1 ? '' : 's'}`,
+		size: months,
+		run: () => calculate(request),
+		n: 30,
+		warmUp: 5
+	}))
+);
+const byScenarios = [2, 6].map((count) => ({
+	count,
+	request: compareRequestSchema.parse(comparison(count))
+}));
+await growth(
+	'Growth: compare() by scenarios (100 devices each, 12 months)',
+	byScenarios.map(({ count, request }) => ({
+		label: `${count} scenarios`,
+		size: count,
+		run: () => compare(request),
+		n: 30,
+		warmUp: 5
+	}))
+);
+// The workbook alone: the comparison it carries is computed once, before timing, as the route does
+// before it builds the file.
+const { comparisonWorkbook, exportOf } = await workbookModules();
+const workbooks = [
+	[2, 30],
+	[6, 200]
+].map(([count = 0, devices = 0]) => ({
+	count,
+	devices,
+	input: exportOf(comparison(count, devices), 'Bench comparison (invented)')
+}));
+await growth(
+	'Growth: the comparison workbook by scenarios × devices (12 months)',
+	workbooks.map(({ count, devices, input }) => ({
+		label: `${count} × ${devices} devices`,
+		size: count * devices,
+		run: () => comparisonWorkbook(input),
+		n: count * devices > 100 ? 5 : 20,
+		warmUp: 2
+	}))
+);
