@@ -1,7 +1,7 @@
 /**
  * Growth curves for `npm run bench`: one series times the same work at growing sizes and prints a small
- * table of the size, the median and its ratio to the previous size's median, beside the size's own
- * ratio, so linear growth reads as the two ratios being about equal.
+ * table of the size, the median and its ratio to the previous size's median (of the wall-clock time and
+ * of the process's CPU time), beside the size's own ratio, so linear growth reads as about equal ratios.
  */
 import { fileURLToPath } from 'node:url';
 
@@ -22,32 +22,46 @@ export function median(samples: number[]): number {
 	return sorted.length % 2 ? (sorted[middle] ?? 0) : ((sorted[middle - 1] ?? 0) + (sorted[middle] ?? 0)) / 2;
 }
 
-async function medianOf(step: Step): Promise<number> {
+/** Medians of the wall-clock time and of this process's CPU time (less moved by other work on the machine). */
+async function medians(step: Step): Promise<{ wall: number; cpu: number }> {
 	for (let i = 0; i < step.warmUp; i++) await step.run();
-	const samples: number[] = [];
+	const wall: number[] = [];
+	const cpu: number[] = [];
 	for (let i = 0; i < step.n; i++) {
+		const usage = process.cpuUsage();
 		const start = performance.now();
 		await step.run();
-		samples.push(performance.now() - start);
+		wall.push(performance.now() - start);
+		const used = process.cpuUsage(usage);
+		cpu.push((used.user + used.system) / 1000);
 	}
-	return median(samples);
+	return { wall: median(wall), cpu: median(cpu) };
 }
 
 const ratio = (now: number, before: number | undefined) => (before ? `×${(now / before).toFixed(1)}` : '');
+const ms = (value: number) => `${value.toFixed(2)} ms`;
+const row = (cells: string[]) =>
+	`  ${cells.map((cell, i) => (i === 0 ? cell.padEnd(18) : cell.padStart(i === 1 ? 3 : 11))).join(' ')}`;
 
 /** Times each step in turn and prints the series' table under its title. */
 export async function growth(title: string, steps: Step[]): Promise<void> {
 	console.log(`\n${title}`);
-	console.log(
-		`  ${'size'.padEnd(22)} ${'n'.padStart(3)} ${'median'.padStart(12)} ${'time ratio'.padStart(11)} ${'size ratio'.padStart(11)}`
-	);
-	let previous: { size: number; median: number } | undefined;
+	console.log(row(['size', 'n', 'median', 'ratio', 'CPU median', 'CPU ratio', 'size ratio']));
+	let previous: { size: number; wall: number; cpu: number } | undefined;
 	for (const step of steps) {
-		const ms = await medianOf(step);
+		const { wall, cpu } = await medians(step);
 		console.log(
-			`  ${step.label.padEnd(22)} ${String(step.n).padStart(3)} ${`${ms.toFixed(2)} ms`.padStart(12)} ${ratio(ms, previous?.median).padStart(11)} ${ratio(step.size, previous?.size).padStart(11)}`
+			row([
+				step.label,
+				String(step.n),
+				ms(wall),
+				ratio(wall, previous?.wall),
+				ms(cpu),
+				ratio(cpu, previous?.cpu),
+				ratio(step.size, previous?.size)
+			])
 		);
-		previous = { size: step.size, median: ms };
+		previous = { size: step.size, wall, cpu };
 	}
 }
 
