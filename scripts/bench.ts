@@ -1,15 +1,13 @@
 /**
  * Benchmark of the calculation core (`npm run bench`): medians of calculate() for 100 and 1,000
- * devices and of a 5-scenario compare() over 12 months on a tariff with time-of-use seasons, tiers,
- * demand, riders and taxes; then a year of 15-minute meter readings (35,040 values) on a tiered
+ * devices and of a 5-scenario compare() over 12 months on the tariff of `bench/requests.ts`; then a year of 15-minute meter readings (35,040 values) on a tiered
  * time-of-use tariff with ratcheted demand, alone and on 30 tariffs in turn (the "which tariff" page's
  * work). All data is invented ("Demo Valley Power" is fictional).
  * With BENCH_URL set (e.g. http://localhost:5173), it also times POST ${BENCH_URL}/api/v1/calculate.
+ * Last, the growth curves (`bench/series.ts`): calculate() by devices and by months, compare() by
+ * scenarios and the comparison workbook by scenarios × devices, each with the ratio of step to step.
  */
 import {
-	type CalculateRequestInput,
-	type CompareRequestInput,
-	type EquipmentInput,
 	type TariffInput,
 	calculate,
 	calculateRequestSchema,
@@ -17,137 +15,12 @@ import {
 	compareRequestSchema,
 	tariffSchema
 } from '../src/lib/calc/index';
-import { tiered, tou, touPeriod } from '../src/lib/calc/tariffs.fixture';
+import { median } from './bench/growth';
+import { calculation, comparison, random, tariff } from './bench/requests';
+import { growthCurves } from './bench/series';
 
 const WARM_UP = 10;
 const ITERATIONS = 50;
-
-/** A small deterministic generator (mulberry32), so every run measures the same requests. */
-function random(seed: number): () => number {
-	let state = seed;
-	return () => {
-		state = (state + 0x6d2b79f5) | 0;
-		let t = Math.imul(state ^ (state >>> 15), 1 | state);
-		t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t;
-		return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-	};
-}
-
-const pad = (hour: number) => `${String(hour).padStart(2, '0')}:00`;
-
-const tariff: TariffInput = {
-	currency: 'USD',
-	holidaysAsWeekends: true,
-	fixedCharges: [{ label: 'Demo Valley Power customer charge', perMonth: 18.5 }],
-	energyCharges: [
-		tou(
-			'Supply',
-			{
-				months: [6, 7, 8, 9],
-				periods: [
-					touPeriod('On-peak', 0.31, 'weekdays', '16:00', '21:00'),
-					touPeriod('Mid-peak', 0.19, 'weekdays', '07:00', '16:00')
-				],
-				otherPerKwh: 0.11
-			},
-			{
-				months: [1, 2, 3, 4, 5, 10, 11, 12],
-				periods: [touPeriod('Peak', 0.22, 'all', '17:00', '20:00')],
-				otherPerKwh: 0.12
-			}
-		),
-		tiered('Delivery', [1000, 0.045], [5000, 0.062], [null, 0.071])
-	],
-	demandCharges: [
-		{ label: 'Demand', perKw: 7.25, intervalMinutes: 15 },
-		{
-			label: 'Summer peak demand',
-			perKw: 4.1,
-			intervalMinutes: 60,
-			months: [6, 7, 8, 9],
-			days: 'weekdays',
-			windows: [{ start: '16:00', end: '21:00' }]
-		}
-	],
-	riders: [{ label: 'Fuel adjustment', perKwh: 0.021 }],
-	taxes: [
-		{ label: 'State tax', percent: 4 },
-		{ label: 'City tax', percent: 1.5 }
-	],
-	minimumMonthly: 25
-};
-
-const COMMON_SCHEDULES: EquipmentInput['schedule'][] = [
-	{ type: 'always' },
-	{ type: 'hours', hoursPerDay: 12, days: 'all' },
-	{ type: 'windows', windows: [{ start: '06:00', end: '22:00' }], days: 'all' },
-	{ type: 'windows', windows: [{ start: '22:00', end: '06:00' }], days: 'weekdays' },
-	{ type: 'cycle', onMinutes: 15, offMinutes: 45 },
-	{ type: 'runs', runsPerDay: 4, minutesPerRun: 30, windows: [{ start: '08:00', end: '18:00' }] }
-];
-const CATEGORIES = ['water-pump', 'air-pump', 'aerator', 'lighting', 'heater', 'fan'] as const;
-
-/** Half the devices use common schedules, half invented windows, so load groups are many. */
-function equipment(count: number, seed: number): EquipmentInput[] {
-	const next = random(seed);
-	return Array.from({ length: count }, (_, i) => {
-		const start = Math.floor(next() * 24);
-		const schedule =
-			next() < 0.5
-				? (COMMON_SCHEDULES[Math.floor(next() * COMMON_SCHEDULES.length)] ?? { type: 'always' })
-				: {
-						type: 'windows' as const,
-						windows: [{ start: pad(start), end: pad((start + 1 + Math.floor(next() * 12)) % 24) }]
-					};
-		return {
-			name: `Demo device ${i + 1}`,
-			category: CATEGORIES[i % CATEGORIES.length],
-			quantity: 1 + Math.floor(next() * 4),
-			power:
-				next() < 0.5
-					? { watts: 20 + Math.round(next() * 2000) }
-					: { amps: 0.5 + next() * 10, volts: 120, powerFactor: 0.85 },
-			standbyWatts: next() < 0.3 ? 2 : 0,
-			dutyPercent: next() < 0.2 ? 60 : 100,
-			months: next() < 0.15 ? [5, 6, 7, 8, 9] : undefined,
-			schedule,
-			purchaseCost: 200,
-			installCost: 150,
-			lifeYears: 5,
-			maintenancePerYear: 20
-		};
-	});
-}
-
-function calculation(devices: number, seed = 1): CalculateRequestInput {
-	return {
-		period: { start: '2027-01', months: 12 },
-		timezone: 'America/Chicago',
-		holidays: { country: 'US', region: 'TX' },
-		tariff,
-		equipment: equipment(devices, seed)
-	};
-}
-
-function comparison(count = 5, devices = 100): CompareRequestInput {
-	const { equipment: _, ...fields } = calculation(0);
-	return {
-		...fields,
-		scenarios: Array.from({ length: count }, (_, i) => ({
-			name: `Scenario ${i + 1}`,
-			equipment: equipment(devices, 10 + i)
-		})),
-		baseline: 0,
-		finance: { horizonYears: 10, discountPercent: 5, escalationPercent: 3 },
-		emissionFactorKgPerKwh: 0.4
-	};
-}
-
-function median(samples: number[]): number {
-	const sorted = [...samples].sort((a, b) => a - b);
-	const middle = Math.floor(sorted.length / 2);
-	return sorted.length % 2 ? (sorted[middle] ?? 0) : ((sorted[middle - 1] ?? 0) + (sorted[middle] ?? 0)) / 2;
-}
 
 /** Medians after a warm-up; a run may report its own duration (to leave out waits it had to make). */
 async function time(label: string, run: () => unknown | Promise<unknown>, warmUp = WARM_UP): Promise<void> {
@@ -289,3 +162,5 @@ if (url) {
 } else {
 	console.log('BENCH_URL not set: skipping the HTTP endpoint.');
 }
+
+await growthCurves();
