@@ -18,3 +18,11 @@ export class PerClient<Extra = never> implements RateLimiterPlugin<Extra> {
 		return clientId(event);
 	}
 }
+
+/** Counts a signed-in person's requests, wherever they come from (the guard refuses anyone else first). */
+export class PerUser<Extra = never> implements RateLimiterPlugin<Extra> {
+	constructor(readonly rate: Rate | Rate[]) {}
+	hash(event: RequestEvent) {
+		return event.locals.user ? `user:${event.locals.user.id}` : false;
+	}
+}

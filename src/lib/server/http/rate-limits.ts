@@ -1,22 +1,14 @@
 // The calculation endpoints' request budgets.
 import { json, type RequestEvent } from '@sveltejs/kit';
-import { type Rate, RateLimiter, type RateLimiterPlugin } from 'sveltekit-rate-limiter/server';
+import { RateLimiter } from 'sveltekit-rate-limiter/server';
 import { env } from '$env/dynamic/private';
-import { PerClient } from '../rate-limit-client';
+import { PerClient, PerUser } from '../rate-limit-client';
 
 // Anonymous callers (the public quick estimate, outside tools) share a per-client budget; signed-in
 // users get a larger one.
 const anonymousLimiter = new RateLimiter({ IP: [120, 'm'], plugins: [new PerClient([60, 'm'])] });
 // MEMBER_REQUESTS_PER_MINUTE lifts the members' budget for a load test on loopback (npm run load).
 const memberLimiter = new RateLimiter({ IP: [Number(env.MEMBER_REQUESTS_PER_MINUTE ?? 600), 'm'] });
-
-/** Counts a signed-in person's requests, wherever they come from (the guard refuses anyone else first). */
-class PerUser implements RateLimiterPlugin {
-	constructor(readonly rate: Rate) {}
-	hash(event: RequestEvent) {
-		return event.locals.user ? `user:${event.locals.user.id}` : false;
-	}
-}
 
 // "Which tariff is cheapest?" prices a whole year on up to 100 tariffs (the page, its report and its
 // workbook alike, about 30 single calculations' work): a budget of its own, per person and per address.
