@@ -5,6 +5,7 @@ CREATE TABLE "priced_result" (
 	"rules_version" integer NOT NULL,
 	"depends_on" jsonb NOT NULL,
 	"result" jsonb NOT NULL,
+	"summary" jsonb NOT NULL,
 	"computed_at" timestamp with time zone DEFAULT now() NOT NULL,
 	CONSTRAINT "priced_result_scenario_id_slot_pk" PRIMARY KEY("scenario_id","slot")
 );

@@ -32,7 +32,8 @@ export const signInLocks = pgTable(
  * A scenario's priced result for one slot (a period, and a pinned tariff version if any), with the key
  * of everything it was priced from (`inputKey`: the scenario's revision, the tariff versions, the time
  * zone, the holidays and the calculation rules' version; `dependsOn` is that key in words). A stored row
- * whose key no longer matches is stale and is priced again on the next read.
+ * whose key no longer matches is stale and is priced again on the next read. `summary` is the small part
+ * lists (the sites dashboard, the site page) read, so they never load the whole result.
  */
 export const pricedResults = pgTable(
 	'priced_result',
@@ -43,6 +44,8 @@ export const pricedResults = pgTable(
 		rulesVersion: integer('rules_version').notNull(),
 		dependsOn: jsonb('depends_on').$type<Record<string, unknown>>().notNull(),
 		result: jsonb('result').$type<unknown>().notNull(),
+		/** What lists read without the whole result: each period's label, cost and kWh, the totals, the note. */
+		summary: jsonb('summary').$type<unknown>().notNull(),
 		computedAt: timestamp('computed_at', { mode: 'date', withTimezone: true }).notNull().defaultNow()
 	},
 	(p) => [primaryKey({ columns: [p.scenarioId, p.slot] })]
