@@ -1,8 +1,10 @@
 // npm run load — 50 connections for 30 s (LOAD_SECONDS) against the production build on loopback, on
-// three routes: POST /api/v1/calculate with a 100-device time-of-use scenario, a signed-in user's sites
-// dashboard, and the comparison workbook export. Everything runs on a throwaway PostgreSQL with the
-// demo data; the app runs on both cores (scripts/cluster.mjs). Prints requests per second and
-// p50/p95/p99 latency per route. All data is invented.
+// every hot route: POST /api/v1/calculate with a 100-device time-of-use scenario; the sites dashboard of
+// the demo workspace and of a generated adviser's workspace (200 sites × 3 scenarios × 30 devices,
+// scripts/bench/workspace-200.ts); one of its site pages; the comparison of its three scenarios; and the
+// comparison workbook of the demo pair. Everything runs on a throwaway PostgreSQL with the demo data;
+// the app runs on both cores (scripts/cluster.mjs). Prints requests per second and p50/p95/p99 latency
+// per route. All data is invented.
 import autocannon from 'autocannon';
 import { chmodSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { availableParallelism, tmpdir } from 'node:os';
@@ -131,6 +133,9 @@ async function main() {
 	};
 	await runOrThrow('bash', ['scripts/pg.sh', 'start'], { env: pgEnv });
 	children.push(await migrateSeedAndStartStandIns(env));
+	log('load', 'generating the 200-site workspace');
+	const { output } = await runOrThrow('npx', ['tsx', 'scripts/bench/workspace-200.ts'], { env, quiet: true });
+	const generated = JSON.parse(output.split('\n').findLast((line) => line.startsWith('{')));
 	log('load', 'building the production bundle');
 	await runOrThrow('npx', ['vite', 'build', '--logLevel', 'error'], { env });
 	const base = `http://127.0.0.1:${appPort}`;
@@ -159,6 +164,18 @@ async function main() {
 			{ url: `${base}/api/v1/calculate`, method: 'POST', headers, body: JSON.stringify(calculation()) }
 		],
 		['GET /w/:workspace/sites (dashboard, signed in)', { url: `${base}/w/${ws}/sites`, headers: { cookie } }],
+		[
+			'GET /w/:workspace/sites (dashboard, 200 sites)',
+			{ url: `${base}/w/${generated.workspaceId}/sites`, headers: { cookie } }
+		],
+		[
+			'GET /sites/:site (site page, 3 × 30 devices)',
+			{ url: `${base}/sites/${generated.firstSite}`, headers: { cookie } }
+		],
+		[
+			'GET /api/v1/compare (3 × 30 devices)',
+			{ url: `${base}/api/v1/compare?scenarios=${generated.firstScenarios}`, headers: { cookie } }
+		],
 		[
 			'GET /api/v1/compare/export.xlsx (2 demo scenarios)',
 			{ url: `${base}/api/v1/compare/export.xlsx?scenarios=${pair}`, headers: { cookie } }
