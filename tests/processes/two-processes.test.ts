@@ -85,14 +85,18 @@ beforeAll(async () => {
 	writeFileSync(join(work, 'nginx.conf'), wrapperConf(work, conf, join(work, 'access.log')));
 	const nginxArgs = ['-p', work, '-e', join(work, 'error.log'), '-c', join(work, 'nginx.conf')];
 	await startChild('nginx', [...nginxArgs, '-g', 'daemon off;'], {});
-	await expect
-		.poll(() =>
-			fetch(`${proxy}/health`).then(
-				(r) => r.status,
-				() => 0
-			)
-		)
-		.toBe(200);
+	// Ready when the proxy answers (a refused connection until then); a hook cannot use expect.poll.
+	for (
+		let tries = 0;
+		(await fetch(`${proxy}/health`).then(
+			(r) => r.status,
+			() => 0
+		)) !== 200;
+		tries++
+	) {
+		if (tries === 300) throw new Error('nginx did not answer /health');
+		await new Promise((done) => setTimeout(done, 100));
+	}
 }, 120_000);
 
 afterAll(async () => {

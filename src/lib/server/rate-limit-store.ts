@@ -29,7 +29,7 @@ export async function addHits(
 	sweepNowAndThen();
 	// Always in key order, so two processes adding overlapping batches lock rows in the same order.
 	const sorted = [...batch].sort((a, b) => (a.key < b.key ? -1 : a.key > b.key ? 1 : 0));
-	const rows = await client<{ key: string; hits: number; expires_at: Date }[]>`
+	const rows = await client<{ key: string; hits: number; ends_at: number }[]>`
 		insert into rate_limit_hit (key, hits, expires_at)
 		select k, h, now() + t * interval '1 millisecond'
 		from unnest(${sorted.map((b) => b.key)}::text[], ${sorted.map((b) => b.hits)}::int[],
@@ -39,8 +39,8 @@ export async function addHits(
 				then excluded.hits else rate_limit_hit.hits + excluded.hits end,
 			expires_at = case when rate_limit_hit.expires_at <= now()
 				then excluded.expires_at else rate_limit_hit.expires_at end
-		returning key, hits, expires_at`;
-	return rows.map((r) => ({ key: r.key, hits: r.hits, endsAt: r.expires_at.getTime() }));
+		returning key, hits, (extract(epoch from expires_at) * 1000)::float8 as ends_at`;
+	return rows.map((r) => ({ key: r.key, hits: r.hits, endsAt: r.ends_at }));
 }
 
 /** Forgets every count of one limiter (the library's `clear`). */
