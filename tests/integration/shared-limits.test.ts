@@ -47,15 +47,17 @@ describe('rate-limit counts in PostgreSQL', () => {
 	});
 
 	it('two batched stores (two processes) meet in one row', async () => {
-		const [first, second] = [
-			new BatchedBudgetStore(tag, { syncAt: 5 }),
-			new BatchedBudgetStore(tag, { syncAt: 5 })
-		];
+		// Syncs only when a key has 5 unsent hits, never on the timer, so the order is fixed.
+		const process = () => new BatchedBudgetStore(tag, { syncAt: 5, syncEveryMs: 60_000 });
+		const [first, second] = [process(), process()];
 		for (let i = 0; i < 10; i++) await (i % 2 ? second : first).add('client', 60_000);
-		// Each has sent five hits (the fifth waited for its sync); the row holds all ten.
+		// Each has sent its five hits (the fifth waited for its sync); the row holds all ten.
 		const [row] = await client`select hits from rate_limit_hit where key = ${`${tag}:client`}`;
 		expect(row!.hits).toBe(10);
-		expect(await first.add('client', 60_000)).toBe(11);
+		// The second synced last and read all ten; the first read 5 and counts on from there until its
+		// next sync: the bounded overshoot (fewer than syncAt past the shared total).
+		expect(await second.add('client', 60_000)).toBe(11);
+		expect(await first.add('client', 60_000)).toBe(6);
 	});
 
 	it('sweeps expired counts and ended locks, and keeps live ones', async () => {
