@@ -29,6 +29,18 @@ export default defineConfig({
 					testTimeout: 20_000,
 					env: { TZ: 'UTC' }
 				}
+			},
+			{
+				extends: './vite.config.ts',
+				test: {
+					name: 'processes',
+					environment: 'node',
+					// Against the production build: scripts/test.mjs runs these after building it.
+					include: ['tests/processes/**/*.test.ts'],
+					fileParallelism: false,
+					testTimeout: 60_000,
+					env: { TZ: 'UTC' }
+				}
 			}
 		]
 	}

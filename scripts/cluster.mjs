@@ -1,5 +1,6 @@
 // Runs the production build on every core (or WORKERS of them) behind one port with node:cluster.
-// The workers share the listening socket; each keeps its own in-memory rate-limit counts.
+// The workers share the listening socket; rate-limit counts and sign-in locks are shared through
+// PostgreSQL (README, "Past one machine"), so the limits hold for all workers together.
 import cluster from 'node:cluster';
 import { availableParallelism } from 'node:os';
 import { resolve } from 'node:path';

@@ -121,7 +121,7 @@ async function waitForMail(to, subject, count = 1) {
 async function signUp(browser, fields) {
 	const status = await browser.action('/signup', fields);
 	if (status === 429)
-		throw new Error('sign-up is rate limited from this address (20 an hour): restart npm start or wait');
+		throw new Error('sign-up is rate limited from this address (20 an hour, counted in the database): wait');
 }
 
 const linkIn = (text) => text.match(/https?:\/\/\S+/)?.[0];

@@ -1,15 +1,17 @@
 // `npm test`: every check, against a throwaway PostgreSQL and the local stand-ins, ending with one line
-// "N passed, N failed". `npm test -- unit e2e` runs only the named suites.
+// "N passed, N failed". `npm test -- unit e2e` runs only the named suites. `processes` (two app
+// processes behind nginx, and nginx's check of the repo's proxy configuration) runs on the build.
 import { chmodSync, existsSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { basename, join } from 'node:path';
 import { ensureDependencies, freePort, log, run, runOrThrow, stopGroup } from './lib.mjs';
 import { migrateSeedAndStartStandIns, standInEnv } from './local-services.mjs';
 
-const ALL = ['types', 'lint', 'format', 'unit', 'integration', 'e2e'];
+const ALL = ['types', 'lint', 'format', 'unit', 'integration', 'e2e', 'processes'];
 const wanted = process.argv.slice(2).filter((a) => ALL.includes(a));
 const suites = wanted.length ? wanted : ALL;
-const needsServices = suites.some((s) => s === 'integration' || s === 'e2e');
+const needsServices = suites.some((s) => s === 'integration' || s === 'e2e' || s === 'processes');
+const needsBuild = suites.some((s) => s === 'e2e' || s === 'processes');
 
 const tally = { passed: 0, failed: 0 };
 const summary = [];
@@ -85,6 +87,9 @@ async function ensureDebianPackage(binary, pkg, purpose) {
 /** Chromium runs the end-to-end tests. */
 const ensureChromium = () => ensureDebianPackage('/usr/bin/chromium', 'chromium', 'the end-to-end tests');
 
+/** Debian's nginx checks deploy/nginx/runrate.conf and proxies the two-process test (never as a daemon). */
+const ensureNginx = () => ensureDebianPackage('/usr/sbin/nginx', 'nginx', 'the reverse proxy tests');
+
 /** LibreOffice Calc recalculates the exported workbook in the integration tests (headless, no GUI). */
 const ensureLibreOffice = () =>
 	ensureDebianPackage('/usr/bin/soffice', 'libreoffice-calc-nogui', 'the workbook recalculation test');
@@ -130,35 +135,41 @@ try {
 		if (suites.includes('integration')) await ensureLibreOffice();
 		const env = await startServices();
 		if (suites.includes('integration')) await vitest('integration', env);
-		if (suites.includes('e2e')) {
-			log('test', 'e2e: building the production bundle');
+		let built = false;
+		if (needsBuild) {
+			log('test', 'building the production bundle');
 			const build = await timed(() => run('npx', ['vite', 'build', '--logLevel', 'warn'], { env }));
-			if (build.code !== 0) record('build', 0, 1, build.seconds);
+			built = build.code === 0;
+			if (!built) record('build', 0, 1, build.seconds);
+		}
+		if (built && suites.includes('e2e')) {
+			const out = join(work, 'playwright.json');
+			const r = await timed(() =>
+				run(
+					'npx',
+					[
+						'playwright',
+						'test',
+						...(process.env.E2E_GREP ? ['--grep', process.env.E2E_GREP] : []),
+						...(process.env.E2E_REPEAT ? ['--repeat-each', process.env.E2E_REPEAT] : [])
+					],
+					{ env: { ...env, PLAYWRIGHT_JSON_OUTPUT_NAME: out } }
+				)
+			);
+			if (!existsSync(out)) record('e2e', 0, 1, r.seconds);
 			else {
-				const out = join(work, 'playwright.json');
-				const r = await timed(() =>
-					run(
-						'npx',
-						[
-							'playwright',
-							'test',
-							...(process.env.E2E_GREP ? ['--grep', process.env.E2E_GREP] : []),
-							...(process.env.E2E_REPEAT ? ['--repeat-each', process.env.E2E_REPEAT] : [])
-						],
-						{ env: { ...env, PLAYWRIGHT_JSON_OUTPUT_NAME: out } }
-					)
+				const { stats } = JSON.parse(readFileSync(out, 'utf8'));
+				record(
+					'e2e',
+					stats.expected + stats.flaky,
+					stats.unexpected + (r.code !== 0 && stats.unexpected === 0 ? 1 : 0),
+					r.seconds
 				);
-				if (!existsSync(out)) record('e2e', 0, 1, r.seconds);
-				else {
-					const { stats } = JSON.parse(readFileSync(out, 'utf8'));
-					record(
-						'e2e',
-						stats.expected + stats.flaky,
-						stats.unexpected + (r.code !== 0 && stats.unexpected === 0 ? 1 : 0),
-						r.seconds
-					);
-				}
 			}
+		}
+		if (built && suites.includes('processes')) {
+			await ensureNginx();
+			await vitest('processes', env);
 		}
 	}
 } catch (error) {

@@ -1,6 +1,9 @@
 import type { RequestEvent } from '@sveltejs/kit';
+import { createHash } from 'node:crypto';
 import { RateLimiter, type RateLimiterPlugin } from 'sveltekit-rate-limiter/server';
+import { client } from './db';
 import { clientId, PerClient } from './rate-limit-client';
+import { PostgresStore, sweepNowAndThen } from './rate-limit-store';
 
 /** Limits attempts per address as well as per client, so guessing one account's password from many IPs is slow too. */
 class PerAddress implements RateLimiterPlugin<string> {
@@ -10,7 +13,8 @@ class PerAddress implements RateLimiterPlugin<string> {
 	}
 }
 
-// In-memory stores: one app process. Past one process these move to a shared store (see DEVELOPERS.md).
+// The form limits count in PostgreSQL (rate-limit-store.ts), exactly, so every app process shares one
+// count; a database outage refuses these forms with the readable 503 rather than letting them through.
 
 /**
  * Password sign-in counts failed attempts only, so people who sign in often are never slowed down.
@@ -20,35 +24,44 @@ class PerAddress implements RateLimiterPlugin<string> {
  */
 const signInFailures = new RateLimiter<string>({
 	IP: [120, '15m'],
-	plugins: [new PerAddress([9, '15m']), new PerClient<string>([60, '15m'])]
+	plugins: [new PerAddress([9, '15m']), new PerClient<string>([60, '15m'])],
+	store: new PostgresStore('sign-in')
 });
-const LOCK_MS = 15 * 60 * 1000;
-const lockedUntil = new Map<string, number>();
-const clientKey = clientId;
 
-export function signInLocked(event: RequestEvent, email: string): boolean {
-	const now = Date.now();
-	return [`addr:${email}`, clientKey(event)].some((key) => {
-		const until = lockedUntil.get(key);
-		if (until !== undefined && until <= now) lockedUntil.delete(key);
-		return until !== undefined && until > now;
-	});
+/** The sign_in_lock keys of an attempt: its address and its client, hashed (no e-mail or IP in clear). */
+const lockKeys = (event: RequestEvent, email: string) =>
+	[`addr:${email}`, clientId(event)].map((key) => createHash('sha256').update(key).digest('hex'));
+
+/** Whether the address or the client is locked, in any app process (one indexed read). */
+export async function signInLocked(event: RequestEvent, email: string): Promise<boolean> {
+	const rows = await client`
+		select 1 from sign_in_lock where key in ${client(lockKeys(event, email))} and locked_until > now()
+		limit 1`;
+	return rows.length > 0;
 }
 
+/** Counts a failed attempt; the one past the limit locks the address and the client for 15 minutes. */
 export async function recordSignInFailure(event: RequestEvent, email: string): Promise<void> {
 	if (!(await signInFailures.isLimited(event, email))) return;
-	const until = Date.now() + LOCK_MS;
-	lockedUntil.set(`addr:${email}`, until);
-	lockedUntil.set(clientKey(event), until);
+	sweepNowAndThen();
+	await client`
+		insert into sign_in_lock (key, locked_until)
+		select key, now() + interval '15 minutes' from unnest(${lockKeys(event, email)}::text[]) as key
+		on conflict (key) do update set locked_until = excluded.locked_until`;
 }
 
-export const signUpLimiter = new RateLimiter({ IP: [20, 'h'], plugins: [new PerClient([10, 'h'])] });
+export const signUpLimiter = new RateLimiter({
+	IP: [20, 'h'],
+	plugins: [new PerClient([10, 'h'])],
+	store: new PostgresStore('sign-up')
+});
 
 export const mailLinkLimiter = new RateLimiter<string>({
 	IP: [30, 'h'],
-	plugins: [new PerAddress([5, '15m'])]
+	plugins: [new PerAddress([5, '15m'])],
+	store: new PostgresStore('mail-link')
 });
 
-export const inviteLimiter = new RateLimiter({ IP: [60, 'h'] });
+export const inviteLimiter = new RateLimiter({ IP: [60, 'h'], store: new PostgresStore('invite') });
 
 export const TOO_MANY = 'Too many attempts. Wait a few minutes, then try again.';

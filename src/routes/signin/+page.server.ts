@@ -30,7 +30,7 @@ export const actions = {
 		const parsed = signInSchema.safeParse(Object.fromEntries(form));
 		if (!parsed.success) return fail(400, { action: 'password', values, errors: fieldErrors(parsed.error) });
 		const { email, password } = parsed.data;
-		if (signInLocked(event, email))
+		if (await signInLocked(event, email))
 			return fail(429, { action: 'password', values, errors: { form: TOO_MANY } });
 
 		const checked = await checkPassword(email, password);

@@ -32,7 +32,7 @@ export const actions = {
 		const email = await confirmationFor(parsed.data.token);
 		if (!email) return fail(400, { errors: { form: CLOSED } });
 		// Guessing the pending password through a leaked link counts like guessing it at sign-in.
-		if (signInLocked(event, email)) return fail(429, { errors: { form: TOO_MANY } });
+		if (await signInLocked(event, email)) return fail(429, { errors: { form: TOO_MANY } });
 		const result = await confirmSignUp(parsed.data.token, parsed.data.password);
 		if (result === 'closed') return fail(400, { errors: { form: CLOSED } });
 		if (result === 'wrong-password') {
