@@ -1,0 +1,51 @@
+// Reads a V8 .cpuprofile (node --cpu-prof) into self time per function and per package, for
+// profile-request.mjs. The profile's format: nodes[] (id, callFrame), samples[] (a node id per tick) and
+// timeDeltas[] (µs since the tick before); startTime is µs on the monotonic clock process.hrtime reads.
+import { readFileSync } from 'node:fs';
+import { root } from './lib.mjs';
+
+/** Where a function lives, short: a package and file, the app's bundle chunk, or Node's own module. */
+function place(url) {
+	if (!url) return '';
+	const path = url.replace(/^file:\/\//, '').replace(`${root}/`, '');
+	const inPackage = path.match(/node_modules\/((?:@[^/]+\/)?[^/]+)\/(?:.*\/)?([^/]+)$/);
+	if (inPackage) return `${inPackage[1]} ${inPackage[2]}`;
+	return path.replace(/^.*?\/server\//, 'app ');
+}
+
+/** The package a place belongs to, for the roll-up: a package name, "app", "node" or a V8 bucket. */
+function area(name, where) {
+	if (!where) return name.startsWith('(') ? name : 'V8 / native';
+	if (where.startsWith('node:')) return 'node';
+	return where.split(' ')[0];
+}
+
+/**
+ * Self time (µs) by function+file and by area, counting only the ticks between `fromUs` and `toUs`
+ * (the measured load run, not start-up or warm-up). Idle ticks are left out of the totals.
+ */
+export function selfTimes(file, fromUs = -Infinity, toUs = Infinity) {
+	const profile = JSON.parse(readFileSync(file, 'utf8'));
+	const frames = new Map(profile.nodes.map((n) => [n.id, n.callFrame]));
+	const byFunction = new Map();
+	const byArea = new Map();
+	let at = profile.startTime;
+	let total = 0;
+	for (let i = 0; i < profile.samples.length; i++) {
+		at += profile.timeDeltas[i];
+		// A tick's time is the gap until the next tick.
+		const spent = profile.timeDeltas[i + 1] ?? 0;
+		if (at < fromUs || at > toUs) continue;
+		const frame = frames.get(profile.samples[i]);
+		const name = frame.functionName || '(anonymous)';
+		if (name === '(idle)') continue;
+		const where = place(frame.url);
+		const key = `${name}\t${where}`;
+		byFunction.set(key, (byFunction.get(key) ?? 0) + spent);
+		const group = area(name, where);
+		byArea.set(group, (byArea.get(group) ?? 0) + spent);
+		total += spent;
+	}
+	const sorted = (map) => [...map].sort((a, b) => b[1] - a[1]);
+	return { total, byFunction: sorted(byFunction), byArea: sorted(byArea) };
+}
