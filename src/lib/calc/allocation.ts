@@ -51,9 +51,10 @@ export function allocate(
 	// Loops rather than map/forEach/spread: once per billing period over every device (see apportionMoney).
 	const { tierRates, demand, ridersPerKwh, taxRate } = input;
 	const others = input.otherExact ?? [];
-	const kwhs: number[] = [];
-	const costs: number[] = [];
-	for (const device of devices) {
+	const kwhs = new Float64Array(devices.length);
+	const costs = new Float64Array(devices.length + others.length);
+	for (let d = 0; d < devices.length; d++) {
+		const device = devices[d]!;
 		const extraKw = device.runKw - device.standbyKw;
 		const kwh = loadKwh(device, usage);
 		let cost = kwh * ridersPerKwh;
@@ -67,10 +68,10 @@ export function allocate(
 			if (!charge.peak || charge.peak.kw <= 0 || mayRun == null) continue;
 			cost += (charge.amount * (device.standbyKw + mayRun * extraKw)) / charge.peak.kw;
 		}
-		kwhs.push(kwh);
-		costs.push(cost * (1 + taxRate));
+		kwhs[d] = kwh;
+		costs[d] = cost * (1 + taxRate);
 	}
-	for (const other of others) costs.push(other);
+	costs.set(others, devices.length);
 	const cents = apportionMoney(costs, input.devicesTotal);
 	const shares: Array<{ kwh: number; cost: number }> = [];
 	for (let i = 0; i < kwhs.length; i++) shares.push({ kwh: kwhs[i]!, cost: cents[i] ?? 0 });

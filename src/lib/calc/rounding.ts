@@ -23,7 +23,7 @@ export function roundMoney(amount: number): number {
  * that is exactly zero stays zero. Example: 3.333…, 3.333…, 3.333… to 10.00 → 3.34, 3.33, 3.33.
  * When every share is zero there is nothing to spread over, and each stays zero.
  */
-export function apportionMoney(exact: readonly number[], total: number): number[] {
+export function apportionMoney(exact: ArrayLike<number>, total: number): number[] {
 	// Plain loops over indices: this runs once per billing period over every device (1,200 shares for
 	// 100 devices over a year), and the per-share objects and closures it used to make were a
 	// measurable share of a calculation request's garbage. Sums run in the same order as before.
@@ -42,7 +42,7 @@ export function apportionMoney(exact: readonly number[], total: number): number[
 		return cents;
 	}
 	const gapCents = totalCents - exactCents;
-	const lost: number[] = [];
+	const lost = new Float64Array(n);
 	const order: number[] = [];
 	let left = totalCents;
 	for (let i = 0; i < n; i++) {
@@ -50,7 +50,7 @@ export function apportionMoney(exact: readonly number[], total: number): number[
 		const quota = amount * 100 + (gapCents * Math.abs(amount)) / weight;
 		const cut = Math.floor(quota);
 		cents.push(cut);
-		lost.push(quota - cut);
+		lost[i] = quota - cut;
 		left -= cut; // whole numbers: the same as subtracting their sum
 		if (Math.abs(amount) > 0) order.push(i);
 	}
