@@ -21,13 +21,46 @@ function area(name, where) {
 }
 
 /**
- * Self time (µs) by function+file and by area, counting only the ticks between `fromUs` and `toUs`
+ * The steps of a calculation request, each named by the outermost function of the step found on a
+ * tick's stack (function name, and where it lives). Ticks in none of them are the framework's and
+ * Node's own: HTTP parsing, streams, SvelteKit's handling, the hooks.
+ */
+const STEPS = [
+	[
+		'rate limit (its keys hashed with WebCrypto)',
+		/^_?isLimited\t|\tnode:internal\/crypto|webcrypto|js_transferable/
+	],
+	['session (Auth.js reader)', /^auth\t.*auth\.js/],
+	['session (live check, database)', /^liveSessionUser\t|node_modules\/(drizzle-orm|postgres)\//],
+	['reading the body (and JSON.parse)', /^readJsonBody\t/],
+	['validation (zod)', /^parseRequest\t/],
+	['calculation core', /^calculateAcrossVersions\t/],
+	['encoding the answer (JSON.stringify)', /^jsonBody\t/]
+];
+
+/** The step a tick belongs to: garbage collection, the outermost step on its stack, or "the rest". */
+function stepOf(frames, parent, id) {
+	if (frames.get(id).functionName === '(garbage collector)') return 'garbage collection';
+	let step = 'framework and Node (HTTP, streams, SvelteKit, hooks)';
+	for (let at = id; at !== undefined; at = parent.get(at)) {
+		const frame = frames.get(at);
+		const key = `${frame.functionName}\t${frame.url}`;
+		const found = STEPS.find(([, pattern]) => pattern.test(key));
+		if (found) step = found[0];
+	}
+	return step;
+}
+
+/**
+ * Self time (µs) by function+file, by area and by step, counting only the ticks between `fromUs` and `toUs`
  * (the measured load run, not start-up or warm-up). Idle ticks are left out of the totals.
  */
 export function selfTimes(file, fromUs = -Infinity, toUs = Infinity) {
 	const profile = JSON.parse(readFileSync(file, 'utf8'));
 	const frames = new Map(profile.nodes.map((n) => [n.id, n.callFrame]));
+	const parent = new Map(profile.nodes.flatMap((n) => (n.children ?? []).map((child) => [child, n.id])));
 	const byFunction = new Map();
+	const byStep = new Map();
 	const byArea = new Map();
 	let at = profile.startTime;
 	let total = 0;
@@ -44,8 +77,10 @@ export function selfTimes(file, fromUs = -Infinity, toUs = Infinity) {
 		byFunction.set(key, (byFunction.get(key) ?? 0) + spent);
 		const group = area(name, where);
 		byArea.set(group, (byArea.get(group) ?? 0) + spent);
+		const step = stepOf(frames, parent, profile.samples[i]);
+		byStep.set(step, (byStep.get(step) ?? 0) + spent);
 		total += spent;
 	}
 	const sorted = (map) => [...map].sort((a, b) => b[1] - a[1]);
-	return { total, byFunction: sorted(byFunction), byArea: sorted(byArea) };
+	return { total, byFunction: sorted(byFunction), byArea: sorted(byArea), byStep: sorted(byStep) };
 }

@@ -110,7 +110,7 @@ async function main() {
 	if (process.env.PROFILE_OUT) copyFileSync(profilePath, process.env.PROFILE_OUT);
 
 	const requests = result.requests.total;
-	const { total, byFunction, byArea } = selfTimes(profilePath, fromUs, toUs);
+	const { total, byFunction, byArea, byStep } = selfTimes(profilePath, fromUs, toUs);
 	console.log(
 		`\n${AS}: ${requests} requests (${result['2xx']} 2xx, ${result.non2xx} other, ${result.errors} errors)`
 	);
@@ -124,6 +124,11 @@ async function main() {
 		const [name, where] = key.split('\t');
 		console.log(`| ${share(us)} | ${Math.round(us / requests)} | ${name} | ${where} |`);
 	}
+	// The profile's ticks are wall time while the process runs; the CPU column scales them to /proc's figure.
+	const cpuPerUs = (cpuAfter - cpuBefore) / (total / 1000);
+	console.log('\n| step | share | CPU ms per request |\n|---|---|---|');
+	for (const [name, us] of byStep)
+		console.log(`| ${name} | ${share(us)} | ${round((us / 1000 / requests) * cpuPerUs)} |`);
 	console.log('\n| self time | µs per request | package |\n|---|---|---|');
 	for (const [name, us] of byArea.slice(0, TOP))
 		console.log(`| ${share(us)} | ${Math.round(us / requests)} | ${name} |`);
