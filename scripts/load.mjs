@@ -4,12 +4,12 @@
 // demo data; the app runs on both cores (scripts/cluster.mjs). Prints requests per second and
 // p50/p95/p99 latency per route. All data is invented.
 import autocannon from 'autocannon';
-import { chmodSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { chmodSync, mkdtempSync, readFileSync } from 'node:fs';
 import { availableParallelism, tmpdir } from 'node:os';
 import { basename, join } from 'node:path';
-import { freePort, log, run, runOrThrow, startService, stopGroup } from './lib.mjs';
+import { freePort, log, runOrThrow, startService } from './lib.mjs';
 import { calculation, people, signIn } from './load-requests.mjs';
-import { migrateSeedAndStartStandIns, standInEnv } from './local-services.mjs';
+import { migrateSeedAndStartStandIns, runThenCleanUp, standInEnv } from './local-services.mjs';
 
 const SECONDS = Number(process.env.LOAD_SECONDS ?? 30);
 const CONNECTIONS = Number(process.env.LOAD_CONNECTIONS ?? 50);
@@ -109,15 +109,8 @@ async function main() {
 	return rows.every((r) => r.errors === 0) ? 0 : 1;
 }
 
-let code = 1;
-try {
-	code = await main();
-} catch (error) {
-	console.error(error);
-} finally {
-	for (const child of children) stopGroup(child);
-	if (pgEnv) await run('bash', ['scripts/pg.sh', 'drop'], { env: pgEnv, quiet: true });
-	rmSync(work, { recursive: true, force: true });
-	rmSync(join('.test-build', basename(work)), { recursive: true, force: true });
-}
-process.exit(code);
+await runThenCleanUp(main, {
+	children,
+	pgEnv: () => pgEnv,
+	folders: [work, join('.test-build', basename(work))]
+});

@@ -14,13 +14,13 @@
 // CPU time, not latency: other work on the machine does not inflate it. The load average is printed.
 import autocannon from 'autocannon';
 import { execFileSync } from 'node:child_process';
-import { chmodSync, copyFileSync, mkdtempSync, readdirSync, readFileSync, rmSync } from 'node:fs';
+import { chmodSync, copyFileSync, mkdtempSync, readdirSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { selfTimes } from './cpu-profile.mjs';
-import { freePort, log, run, runOrThrow, startService, stopGroup } from './lib.mjs';
+import { freePort, log, runOrThrow, startService } from './lib.mjs';
 import { calculation, signIn } from './load-requests.mjs';
-import { migrateSeedAndStartStandIns, standInEnv } from './local-services.mjs';
+import { migrateSeedAndStartStandIns, runThenCleanUp, standInEnv } from './local-services.mjs';
 
 const AS = process.argv[2] ?? 'anonymous';
 const SECONDS = Number(process.env.PROFILE_SECONDS ?? 10);
@@ -135,14 +135,4 @@ async function main() {
 	return result.non2xx + result.errors === 0 ? 0 : 1;
 }
 
-let code = 1;
-try {
-	code = await main();
-} catch (error) {
-	console.error(error);
-} finally {
-	for (const child of children) stopGroup(child);
-	if (pgEnv) await run('bash', ['scripts/pg.sh', 'drop'], { env: pgEnv, quiet: true });
-	rmSync(work, { recursive: true, force: true });
-}
-process.exit(code);
+await runThenCleanUp(main, { children, pgEnv: () => pgEnv, folders: [work] });
