@@ -1,6 +1,9 @@
 // Reads a V8 .cpuprofile (node --cpu-prof) into self time per function and per package, for
 // profile-request.mjs. The profile's format: nodes[] (id, callFrame), samples[] (a node id per tick) and
 // timeDeltas[] (µs since the tick before); startTime is µs on the monotonic clock process.hrtime reads.
+// Ticks are counted, not their time deltas: on a busy machine a delta also holds the time the process
+// waited for a core, which would be charged to whatever function happened to be running; a tick is
+// taken only while the process runs, so the count follows CPU time.
 import { readFileSync } from 'node:fs';
 import { root } from './lib.mjs';
 
@@ -52,8 +55,8 @@ function stepOf(frames, parent, id) {
 }
 
 /**
- * Self time (µs) by function+file, by area and by step, counting only the ticks between `fromUs` and `toUs`
- * (the measured load run, not start-up or warm-up). Idle ticks are left out of the totals.
+ * Ticks by function+file, by area and by step, counting only those between `fromUs` and `toUs` (the
+ * measured load run, not start-up or warm-up). Idle ticks are left out of the totals.
  */
 export function selfTimes(file, fromUs = -Infinity, toUs = Infinity) {
 	const profile = JSON.parse(readFileSync(file, 'utf8'));
@@ -66,8 +69,7 @@ export function selfTimes(file, fromUs = -Infinity, toUs = Infinity) {
 	let total = 0;
 	for (let i = 0; i < profile.samples.length; i++) {
 		at += profile.timeDeltas[i];
-		// A tick's time is the gap until the next tick.
-		const spent = profile.timeDeltas[i + 1] ?? 0;
+		const spent = 1;
 		if (at < fromUs || at > toUs) continue;
 		const frame = frames.get(profile.samples[i]);
 		const name = frame.functionName || '(anonymous)';

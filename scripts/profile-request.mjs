@@ -116,28 +116,25 @@ async function main() {
 	if (process.env.PROFILE_OUT) copyFileSync(profilePath, process.env.PROFILE_OUT);
 
 	const requests = result.requests.total;
+	const cpuPerRequest = (cpuAfter - cpuBefore) / requests;
 	const { total, byFunction, byArea, byStep } = selfTimes(profilePath, fromUs, toUs);
 	console.log(
 		`\n${AS}: ${requests} requests (${result['2xx']} 2xx, ${result.non2xx} other, ${result.errors} errors)`
 	);
-	console.log(`CPU per request (/proc/PID/stat): ${round((cpuAfter - cpuBefore) / requests)} ms`);
-	console.log(
-		`profiled (non-idle) per request: ${round(total / 1000 / requests)} ms; load average ${loadAfter}\n`
-	);
-	const share = (us) => `${round((100 * us) / total, 1)}%`;
+	console.log(`CPU per request (/proc/PID/stat): ${round(cpuPerRequest)} ms; load average ${loadAfter}`);
+	console.log(`${total} profile ticks; each entry's CPU is its share of them × the CPU per request\n`);
+	const share = (ticks) => `${round((100 * ticks) / total, 1)}%`;
+	const perRequestUs = (ticks) => Math.round((1000 * cpuPerRequest * ticks) / total);
 	console.log('| self time | µs per request | function | file |\n|---|---|---|---|');
-	for (const [key, us] of byFunction.slice(0, TOP)) {
+	for (const [key, ticks] of byFunction.slice(0, TOP)) {
 		const [name, where] = key.split('\t');
-		console.log(`| ${share(us)} | ${Math.round(us / requests)} | ${name} | ${where} |`);
+		console.log(`| ${share(ticks)} | ${perRequestUs(ticks)} | ${name} | ${where} |`);
 	}
-	// The profile's ticks are wall time while the process runs; the CPU column scales them to /proc's figure.
-	const cpuPerUs = (cpuAfter - cpuBefore) / (total / 1000);
-	console.log('\n| step | share | CPU ms per request |\n|---|---|---|');
-	for (const [name, us] of byStep)
-		console.log(`| ${name} | ${share(us)} | ${round((us / 1000 / requests) * cpuPerUs)} |`);
+	console.log('\n| step | share | µs per request |\n|---|---|---|');
+	for (const [name, ticks] of byStep) console.log(`| ${name} | ${share(ticks)} | ${perRequestUs(ticks)} |`);
 	console.log('\n| self time | µs per request | package |\n|---|---|---|');
-	for (const [name, us] of byArea.slice(0, TOP))
-		console.log(`| ${share(us)} | ${Math.round(us / requests)} | ${name} |`);
+	for (const [name, ticks] of byArea.slice(0, TOP))
+		console.log(`| ${share(ticks)} | ${perRequestUs(ticks)} | ${name} |`);
 	return result.non2xx + result.errors === 0 ? 0 : 1;
 }
 
