@@ -6,11 +6,12 @@
 // the app runs on both cores (scripts/cluster.mjs). Prints requests per second and p50/p95/p99 latency
 // per route. All data is invented.
 import autocannon from 'autocannon';
-import { chmodSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { chmodSync, mkdtempSync, readFileSync } from 'node:fs';
 import { availableParallelism, tmpdir } from 'node:os';
 import { basename, join } from 'node:path';
-import { freePort, log, run, runOrThrow, startService, stopGroup } from './lib.mjs';
-import { migrateSeedAndStartStandIns, standInEnv } from './local-services.mjs';
+import { freePort, log, runOrThrow, startService } from './lib.mjs';
+import { calculation, people, signIn } from './load-requests.mjs';
+import { migrateSeedAndStartStandIns, runThenCleanUp, standInEnv } from './local-services.mjs';
 
 const SECONDS = Number(process.env.LOAD_SECONDS ?? 30);
 const CONNECTIONS = Number(process.env.LOAD_CONNECTIONS ?? 50);
@@ -21,82 +22,7 @@ chmodSync(work, 0o755);
 const children = [];
 let pgEnv;
 
-const people = JSON.parse(readFileSync('data/demo-people.json', 'utf8'));
 const demoSites = JSON.parse(readFileSync('data/demo-sites.json', 'utf8'));
-
-/** The calculation body: 100 invented devices on an invented two-season time-of-use tariff. */
-function calculation() {
-	const kinds = [
-		{ type: 'always' },
-		{ type: 'hours', hoursPerDay: 12 },
-		{ type: 'windows', windows: [{ start: '06:00', end: '22:00' }] },
-		{ type: 'cycle', onMinutes: 15, offMinutes: 45 }
-	];
-	return {
-		period: { start: '2027-01', months: 12 },
-		timezone: 'America/Chicago',
-		holidays: { country: 'US', region: 'WI' },
-		tariff: {
-			currency: 'USD',
-			fixedCharges: [{ label: 'Customer charge (invented)', perMonth: 18 }],
-			energyCharges: [
-				{
-					label: 'Energy',
-					type: 'tou',
-					seasons: [
-						{
-							months: [6, 7, 8, 9],
-							periods: [
-								{
-									label: 'On-peak',
-									perKwh: 0.29,
-									days: 'weekdays',
-									windows: [{ start: '14:00', end: '19:00' }]
-								}
-							],
-							otherPerKwh: 0.1
-						},
-						{
-							months: [1, 2, 3, 4, 5, 10, 11, 12],
-							periods: [
-								{ label: 'Peak', perKwh: 0.21, days: 'all', windows: [{ start: '17:00', end: '20:00' }] }
-							],
-							otherPerKwh: 0.11
-						}
-					]
-				}
-			],
-			demandCharges: [{ label: 'Demand', perKw: 6.5, intervalMinutes: 15 }],
-			taxes: [{ label: 'Tax', percent: 5 }]
-		},
-		equipment: Array.from({ length: 100 }, (_, i) => ({
-			name: `Load test device ${i + 1}`,
-			category: 'water-pump',
-			quantity: 1 + (i % 3),
-			power: { watts: 40 + ((i * 53) % 1500) },
-			schedule: kinds[i % kinds.length]
-		}))
-	};
-}
-
-async function signIn(base, email) {
-	const res = await fetch(`${base}/signin?/password`, {
-		method: 'POST',
-		headers: {
-			origin: base,
-			'content-type': 'application/x-www-form-urlencoded',
-			'x-sveltekit-action': 'true'
-		},
-		body: new URLSearchParams({ email, password: people.password }),
-		redirect: 'manual'
-	});
-	const cookie = res.headers
-		.getSetCookie()
-		.map((c) => c.split(';')[0])
-		.find((c) => c.includes('session-token'));
-	if (!cookie) throw new Error(`sign-in as ${email} failed (${res.status})`);
-	return cookie;
-}
 
 const quantile = (sorted, q) =>
 	Math.round((sorted[Math.min(sorted.length - 1, Math.floor(q * sorted.length))] ?? 0) * 10) / 10;
@@ -200,15 +126,8 @@ async function main() {
 	return rows.every((r) => r.errors === 0) ? 0 : 1;
 }
 
-let code = 1;
-try {
-	code = await main();
-} catch (error) {
-	console.error(error);
-} finally {
-	for (const child of children) stopGroup(child);
-	if (pgEnv) await run('bash', ['scripts/pg.sh', 'drop'], { env: pgEnv, quiet: true });
-	rmSync(work, { recursive: true, force: true });
-	rmSync(join('.test-build', basename(work)), { recursive: true, force: true });
-}
-process.exit(code);
+await runThenCleanUp(main, {
+	children,
+	pgEnv: () => pgEnv,
+	folders: [work, join('.test-build', basename(work))]
+});

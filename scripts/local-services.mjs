@@ -1,6 +1,7 @@
 // Shared by start.mjs, test.mjs and load.mjs: how the app meets its local stand-ins and its database, so the
 // three cannot drift apart.
-import { runOrThrow, startService, tsNode } from './lib.mjs';
+import { rmSync } from 'node:fs';
+import { run, runOrThrow, startService, stopGroup, tsNode } from './lib.mjs';
 
 /**
  * The environment that points the app at the e-mail catcher and the S3 stand-in (scripts/stand-ins.ts), on
@@ -29,4 +30,23 @@ export async function migrateSeedAndStartStandIns(env) {
 	await runOrThrow(...tsNode('scripts/migrate.ts'), { env });
 	await runOrThrow(...tsNode('scripts/seed.ts'), { env });
 	return startService('stand-ins', ...tsNode('scripts/stand-ins.ts'), { env, ready: /\[stand-ins\]/ });
+}
+
+/**
+ * Runs a script's `main` (resolving with its exit code), then stops the services it started, drops its
+ * throwaway PostgreSQL (`pgEnv()`, once main has made one) and removes its folders, and exits with
+ * main's code (1 when it threw).
+ */
+export async function runThenCleanUp(main, { children, pgEnv, folders }) {
+	let code = 1;
+	try {
+		code = await main();
+	} catch (error) {
+		console.error(error);
+	} finally {
+		for (const child of children) stopGroup(child);
+		if (pgEnv()) await run('bash', ['scripts/pg.sh', 'drop'], { env: pgEnv(), quiet: true });
+		for (const folder of folders) rmSync(folder, { recursive: true, force: true });
+	}
+	process.exit(code);
 }

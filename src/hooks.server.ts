@@ -5,6 +5,7 @@ import { apiJsonErrors } from '$lib/server/http/api-errors';
 import { authHandle } from '$lib/server/auth';
 import { onlyPublicAuthDoors } from '$lib/server/auth/public-doors';
 import {
+	carriesSessionCookie,
 	dropSessionCookie,
 	rememberSession,
 	sessionToken,
@@ -18,15 +19,15 @@ import { withSecurityHeaders } from '$lib/server/security-headers';
 import { unavailableResponse } from '$lib/server/http/unavailable';
 
 /** Resolves the signed-in user once; every load, action and endpoint reads `locals.user`. The user row
- * and the session's own row (`auth/sessions.ts`) are read together on every request, so a deleted
- * account, a changed admin flag or an ended session (sign-out, "sign out everywhere", a password reset)
- * takes effect at once. */
+ * and the session's own row (`auth/sessions.ts`) are read together on every request that carries a
+ * session cookie, so a deleted account, a changed admin flag or an ended session (sign-out, "sign out
+ * everywhere", a password reset) takes effect at once. A request without one is anonymous at no cost. */
 const resolveUser: Handle = async ({ event, resolve }) => {
 	event.locals.user = null;
 	event.locals.sessionId = null;
 	const token = sessionToken(event.cookies);
 	let session = verifiedSession(token);
-	if (!session) {
+	if (!session && carriesSessionCookie(event.cookies)) {
 		const auth = await event.locals.auth();
 		// A token from before sessions were recorded has no sid: it is treated as ended.
 		if (auth?.user?.id && auth.sid) {

@@ -48,25 +48,32 @@ export function allocate(
 	usage: SpanUsage,
 	input: AllocationInput
 ): { devices: Array<{ kwh: number; cost: number }>; others: number[] } {
-	const exact = devices.map((device) => {
+	// Loops rather than map/forEach/spread: once per billing period over every device (see apportionMoney).
+	const { tierRates, demand, ridersPerKwh, taxRate } = input;
+	const others = input.otherExact ?? [];
+	const kwhs = new Float64Array(devices.length);
+	const costs = new Float64Array(devices.length + others.length);
+	for (let d = 0; d < devices.length; d++) {
+		const device = devices[d]!;
 		const extraKw = device.runKw - device.standbyKw;
 		const kwh = loadKwh(device, usage);
-		let cost = kwh * input.ridersPerKwh;
-		input.tierRates.forEach((tierRate, e) => {
+		let cost = kwh * ridersPerKwh;
+		for (let e = 0; e < tierRates.length; e++) {
+			const tierRate = tierRates[e]!;
 			const share = loadWeighted(device, usage, e);
 			cost += tierRate === null ? share : share * tierRate;
-		});
-		for (const charge of input.demand) {
+		}
+		for (const charge of demand) {
 			const mayRun = charge.mayRun[device.group];
 			if (!charge.peak || charge.peak.kw <= 0 || mayRun == null) continue;
 			cost += (charge.amount * (device.standbyKw + mayRun * extraKw)) / charge.peak.kw;
 		}
-		return { kwh, cost: cost * (1 + input.taxRate) };
-	});
-	const others = input.otherExact ?? [];
-	const cents = apportionMoney([...exact.map((share) => share.cost), ...others], input.devicesTotal);
-	return {
-		devices: exact.map((share, i) => ({ kwh: share.kwh, cost: cents[i] ?? 0 })),
-		others: others.map((_, i) => cents[exact.length + i] ?? 0)
-	};
+		kwhs[d] = kwh;
+		costs[d] = cost * (1 + taxRate);
+	}
+	costs.set(others, devices.length);
+	const cents = apportionMoney(costs, input.devicesTotal);
+	const shares: Array<{ kwh: number; cost: number }> = [];
+	for (let i = 0; i < kwhs.length; i++) shares.push({ kwh: kwhs[i]!, cost: cents[i] ?? 0 });
+	return { devices: shares, others: others.map((_, i) => cents[kwhs.length + i] ?? 0) };
 }

@@ -94,10 +94,9 @@ export function pricePeriod(
 		});
 		// What the loads' shares leave of the total; it differs from the rounded shared cost only when no
 		// load used anything, and then the shared cost takes the whole bill.
-		const deviceCents = [...shares.map((share) => share.cost), ...others].reduce(
-			(total, cost) => total + Math.round(cost * 100),
-			0
-		);
+		let deviceCents = 0;
+		for (const share of shares) deviceCents += Math.round(share.cost * 100);
+		for (const cost of others) deviceCents += Math.round(cost * 100);
 		return {
 			label: span.label,
 			from: span.from,
@@ -111,7 +110,8 @@ export function pricePeriod(
 			sharedCost: roundMoney(lines.total - deviceCents / 100),
 			equipment: request.equipment.map((device, i) => ({
 				name: device.name,
-				...(shares[i] ?? { kwh: 0, cost: 0 })
+				kwh: shares[i]?.kwh ?? 0,
+				cost: shares[i]?.cost ?? 0
 			})),
 			...(meter ? { meter: { kwh: meterKwh, cost: others[0] ?? 0 } } : {})
 		};

@@ -26,6 +26,17 @@ export function sessionToken(cookies: Cookies): string | undefined {
 	return undefined;
 }
 
+/**
+ * Whether the request carries an Auth.js session cookie at all, whole or split (`.0`, `.1`…). Without
+ * one there is no session to read: Auth.js is not asked (its reader costs about a tenth of a
+ * millisecond even then), and the request is anonymous.
+ */
+export function carriesSessionCookie(cookies: Cookies): boolean {
+	return cookies
+		.getAll()
+		.some(({ name }) => NAMES.some((session) => name === session || name.startsWith(`${session}.`)));
+}
+
 export const verifiedSession = (token: string | undefined) => (token ? verified.get(token) : undefined);
 
 /** Remembers the token the request came with and the renewed one Auth.js set on the response. */
