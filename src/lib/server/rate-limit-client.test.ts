@@ -3,7 +3,7 @@ import { readdirSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { RateLimiter } from 'sveltekit-rate-limiter/server';
 import { describe, expect, it } from 'vitest';
-import { clientId, PerClient } from './rate-limit-client';
+import { clientId, keyHash, PerClient } from './rate-limit-client';
 
 const request = (userAgent?: string) =>
 	({
@@ -37,5 +37,14 @@ describe('rate limits per client (IP + User-Agent)', () => {
 			);
 		const offenders = files('src').filter((file) => /\bIPUA\s*:/.test(readFileSync(file, 'utf8')));
 		expect(offenders).toEqual([]);
+	});
+
+	it("hashes keys as the library's own WebCrypto SHA-256 does, so stored counts keep their keys", async () => {
+		const key = clientId(request('Mozilla/5.0 (test)'));
+		const digest = await crypto.subtle.digest('SHA-256', new TextEncoder().encode(key));
+		const hex = [...new Uint8Array(digest)].map((b) => b.toString(16).padStart(2, '0')).join('');
+		expect(keyHash(key)).toBe(hex);
+		// The SHA-256 of "abc" (FIPS 180-2, appendix B.1).
+		expect(keyHash('abc')).toBe('ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad');
 	});
 });

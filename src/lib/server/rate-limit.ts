@@ -1,8 +1,7 @@
 import type { RequestEvent } from '@sveltejs/kit';
-import { createHash } from 'node:crypto';
 import { RateLimiter, type RateLimiterPlugin } from 'sveltekit-rate-limiter/server';
 import { client } from './db';
-import { clientId, PerClient } from './rate-limit-client';
+import { clientId, keyHash, PerClient } from './rate-limit-client';
 import { PostgresStore, sweepNowAndThen } from './rate-limit-store';
 
 /** Limits attempts per address as well as per client, so guessing one account's password from many IPs is slow too. */
@@ -25,12 +24,12 @@ class PerAddress implements RateLimiterPlugin<string> {
 const signInFailures = new RateLimiter<string>({
 	IP: [120, '15m'],
 	plugins: [new PerAddress([9, '15m']), new PerClient<string>([60, '15m'])],
-	store: new PostgresStore('sign-in')
+	store: new PostgresStore('sign-in'),
+	hashFunction: keyHash
 });
 
 /** The sign_in_lock keys of an attempt: its address and its client, hashed (no e-mail or IP in clear). */
-const lockKeys = (event: RequestEvent, email: string) =>
-	[`addr:${email}`, clientId(event)].map((key) => createHash('sha256').update(key).digest('hex'));
+const lockKeys = (event: RequestEvent, email: string) => [`addr:${email}`, clientId(event)].map(keyHash);
 
 /** Whether the address or the client is locked, in any app process (one indexed read). */
 export async function signInLocked(event: RequestEvent, email: string): Promise<boolean> {
@@ -53,15 +52,21 @@ export async function recordSignInFailure(event: RequestEvent, email: string): P
 export const signUpLimiter = new RateLimiter({
 	IP: [20, 'h'],
 	plugins: [new PerClient([10, 'h'])],
-	store: new PostgresStore('sign-up')
+	store: new PostgresStore('sign-up'),
+	hashFunction: keyHash
 });
 
 export const mailLinkLimiter = new RateLimiter<string>({
 	IP: [30, 'h'],
 	plugins: [new PerAddress([5, '15m'])],
-	store: new PostgresStore('mail-link')
+	store: new PostgresStore('mail-link'),
+	hashFunction: keyHash
 });
 
-export const inviteLimiter = new RateLimiter({ IP: [60, 'h'], store: new PostgresStore('invite') });
+export const inviteLimiter = new RateLimiter({
+	IP: [60, 'h'],
+	store: new PostgresStore('invite'),
+	hashFunction: keyHash
+});
 
 export const TOO_MANY = 'Too many attempts. Wait a few minutes, then try again.';

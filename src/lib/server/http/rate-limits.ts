@@ -2,7 +2,7 @@
 import { json, type RequestEvent } from '@sveltejs/kit';
 import { RateLimiter } from 'sveltekit-rate-limiter/server';
 import { env } from '$env/dynamic/private';
-import { PerClient, PerUser } from '../rate-limit-client';
+import { keyHash, PerClient, PerUser } from '../rate-limit-client';
 import { BatchedBudgetStore } from '../rate-limit-budget';
 
 // These budgets are shared by every app process through PostgreSQL, batched (rate-limit-budget.ts): no
@@ -14,12 +14,14 @@ import { BatchedBudgetStore } from '../rate-limit-budget';
 const anonymousLimiter = new RateLimiter({
 	IP: [120, 'm'],
 	plugins: [new PerClient([60, 'm'])],
-	store: new BatchedBudgetStore('api-anonymous', { syncAt: 10 })
+	store: new BatchedBudgetStore('api-anonymous', { syncAt: 10 }),
+	hashFunction: keyHash
 });
 // MEMBER_REQUESTS_PER_MINUTE lifts the members' budget for a load test on loopback (npm run load).
 const memberLimiter = new RateLimiter({
 	IP: [Number(env.MEMBER_REQUESTS_PER_MINUTE ?? 600), 'm'],
-	store: new BatchedBudgetStore('api-member', { syncAt: 32 })
+	store: new BatchedBudgetStore('api-member', { syncAt: 32 }),
+	hashFunction: keyHash
 });
 
 // "Which tariff is cheapest?" prices a whole year on up to 100 tariffs (the page, its report and its
@@ -27,7 +29,8 @@ const memberLimiter = new RateLimiter({
 const comparisonLimiter = new RateLimiter({
 	IP: [240, 'm'],
 	plugins: [new PerUser([60, 'm'])],
-	store: new BatchedBudgetStore('which-tariff', { syncAt: 10 })
+	store: new BatchedBudgetStore('which-tariff', { syncAt: 10 }),
+	hashFunction: keyHash
 });
 
 /** Whether the caller has spent the which-tariff budget (each page, report or workbook counts once). */
