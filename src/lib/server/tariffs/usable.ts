@@ -1,5 +1,8 @@
 // The one rule for which tariff a site may use, asked where a tariff is chosen and again where it is used.
-import { findTariff, type TariffRow } from '$lib/server/tariffs/tariff.service';
+import { inArray } from 'drizzle-orm';
+import { db } from '$lib/server/db';
+import { tariffs } from '$lib/server/db/schema';
+import { findTariff, withVersions, type TariffRow } from '$lib/server/tariffs/tariff.service';
 
 /** What pricing, comparisons and exports say instead of anything about a tariff the site may not use. */
 export const TARIFF_UNAVAILABLE = "This site's tariff is not available to this workspace";
@@ -64,4 +67,15 @@ export async function tariffChoiceProblem(
 	if (choice.tariffVersion !== null && !found.versions.some((v) => v.number === choice.tariffVersion))
 		return { field: 'tariffVersion', message: `That tariff has no version ${choice.tariffVersion}` };
 	return null;
+}
+
+/**
+ * The tariffs of `ids` with their versions that sites of `workspaceId` may use, by id, in two queries
+ * however many there are (a list of sites prices on them all).
+ */
+export async function usableTariffs(workspaceId: string, ids: string[]) {
+	const unique = [...new Set(ids)];
+	const rows = unique.length ? await db.select().from(tariffs).where(inArray(tariffs.id, unique)) : [];
+	const found = await withVersions(rows.filter((row) => tariffUsableBy(workspaceId, row)));
+	return new Map(found.map((entry) => [entry.tariff.id, entry]));
 }
