@@ -4,7 +4,7 @@ import { and, eq, inArray, isNull } from 'drizzle-orm';
 import { db } from '../db';
 import { scenarios } from '../db/schema';
 import { listSites } from './site.service';
-import { storedSummaries } from './stored-results';
+import { storedSummaries } from './stored-summaries';
 
 /** Every live site of the workspace, by name, with its baseline's year of `now` (UTC) from stored results. */
 export async function dashboardRows(workspaceId: string, now: Date) {

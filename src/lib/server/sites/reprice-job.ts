@@ -7,7 +7,7 @@ import { defineJob } from '../jobs';
 import { logger } from '../log';
 import type { ScenarioRow } from './scenario.service';
 import type { SiteRow } from './site.service';
-import { storedSummaries } from './stored-results';
+import { storedSummaries } from './stored-summaries';
 
 /** At most this many baselines a job: a bounded run; the rest are priced on their next read. */
 export const REPRICE_LIMIT = 500;

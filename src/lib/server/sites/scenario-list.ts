@@ -3,7 +3,7 @@ import { needsElectricalCaution } from '$lib/cautions';
 import { listDevices } from './equipment.service';
 import { UNDO_MS, type ScenarioRow } from './scenario.service';
 import type { SiteRow } from './site.service';
-import { storedSummaries } from './stored-results';
+import { storedSummaries } from './stored-summaries';
 
 /**
  * Every scenario still shown (a deleted one while it can be restored), each with its device count, the

@@ -1,12 +1,12 @@
 // A stored scenario's priced result, kept in PostgreSQL (`priced_result`) under the key of everything it
 // depends on (stored-key.ts) and priced again only when that key changes. Only a stored scenario's own
 // devices are priced through here: an edited list not yet saved goes to priceScenario directly.
-import { and, eq, inArray } from 'drizzle-orm';
+import { and, eq, sql } from 'drizzle-orm';
 import { needsElectricalCaution } from '$lib/cautions';
 import { db } from '../db';
 import { devices, pricedResults, type DeviceSpec } from '../db/schema';
 import { logger } from '../log';
-import { usableTariff, usableTariffs } from '../tariffs/usable';
+import { usableTariff } from '../tariffs/usable';
 import { priceScenario, type Priced, type UsableTariff } from './results.service';
 import type { ScenarioRow } from './scenario.service';
 import type { SiteRow } from './site.service';
@@ -37,10 +37,10 @@ const summaryOf = ({ result, note }: PricedOk, specs: DeviceSpec[]): PricedSumma
 });
 
 /** The tariff id a scenario is priced on: its own override, else the site's. */
-const tariffIdOf = (site: SiteRow, scenario: ScenarioRow) => scenario.tariffId ?? site.tariffId;
+export const tariffIdOf = (site: SiteRow, scenario: ScenarioRow) => scenario.tariffId ?? site.tariffId;
 
 /** The key and its words for a scenario on a loaded tariff; null when there is nothing to key (no tariff). */
-function keyOf(
+export function keyOf(
 	site: SiteRow,
 	scenario: ScenarioRow,
 	tariff: UsableTariff,
@@ -52,36 +52,59 @@ function keyOf(
 	return { words, key: hashOf(words) };
 }
 
-/** Stores an `ok` result in its slot, replacing what the slot held; a failed write only costs a recompute. */
-async function store(
+export type StoredRow = typeof pricedResults.$inferInsert;
+
+/** The row that stores an `ok` result in its slot under its key. */
+function rowOf(
 	scenarioId: string,
 	slot: string,
 	keyed: NonNullable<ReturnType<typeof keyOf>>,
-	priced: PricedOk,
+	{ ok: _ok, ...result }: PricedOk,
 	summary: PricedSummary
-) {
-	const { ok: _ok, ...result } = priced;
-	const row = {
+): StoredRow {
+	const rulesVersion = currentRulesVersion();
+	const at = new Date();
+	return {
+		scenarioId,
+		slot,
 		inputKey: keyed.key,
-		rulesVersion: currentRulesVersion(),
+		rulesVersion,
 		dependsOn: keyed.words,
 		result,
 		summary,
-		computedAt: new Date()
+		computedAt: at
 	};
+}
+
+/**
+ * Stores rows in one statement, each replacing what its slot held. A failed write costs only a recompute
+ * on the next read (a scenario purged meanwhile, say): the figures answered are right either way.
+ */
+export async function store(rows: StoredRow[]) {
+	if (rows.length === 0) return;
+	const fresh = (column: string) => sql.raw(`excluded.${column}`);
 	try {
 		await db
 			.insert(pricedResults)
-			.values({ scenarioId, slot, ...row })
-			.onConflictDoUpdate({ target: [pricedResults.scenarioId, pricedResults.slot], set: row });
+			.values(rows)
+			.onConflictDoUpdate({
+				target: [pricedResults.scenarioId, pricedResults.slot],
+				set: {
+					inputKey: fresh('input_key'),
+					rulesVersion: fresh('rules_version'),
+					dependsOn: fresh('depends_on'),
+					result: fresh('result'),
+					summary: fresh('summary'),
+					computedAt: fresh('computed_at')
+				}
+			});
 	} catch (error) {
-		// The scenario may have been purged meanwhile: the figure is still right for this answer.
-		logger.warn({ err: error, scenarioId, slot }, 'stored result not saved');
+		logger.warn({ err: error, slots: rows.length }, 'stored results not saved');
 	}
 }
 
-/** Prices a scenario on a loaded tariff and stores an `ok` answer under its key. */
-async function priceAndStore(
+/** Prices a scenario on a loaded tariff; an `ok` answer comes with the row that stores it under its key. */
+export async function priceForStore(
 	site: SiteRow,
 	scenario: ScenarioRow,
 	period: PricedPeriod,
@@ -92,9 +115,11 @@ async function priceAndStore(
 	const keyed = keyOf(site, scenario, tariff, period, pinVersion);
 	const priced = await priceScenario(site, scenario, specs, period, pinVersion, tariff);
 	const summary = priced.ok ? summaryOf(priced, specs) : null;
-	if (keyed && priced.ok && summary)
-		await store(scenario.id, slotOf(period, pinVersion), keyed, priced, summary);
-	return { priced, summary };
+	const row =
+		keyed && priced.ok && summary
+			? rowOf(scenario.id, slotOf(period, pinVersion), keyed, priced, summary)
+			: null;
+	return { priced, summary, row };
 }
 
 const specsOf = async (scenarioId: string) =>
@@ -128,80 +153,8 @@ export async function storedPrice(
 			);
 		if (row?.inputKey === keyed.key) return { ok: true, ...(row.result as Omit<PricedOk, 'ok'>) };
 	}
-	return (await priceAndStore(site, scenario, period, tariff, await specsOf(scenario.id), pinVersion)).priced;
-}
-
-/**
- * Summaries of many stored scenarios (of one workspace's sites) over one period, by scenario id, in a fixed
- * number of queries however many there are: their tariffs, their stored summaries, and the devices of the
- * ones not stored under their current key, which are priced and stored now.
- */
-export async function storedSummaries(
-	workspaceId: string,
-	entries: { site: SiteRow; scenario: ScenarioRow }[],
-	period: PricedPeriod
-): Promise<Map<string, SummaryOrProblem>> {
-	const slot = slotOf(period);
-	const ids = entries.map((e) => e.scenario.id);
-	const tariffIds = entries.map((e) => tariffIdOf(e.site, e.scenario)).filter((id) => id !== null);
-	const [tariffs, rows] = await Promise.all([
-		usableTariffs(workspaceId, tariffIds),
-		ids.length
-			? db
-					.select({
-						scenarioId: pricedResults.scenarioId,
-						inputKey: pricedResults.inputKey,
-						summary: pricedResults.summary
-					})
-					.from(pricedResults)
-					.where(and(inArray(pricedResults.scenarioId, ids), eq(pricedResults.slot, slot)))
-			: []
-	]);
-	const stored = new Map(rows.map((r) => [r.scenarioId, r]));
-	const out = new Map<string, SummaryOrProblem>();
-	const misses: typeof entries = [];
-	for (const entry of entries) {
-		const id = tariffIdOf(entry.site, entry.scenario);
-		const keyed = keyOf(entry.site, entry.scenario, (id && tariffs.get(id)) || null, period);
-		const row = stored.get(entry.scenario.id);
-		if (keyed && row?.inputKey === keyed.key)
-			out.set(entry.scenario.id, { ok: true, summary: row.summary as PricedSummary });
-		else misses.push(entry);
-	}
-	if (misses.length === 0) return out;
-	const specs = new Map<string, DeviceSpec[]>();
-	const found = await db
-		.select({ scenarioId: devices.scenarioId, spec: devices.spec })
-		.from(devices)
-		.where(
-			inArray(
-				devices.scenarioId,
-				misses.map((m) => m.scenario.id)
-			)
-		)
-		.orderBy(devices.position);
-	for (const d of found) {
-		const list = specs.get(d.scenarioId);
-		if (list) list.push(d.spec);
-		else specs.set(d.scenarioId, [d.spec]);
-	}
-	for (const { site, scenario } of misses) {
-		const list = specs.get(scenario.id) ?? [];
-		const id = tariffIdOf(site, scenario);
-		// Unknown or not usable: priceScenario's own refusal names it (null stands for "read, and not found").
-		const tariff = id ? (tariffs.get(id) ?? null) : null;
-		const { priced, summary } = await priceAndStore(site, scenario, period, tariff, list);
-		out.set(
-			scenario.id,
-			priced.ok && summary
-				? { ok: true, summary }
-				: {
-						ok: false,
-						message: priced.ok ? '' : priced.message,
-						deviceCount: list.length,
-						caution: needsElectricalCaution(list)
-					}
-		);
-	}
-	return out;
+	const specs = await specsOf(scenario.id);
+	const { priced, row } = await priceForStore(site, scenario, period, tariff, specs, pinVersion);
+	if (row) await store([row]);
+	return priced;
 }
