@@ -305,8 +305,8 @@ describe('the dashboard', () => {
 		const warm = [await statements(few), await statements(many)];
 		expect(cold[1]).toBe(cold[0]);
 		expect(warm[1]).toBe(warm[0]);
-		// Warm: no devices read and nothing written.
-		expect(warm[0]).toBe(cold[0]! - 2);
+		// Warm: no rates or devices read (three queries) and nothing written.
+		expect(warm[0]).toBe(cold[0]! - 4);
 		const rows = await db
 			.select()
 			.from(pricedResults)

@@ -10,7 +10,14 @@ import { usableTariff } from '../tariffs/usable';
 import { priceScenario, type Priced, type UsableTariff } from './results.service';
 import type { ScenarioRow } from './scenario.service';
 import type { SiteRow } from './site.service';
-import { currentRulesVersion, dependsOn, hashOf, slotOf, type PricedPeriod } from './stored-key';
+import {
+	currentRulesVersion,
+	dependsOn,
+	hashOf,
+	slotOf,
+	type KeyInputs,
+	type PricedPeriod
+} from './stored-key';
 
 type PricedOk = Extract<Priced, { ok: true }>;
 
@@ -43,7 +50,7 @@ export const tariffIdOf = (site: SiteRow, scenario: ScenarioRow) => scenario.tar
 export function keyOf(
 	site: SiteRow,
 	scenario: ScenarioRow,
-	tariff: UsableTariff,
+	tariff: KeyInputs['tariff'] | null,
 	period: PricedPeriod,
 	pinVersion?: number
 ) {

@@ -4,8 +4,7 @@ import { and, eq, inArray } from 'drizzle-orm';
 import { needsElectricalCaution } from '$lib/cautions';
 import { db } from '../db';
 import { devices, pricedResults, type DeviceSpec } from '../db/schema';
-import { usableTariffs } from '../tariffs/usable';
-import type { UsableTariff } from './results.service';
+import { usableTariffKeys, usableTariffs } from '../tariffs/usable';
 import type { ScenarioRow } from './scenario.service';
 import type { SiteRow } from './site.service';
 import { slotOf, type PricedPeriod } from './stored-key';
@@ -33,7 +32,7 @@ export async function storedSummaries(
 	const ids = entries.map((e) => e.scenario.id);
 	const tariffIds = entries.map((e) => tariffIdOf(e.site, e.scenario)).filter((id) => id !== null);
 	const [tariffs, storedRows] = await Promise.all([
-		usableTariffs(workspaceId, tariffIds),
+		usableTariffKeys(workspaceId, tariffIds),
 		ids.length
 			? db
 					.select({
@@ -56,17 +55,22 @@ export async function storedSummaries(
 			out.set(entry.scenario.id, { ok: true, summary: row.summary as PricedSummary });
 		else misses.push(entry);
 	}
-	if (misses.length) await priceMisses(misses, tariffs, period, out);
+	if (misses.length) await priceMisses(workspaceId, misses, period, out);
 	return out;
 }
 
-/** Prices the scenarios not stored under their current key (their devices read in one query) and stores them. */
+/**
+ * Prices the scenarios not stored under their current key and stores them: their tariffs with the rates
+ * and their devices are read here, in one query each.
+ */
 async function priceMisses(
+	workspaceId: string,
 	misses: { site: SiteRow; scenario: ScenarioRow }[],
-	tariffs: Map<string, NonNullable<UsableTariff>>,
 	period: PricedPeriod,
 	out: Map<string, SummaryOrProblem>
 ) {
+	const tariffIds = misses.map((m) => tariffIdOf(m.site, m.scenario)).filter((id) => id !== null);
+	const tariffs = await usableTariffs(workspaceId, tariffIds);
 	const specs = new Map<string, DeviceSpec[]>();
 	const found = await db
 		.select({ scenarioId: devices.scenarioId, spec: devices.spec })

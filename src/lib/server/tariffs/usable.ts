@@ -1,7 +1,7 @@
 // The one rule for which tariff a site may use, asked where a tariff is chosen and again where it is used.
 import { inArray } from 'drizzle-orm';
 import { db } from '$lib/server/db';
-import { tariffs } from '$lib/server/db/schema';
+import { tariffs, tariffVersions } from '$lib/server/db/schema';
 import { findTariff, withVersions, type TariffRow } from '$lib/server/tariffs/tariff.service';
 
 /** What pricing, comparisons and exports say instead of anything about a tariff the site may not use. */
@@ -78,4 +78,37 @@ export async function usableTariffs(workspaceId: string, ids: string[]) {
 	const rows = unique.length ? await db.select().from(tariffs).where(inArray(tariffs.id, unique)) : [];
 	const found = await withVersions(rows.filter((row) => tariffUsableBy(workspaceId, row)));
 	return new Map(found.map((entry) => [entry.tariff.id, entry]));
+}
+
+/**
+ * As `usableTariffs`, with each version's number and dates but not its rates: all a stored result's key
+ * needs, so a list read from stored results never loads the rates.
+ */
+export async function usableTariffKeys(workspaceId: string, ids: string[]) {
+	const unique = [...new Set(ids)];
+	const rows = unique.length ? await db.select().from(tariffs).where(inArray(tariffs.id, unique)) : [];
+	const usable = rows.filter((row) => tariffUsableBy(workspaceId, row));
+	const versions = usable.length
+		? await db
+				.select({
+					id: tariffVersions.id,
+					tariffId: tariffVersions.tariffId,
+					number: tariffVersions.number,
+					effectiveFrom: tariffVersions.effectiveFrom,
+					effectiveTo: tariffVersions.effectiveTo
+				})
+				.from(tariffVersions)
+				.where(
+					inArray(
+						tariffVersions.tariffId,
+						usable.map((t) => t.id)
+					)
+				)
+		: [];
+	return new Map(
+		usable.map((tariff) => [
+			tariff.id,
+			{ tariff, versions: versions.filter((v) => v.tariffId === tariff.id) }
+		])
+	);
 }
