@@ -8,6 +8,7 @@ import { listDevices, saveDevices } from '$lib/server/sites/equipment.service';
 import { priceScenario } from '$lib/server/sites/results.service';
 import { findScenario, listScenarios } from '$lib/server/sites/scenario.service';
 import { findSite, updateSite, type SiteRow } from '$lib/server/sites/site.service';
+import { repriceBaselines } from '$lib/server/sites/reprice-job';
 import { useRulesVersionForTest, yearSlot } from '$lib/server/sites/stored-key';
 import type { PricedSummary } from '$lib/server/sites/stored-results';
 import { createTariff, publishVersion } from '$lib/server/tariffs/tariff.service';
@@ -243,6 +244,23 @@ describe('a stored result', () => {
 		const again = (await storedRow())!;
 		expect(again.rulesVersion).toBe(RULES_VERSION + 1);
 		expect(again.inputKey).not.toBe(row.inputKey);
+	});
+
+	it('is priced ahead of the next view when its tariff gets a new version (the queued job)', async () => {
+		const meta = tariffMeta(`Invented Utility ${tag}`, 'First');
+		const row = (await storedRow())!;
+		await publishVersion(
+			tariffIds.first,
+			2,
+			{ meta, version: versionMeta('2022-01-01'), structure: touTariff(0.45) },
+			owner
+		);
+		await repriceBaselines(tariffIds.first);
+		const repriced = (await storedRow())!;
+		expect(repriced.inputKey).not.toBe(row.inputKey);
+		expect(await shown()).toEqual(await fresh());
+		// The view was a stored hit: the job had written the row it reads.
+		expect((await storedRow())!.computedAt).toEqual(repriced.computedAt);
 	});
 
 	it('is kept per year: next year’s dashboard prices that year', async () => {
