@@ -80,12 +80,17 @@ const pgEnv = { PGDATA: join(work, 'pg'), PGPORT: String(await freePort()) };
 const url = `postgres://postgres@127.0.0.1:${pgEnv.PGPORT}/runrate`;
 const env = { DATABASE_URL: url, AUTH_SECRET: 'bench-only-secret-not-for-production-0123456789' };
 Object.assign(process.env, env, { TZ: 'UTC', LOG_LEVEL: 'warn' });
+const drop = () => run('bash', ['scripts/pg.sh', 'drop'], { env: pgEnv, quiet: true });
+for (const signal of ['SIGINT', 'SIGTERM'] as const)
+	process.on(signal, () => void drop().then(() => process.exit(1)));
 try {
 	await runOrThrow('bash', ['scripts/pg.sh', 'start'], { env: pgEnv });
 	await runOrThrow(...tsNode('scripts/migrate.ts'), { env });
 	await runOrThrow(...tsNode('scripts/seed.ts'), { env });
 	const big = await generateWorkspace(url);
 	const sql = postgres(url, { max: 1, onnotice: () => {} });
+	// SvelteKit's plugin takes the working folder as Vite's root: the checkout measured.
+	process.chdir(checkout);
 	const vite = await createServer({
 		root: checkout,
 		configFile: join(checkout, 'vite.config.ts'),
@@ -140,6 +145,6 @@ try {
 	await vite.close();
 	await sql.end();
 } finally {
-	await run('bash', ['scripts/pg.sh', 'drop'], { env: pgEnv, quiet: true });
+	await drop();
 }
 process.exit(0);
