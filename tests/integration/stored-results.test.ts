@@ -1,7 +1,8 @@
 import type { RequestEvent } from '@sveltejs/kit';
 import { and, eq } from 'drizzle-orm';
 import { afterAll, afterEach, beforeAll, describe, expect, it, vi } from 'vitest';
-import { RULES_VERSION, type TariffInput } from '$lib/calc';
+import { RULES_VERSION } from '$lib/calc';
+import type { SiteInput } from '$lib/forms/site.schema';
 import { client, db } from '$lib/server/db';
 import { pricedResults, type DeviceSpec } from '$lib/server/db/schema';
 import { listDevices, saveDevices } from '$lib/server/sites/equipment.service';
@@ -14,7 +15,7 @@ import type { PricedSummary } from '$lib/server/sites/stored-results';
 import { createTariff, publishVersion } from '$lib/server/tariffs/tariff.service';
 import { createWorkspace } from '$lib/server/workspaces/workspace.service';
 import { load as dashboardLoad } from '../../src/routes/w/[workspaceId]/sites/+page.server';
-import { makeSite, makeUser, siteInput, tariffMeta, versionMeta } from './fixtures';
+import { makeSite, makeUser, siteInput, tariffMeta, versionMeta, weekdayPeak } from './fixtures';
 
 // Against the real PostgreSQL of `npm test`; the tariffs, sites and people are invented. Each input a
 // stored figure depends on is changed in turn, and the dashboard must show what pricing from scratch gives.
@@ -26,24 +27,7 @@ let baselineId = '';
 const tariffIds = { first: '', second: '' };
 
 /** Weekday afternoons dear, the rest cheap; holidays count as weekends (the core's default). */
-const touTariff = (peak: number): TariffInput => ({
-	currency: 'USD',
-	energyCharges: [
-		{
-			label: 'Energy',
-			type: 'tou',
-			seasons: [
-				{
-					months: [1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11, 12],
-					otherPerKwh: 0.08,
-					periods: [
-						{ label: 'Peak', perKwh: peak, days: 'weekdays', windows: [{ start: '14:00', end: '20:00' }] }
-					]
-				}
-			]
-		}
-	]
-});
+const touTariff = weekdayPeak;
 
 const pump = (watts: number) =>
 	({
@@ -131,9 +115,18 @@ async function expectNewFigures(change: () => Promise<unknown>) {
 	return { before, after };
 }
 
-async function reloadSite() {
+/** Saves the site with `fields` changed, the rest of what prices it kept, and reads it back. */
+const changeSite = (fields: Partial<SiteInput>) => async () => {
+	const kept = {
+		tariffId: site.tariffId,
+		tariffVersion: site.tariffVersion,
+		timezone: site.timezone,
+		country: site.country,
+		region: site.region
+	};
+	await updateSite(site, site.revision, siteInput(site.name, { ...kept, ...fields }), owner);
 	site = (await findSite(site.id))!;
-}
+};
 
 beforeAll(async () => {
 	owner = await makeUser(`owner-${tag}@example.org`, 'Stored owner');
@@ -198,43 +191,21 @@ describe('a stored result', () => {
 	});
 
 	it('is priced again when the site changes its tariff, then its pinned version', async () => {
-		const move = (tariffId: string, tariffVersion: number | null) => async () => {
-			await updateSite(site, site.revision, siteInput(site.name, { tariffId, tariffVersion }), owner);
-			await reloadSite();
-		};
-		for (const [tariffId, pin] of [
+		for (const [tariffId, tariffVersion] of [
 			[tariffIds.second, null],
 			[tariffIds.first, null],
 			[tariffIds.first, 1]
 		] as const) {
-			const { before, after } = await expectNewFigures(move(tariffId, pin));
+			const { before, after } = await expectNewFigures(changeSite({ tariffId, tariffVersion }));
 			expect(after).not.toEqual(before);
 		}
 	});
 
-	it('is priced again when the site’s time zone changes', async () => {
-		const { before, after } = await expectNewFigures(async () => {
-			await updateSite(
-				site,
-				site.revision,
-				siteInput(site.name, { ...pricingOf(site), timezone: 'UTC' }),
-				owner
-			);
-			await reloadSite();
-		});
-		expect(after).not.toEqual(before);
-	});
-
-	it('is priced again when the site’s holidays change (its country)', async () => {
-		const { before, after } = await expectNewFigures(async () => {
-			await updateSite(
-				site,
-				site.revision,
-				siteInput(site.name, { ...pricingOf(site), country: 'CA' }),
-				owner
-			);
-			await reloadSite();
-		});
+	it.each([
+		['time zone', { timezone: 'UTC' }],
+		['holidays (its country)', { country: 'CA' }]
+	])('is priced again when the site’s %s changes', async (_, fields) => {
+		const { before, after } = await expectNewFigures(changeSite(fields));
 		expect(after).not.toEqual(before);
 	});
 
@@ -272,15 +243,6 @@ describe('a stored result', () => {
 		expect(nextYear).not.toEqual(thisYear);
 		expect(await storedRow()).toBeDefined();
 	});
-});
-
-/** The site's pricing fields as they are now, for an update that changes one of them. */
-const pricingOf = (s: SiteRow) => ({
-	tariffId: s.tariffId,
-	tariffVersion: s.tariffVersion,
-	timezone: s.timezone,
-	country: s.country,
-	region: s.region
 });
 
 describe('the dashboard', () => {

@@ -74,10 +74,17 @@ export async function tariffChoiceProblem(
  * however many there are (a list of sites prices on them all).
  */
 export async function usableTariffs(workspaceId: string, ids: string[]) {
+	const found = await withVersions(await usableRows(workspaceId, ids));
+	return new Map(found.map((entry) => [entry.tariff.id, entry]));
+}
+
+const idsOf = (rows: { id: string }[]) => rows.map((row) => row.id);
+
+/** The tariff rows of `ids` (each once) that sites of `workspaceId` may use, in one query. */
+async function usableRows(workspaceId: string, ids: string[]) {
 	const unique = [...new Set(ids)];
 	const rows = unique.length ? await db.select().from(tariffs).where(inArray(tariffs.id, unique)) : [];
-	const found = await withVersions(rows.filter((row) => tariffUsableBy(workspaceId, row)));
-	return new Map(found.map((entry) => [entry.tariff.id, entry]));
+	return rows.filter((row) => tariffUsableBy(workspaceId, row));
 }
 
 /**
@@ -85,9 +92,7 @@ export async function usableTariffs(workspaceId: string, ids: string[]) {
  * needs, so a list read from stored results never loads the rates.
  */
 export async function usableTariffKeys(workspaceId: string, ids: string[]) {
-	const unique = [...new Set(ids)];
-	const rows = unique.length ? await db.select().from(tariffs).where(inArray(tariffs.id, unique)) : [];
-	const usable = rows.filter((row) => tariffUsableBy(workspaceId, row));
+	const usable = await usableRows(workspaceId, ids);
 	const versions = usable.length
 		? await db
 				.select({
@@ -98,12 +103,7 @@ export async function usableTariffKeys(workspaceId: string, ids: string[]) {
 					effectiveTo: tariffVersions.effectiveTo
 				})
 				.from(tariffVersions)
-				.where(
-					inArray(
-						tariffVersions.tariffId,
-						usable.map((t) => t.id)
-					)
-				)
+				.where(inArray(tariffVersions.tariffId, idsOf(usable)))
 		: [];
 	return new Map(
 		usable.map((tariff) => [
