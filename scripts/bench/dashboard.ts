@@ -125,6 +125,16 @@ try {
 			() => dashboard(eventFor(`/w/${big.workspaceId}/sites`, { workspaceId: big.workspaceId }))
 		],
 		[
+			'compare JSON, 6 generated scenarios × 30',
+			() =>
+				compareJson(
+					eventFor(
+						`/api/v1/compare?scenarios=${[...big.scenarioIds[0]!, ...big.scenarioIds[1]!].join(',')}`,
+						{}
+					)
+				)
+		],
+		[
 			'site page, generated (3 × 30)',
 			() => sitePage(eventFor(`/sites/${big.siteIds[0]}`, { siteId: big.siteIds[0]! }))
 		]

@@ -287,6 +287,10 @@ describe('the dashboard', () => {
 		expect(warm[1]).toBe(warm[0]);
 		// Warm: no rates or devices read (three queries) and nothing written.
 		expect(warm[0]).toBe(cold[0]! - 4);
+		// The totals at the top count every site of the workspace.
+		const view = await dashboard(many);
+		expect(view.siteCount).toBe(30);
+		expect(view.totals).toEqual([expect.objectContaining({ currency: 'USD', sites: 30 })]);
 		const rows = await db
 			.select()
 			.from(pricedResults)
