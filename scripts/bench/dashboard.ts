@@ -147,7 +147,8 @@ try {
 	);
 	// ONLY=dashboard measures only the views whose label contains it (a profile of one view, say).
 	for (const [label, view] of views.filter(([l]) => l.includes(process.env.ONLY ?? ''))) {
-		const cold = await measure(view, clear);
+		// PHASE=warm skips the cold views (a profile of the warm path, say).
+		const cold = process.env.PHASE === 'warm' ? { cpu: NaN, wall: NaN } : await measure(view, clear);
 		const warm = await measure(view);
 		const ms = (n: number) => `${n.toFixed(2)} ms`.padStart(10);
 		console.log(`${label.padEnd(38)} ${ms(cold.cpu)} ${ms(cold.wall)} ${ms(warm.cpu)} ${ms(warm.wall)}`);

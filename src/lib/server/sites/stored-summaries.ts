@@ -26,25 +26,16 @@ import {
 export async function storedSummaries(
 	workspaceId: string,
 	entries: { site: SiteRow; scenario: ScenarioRow }[],
-	period: PricedPeriod
+	period: PricedPeriod,
+	/** The stored rows of the period's slot when the caller read them already (in its own query). */
+	preread?: Map<string, { inputKey: string; summary: unknown }>
 ): Promise<Map<string, SummaryOrProblem>> {
-	const slot = slotOf(period);
 	const ids = entries.map((e) => e.scenario.id);
 	const tariffIds = entries.map((e) => tariffIdOf(e.site, e.scenario)).filter((id) => id !== null);
-	const [tariffs, storedRows] = await Promise.all([
+	const [tariffs, stored] = await Promise.all([
 		usableTariffKeys(workspaceId, tariffIds),
-		ids.length
-			? db
-					.select({
-						scenarioId: pricedResults.scenarioId,
-						inputKey: pricedResults.inputKey,
-						summary: pricedResults.summary
-					})
-					.from(pricedResults)
-					.where(and(inArray(pricedResults.scenarioId, ids), eq(pricedResults.slot, slot)))
-			: []
+		preread ?? storedOf(ids, slotOf(period))
 	]);
-	const stored = new Map(storedRows.map((r) => [r.scenarioId, r]));
 	const out = new Map<string, SummaryOrProblem>();
 	const misses: typeof entries = [];
 	for (const entry of entries) {
@@ -57,6 +48,21 @@ export async function storedSummaries(
 	}
 	if (misses.length) await priceMisses(workspaceId, misses, period, out);
 	return out;
+}
+
+/** The stored key and summary of each of these scenarios' slot, by scenario id. */
+async function storedOf(ids: string[], slot: string) {
+	const rows = ids.length
+		? await db
+				.select({
+					scenarioId: pricedResults.scenarioId,
+					inputKey: pricedResults.inputKey,
+					summary: pricedResults.summary
+				})
+				.from(pricedResults)
+				.where(and(inArray(pricedResults.scenarioId, ids), eq(pricedResults.slot, slot)))
+		: [];
+	return new Map<string, { inputKey: string; summary: unknown }>(rows.map((r) => [r.scenarioId, r]));
 }
 
 /**

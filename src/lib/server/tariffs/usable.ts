@@ -1,5 +1,5 @@
 // The one rule for which tariff a site may use, asked where a tariff is chosen and again where it is used.
-import { inArray } from 'drizzle-orm';
+import { eq, inArray } from 'drizzle-orm';
 import { db } from '$lib/server/db';
 import { tariffs, tariffVersions } from '$lib/server/db/schema';
 import { findTariff, withVersions, type TariffRow } from '$lib/server/tariffs/tariff.service';
@@ -74,41 +74,42 @@ export async function tariffChoiceProblem(
  * however many there are (a list of sites prices on them all).
  */
 export async function usableTariffs(workspaceId: string, ids: string[]) {
-	const found = await withVersions(await usableRows(workspaceId, ids));
-	return new Map(found.map((entry) => [entry.tariff.id, entry]));
-}
-
-const idsOf = (rows: { id: string }[]) => rows.map((row) => row.id);
-
-/** The tariff rows of `ids` (each once) that sites of `workspaceId` may use, in one query. */
-async function usableRows(workspaceId: string, ids: string[]) {
 	const unique = [...new Set(ids)];
 	const rows = unique.length ? await db.select().from(tariffs).where(inArray(tariffs.id, unique)) : [];
-	return rows.filter((row) => tariffUsableBy(workspaceId, row));
+	const found = await withVersions(rows.filter((row) => tariffUsableBy(workspaceId, row)));
+	return new Map(found.map((entry) => [entry.tariff.id, entry]));
 }
 
 /**
  * As `usableTariffs`, with each version's number and dates but not its rates: all a stored result's key
- * needs, so a list read from stored results never loads the rates.
+ * needs, so a list read from stored results never loads the rates. One query.
  */
 export async function usableTariffKeys(workspaceId: string, ids: string[]) {
-	const usable = await usableRows(workspaceId, ids);
-	const versions = usable.length
+	const unique = [...new Set(ids)];
+	const rows = unique.length
 		? await db
 				.select({
-					id: tariffVersions.id,
-					tariffId: tariffVersions.tariffId,
-					number: tariffVersions.number,
-					effectiveFrom: tariffVersions.effectiveFrom,
-					effectiveTo: tariffVersions.effectiveTo
+					tariff: tariffs,
+					version: {
+						id: tariffVersions.id,
+						number: tariffVersions.number,
+						effectiveFrom: tariffVersions.effectiveFrom,
+						effectiveTo: tariffVersions.effectiveTo
+					}
 				})
-				.from(tariffVersions)
-				.where(inArray(tariffVersions.tariffId, idsOf(usable)))
+				.from(tariffs)
+				.leftJoin(tariffVersions, eq(tariffVersions.tariffId, tariffs.id))
+				.where(inArray(tariffs.id, unique))
 		: [];
-	return new Map(
-		usable.map((tariff) => [
-			tariff.id,
-			{ tariff, versions: versions.filter((v) => v.tariffId === tariff.id) }
-		])
-	);
+	const found = new Map<
+		string,
+		{ tariff: TariffRow; versions: NonNullable<(typeof rows)[number]['version']>[] }
+	>();
+	for (const { tariff, version } of rows) {
+		if (!tariffUsableBy(workspaceId, tariff)) continue;
+		const entry = found.get(tariff.id) ?? { tariff, versions: [] };
+		if (version) entry.versions.push(version);
+		found.set(tariff.id, entry);
+	}
+	return found;
 }
