@@ -81,5 +81,6 @@ export const init: ServerInit = async () => {
 	await import('$lib/server/tariffs/tariff-notice.service');
 	await import('$lib/server/workspaces/deletion');
 	await import('$lib/server/tariffs/bulk/bulk-job');
+	await import('$lib/server/sites/reprice-job');
 	await startJobs();
 };

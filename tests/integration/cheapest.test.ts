@@ -16,7 +16,7 @@ import { createWorkspace } from '$lib/server/workspaces/workspace.service';
 import type { Actor } from '$lib/server/workspaces/audit';
 import { GET as exportXlsx } from '../../src/routes/sites/[siteId]/cheapest/export.xlsx/+server';
 import { load as reportLoad } from '../../src/routes/sites/[siteId]/cheapest/report/+page.server';
-import { flat, makeSite, makeUser, tariffMeta, versionMeta } from './fixtures';
+import { flat, makeSite, makeUser, tariffMeta, versionMeta, weekdayPeak } from './fixtures';
 
 // Against the real PostgreSQL of `npm test`; invented utilities, tariffs, sites and readings. The utilities'
 // names start with "A0" so the library's utility order lists them first whatever other tests stored.
@@ -26,24 +26,7 @@ let workspaceId = '';
 const ids = { flat: '', tou: '', euro: '', foreign: '' };
 
 /** 30 cents on weekday afternoons (14:00–20:00), 8 cents at all other hours. */
-const touInput: TariffInput = {
-	currency: 'USD',
-	energyCharges: [
-		{
-			label: 'Energy',
-			type: 'tou',
-			seasons: [
-				{
-					months: [1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11, 12],
-					otherPerKwh: 0.08,
-					periods: [
-						{ label: 'on-peak', perKwh: 0.3, days: 'weekdays', windows: [{ start: '14:00', end: '20:00' }] }
-					]
-				}
-			]
-		}
-	]
-};
+const touInput: TariffInput = weekdayPeak(0.3);
 
 /** Hourly readings from 2026-01-01 local (Chicago) for `hours` real hours: 4 kWh at night (22–06), 0.5 by day. */
 function nightHeavy(hours: number): Interval[] {

@@ -85,3 +85,23 @@ export const flat = (perKwh: number): TariffInput => ({
 	currency: 'USD',
 	energyCharges: [{ label: 'Energy', type: 'flat', perKwh }]
 });
+
+/** `peak` US dollars a kWh on weekday afternoons (14:00–20:00), 8 cents at all other hours. */
+export const weekdayPeak = (peak: number): TariffInput => ({
+	currency: 'USD',
+	energyCharges: [
+		{
+			label: 'Energy',
+			type: 'tou',
+			seasons: [
+				{
+					months: [1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11, 12],
+					otherPerKwh: 0.08,
+					periods: [
+						{ label: 'on-peak', perKwh: peak, days: 'weekdays', windows: [{ start: '14:00', end: '20:00' }] }
+					]
+				}
+			]
+		}
+	]
+});

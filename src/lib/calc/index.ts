@@ -5,6 +5,7 @@
  */
 export { calculate } from './calculate';
 export { compare } from './compare';
+export { RULES_VERSION } from './rules-version';
 export {
 	airInjectionPressure,
 	hazenWilliamsHeadLossM,

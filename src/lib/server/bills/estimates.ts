@@ -1,7 +1,6 @@
-import { listDevices } from '$lib/server/sites/equipment.service';
 import { listScenarios } from '$lib/server/sites/scenario.service';
 import type { SiteRow } from '$lib/server/sites/site.service';
-import { priceScenario } from '$lib/server/sites/results.service';
+import { storedPrice } from '$lib/server/sites/stored-results';
 import type { BillRow } from './bill.service';
 
 /**
@@ -11,12 +10,11 @@ import type { BillRow } from './bill.service';
 export async function billEstimates(site: SiteRow, bills: BillRow[]) {
 	const baseline = (await listScenarios(site.id)).find((s) => s.isBaseline && !s.deletedAt);
 	if (!baseline || bills.length === 0) return bills.map(() => null);
-	const specs = (await listDevices(baseline.id)).map((d) => d.spec);
 	const out: ({ kwh: number; cost: number } | null)[] = [];
 	// The core takes at most 36 periods per run.
 	for (let i = 0; i < bills.length; i += 36) {
 		const chunk = bills.slice(i, i + 36);
-		const priced = await priceScenario(site, baseline, specs, {
+		const priced = await storedPrice(site, baseline, {
 			billingPeriods: chunk.map((b) => ({ from: b.periodFrom, to: b.periodTo }))
 		});
 		for (const [j] of chunk.entries()) {

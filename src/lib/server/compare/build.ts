@@ -1,6 +1,5 @@
 import type { RequestEvent } from '@sveltejs/kit';
 import {
-	compare,
 	compareRequestSchema,
 	parseRequest,
 	redundancy,
@@ -24,6 +23,7 @@ import type { SiteRow } from '$lib/server/sites/site.service';
 import { assumptionsOf } from './assumptions';
 import { comparisonPlace } from './issue-place';
 import { equipmentList } from './equipment-list';
+import { storedCompare } from './stored-comparison';
 
 /** Everything a comparison of stored scenarios is made of: the report, and the exact request given to compare(). */
 export interface Comparison {
@@ -166,7 +166,7 @@ export async function buildComparison(event: RequestEvent, query: ComparisonQuer
 				: 'These scenarios cannot be compared'
 		};
 	}
-	const result = compare(parsed.data);
+	const result = await storedCompare(parsed.data, base.scenario.id, query.scenarios);
 	const scenarios: ComparedScenario[] = loaded.map((l, i) => ({
 		id: l.scenario.id,
 		name: label(l, i),

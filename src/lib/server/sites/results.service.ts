@@ -7,11 +7,9 @@ import {
 	type InvalidRequest,
 	type VersionedResponse
 } from '$lib/calc';
-import { needsElectricalCaution } from '$lib/cautions';
 import { beforeFirstVersionNote } from '$lib/text/tariff';
 import type { DeviceSpec } from '../db/schema';
-import { listDevices } from './equipment.service';
-import { UNDO_MS, type ScenarioRow } from './scenario.service';
+import type { ScenarioRow } from './scenario.service';
 import type { SiteRow } from './site.service';
 import { usableTariff, TARIFF_UNAVAILABLE } from '../tariffs/usable';
 import type { TariffRow } from '../tariffs/tariff.service';
@@ -37,20 +35,24 @@ export type PricingTariff =
 	| { ok: true; tariff: TariffRow; versions: DatedTariff[] }
 	| { ok: false; reason: 'no-tariff' | 'unavailable' };
 
+/** A tariff with its versions, as `usableTariff` reads it (null: unknown, or not this workspace's to use). */
+export type UsableTariff = Awaited<ReturnType<typeof usableTariff>>;
+
 /**
  * The tariff a scenario is priced on: its own override, else the site's; a pinned version applies to every
- * period. A tariff the site's workspace may not use (another workspace's private one, however its id was
+ * period. `loaded` is that tariff already read through `usableTariff` (a list prices many sites at once). A tariff the site's workspace may not use (another workspace's private one, however its id was
  * stored) is `unavailable`: nothing of it — name, source, rates — reaches a result, comparison or export.
  */
 export async function tariffFor(
 	site: SiteRow,
 	scenario: ScenarioRow | null,
-	pinVersion?: number
+	pinVersion?: number,
+	loaded?: UsableTariff | null
 ): Promise<PricingTariff> {
 	const id = scenario?.tariffId ?? site.tariffId;
 	const pinned = pinVersion ?? (scenario?.tariffId ? scenario.tariffVersion : site.tariffVersion);
 	if (!id) return { ok: false, reason: 'no-tariff' };
-	const found = await usableTariff(site.workspaceId, id);
+	const found = loaded === undefined ? await usableTariff(site.workspaceId, id) : loaded;
 	if (!found) return { ok: false, reason: 'unavailable' };
 	if (found.versions.length === 0) return { ok: false, reason: 'no-tariff' };
 	const chosen = pinned ? found.versions.filter((v) => v.number === pinned) : found.versions;
@@ -73,9 +75,10 @@ export async function priceScenario(
 	scenario: ScenarioRow | null,
 	specs: DeviceSpec[],
 	period: { start: string; months: number } | { billingPeriods: { from: string; to: string }[] },
-	pinVersion?: number
+	pinVersion?: number,
+	loaded?: UsableTariff | null
 ): Promise<Priced> {
-	const resolved = await tariffFor(site, scenario, pinVersion);
+	const resolved = await tariffFor(site, scenario, pinVersion, loaded);
 	if (!resolved.ok)
 		return {
 			ok: false,
@@ -122,41 +125,4 @@ export async function priceScenario(
 	} catch (error) {
 		return { ok: false, reason: 'invalid', message: (error as Error).message };
 	}
-}
-
-/**
- * The site page's scenario list: every scenario still shown (a deleted one while it can be restored),
- * each with its device count, the in-water caution and its cost over the calendar `year`.
- */
-export async function priceScenarios(site: SiteRow, scenarios: ScenarioRow[], year: number) {
-	const undoAfter = Date.now() - UNDO_MS;
-	return Promise.all(
-		scenarios
-			.filter((s) => !s.deletedAt || s.deletedAt.getTime() > undoAfter)
-			.map(async (s) => {
-				const devices = await listDevices(s.id);
-				const priced = s.deletedAt
-					? null
-					: await priceScenario(
-							site,
-							s,
-							devices.map((d) => d.spec),
-							{ start: `${year}-01`, months: 12 }
-						);
-				return {
-					id: s.id,
-					name: s.name,
-					description: s.description,
-					isBaseline: s.isBaseline,
-					status: s.status,
-					archived: !!s.archivedAt,
-					deleted: !!s.deletedAt,
-					deviceCount: devices.length,
-					caution: needsElectricalCaution(devices.map((d) => d.spec)),
-					annual: priced?.ok ? { cost: priced.result.totals.cost, kwh: priced.result.totals.kwh } : null,
-					problem: priced && !priced.ok ? priced.message : null,
-					note: priced?.ok ? priced.note : null
-				};
-			})
-	);
 }

@@ -4,6 +4,7 @@ import { requireAdmin, requireRole, requireTariffWrite } from '../guard';
 import { createTariff, publishVersion, TariffConflict } from '$lib/server/tariffs/tariff.service';
 import { tariffSubmissionSchema } from './submission';
 import { announceVersion } from '$lib/server/tariffs/tariff-notice.service';
+import { repriceAfterPublish } from '$lib/server/sites/reprice-job';
 
 export type PublishOutcome =
 	| { ok: true; tariffId: string; number: number }
@@ -55,6 +56,8 @@ export async function submitTariff(
 		);
 		// A new public version tells every workspace with a site on it, through the job queue.
 		if (isPublic) await announceVersion({ tariffId: target.tariffId, versionNumber: number });
+		// The stored years of the baselines on it are priced again ahead of their next view.
+		await repriceAfterPublish(target.tariffId);
 		return { ok: true, tariffId: target.tariffId, number };
 	} catch (e) {
 		if (e instanceof TariffConflict)

@@ -6,8 +6,7 @@ import { notices, scenarios, sites, tariffs, tariffVersions, workspaces } from '
 import { defineJob } from '../jobs';
 import { deliverMail } from '../mail';
 import { tariffUsableBy } from '../tariffs/usable';
-import { priceScenario } from '../sites/results.service';
-import { listDevices } from '$lib/server/sites/equipment.service';
+import { storedPrice } from '../sites/stored-results';
 import { listScenarios } from '$lib/server/sites/scenario.service';
 import { noticeLinks, noticeRecipients } from './notice-audience';
 
@@ -50,11 +49,11 @@ export async function costChanges(job: ForWorkspace) {
 			(s) => s.isBaseline && !s.deletedAt && !s.archivedAt
 		);
 		if (!baseline || (baseline.tariffId ?? site.tariffId) !== job.tariffId) continue;
-		const specs = (await listDevices(baseline.id)).map((d) => d.spec);
 		const period = { start: `${year}-01`, months: 12 };
+		// Each pinned version is its own stored slot: a retried job, or the next notice, reads them back.
 		const [old, next] = await Promise.all([
-			priceScenario(site, baseline, specs, period, before.number),
-			priceScenario(site, baseline, specs, period, now.number)
+			storedPrice(site, baseline, period, before.number),
+			storedPrice(site, baseline, period, now.number)
 		]);
 		if (!old.ok || !next.ok) continue;
 		lines.push({

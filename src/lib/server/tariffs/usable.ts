@@ -1,5 +1,8 @@
 // The one rule for which tariff a site may use, asked where a tariff is chosen and again where it is used.
-import { findTariff, type TariffRow } from '$lib/server/tariffs/tariff.service';
+import { eq, inArray } from 'drizzle-orm';
+import { db } from '$lib/server/db';
+import { tariffs, tariffVersions } from '$lib/server/db/schema';
+import { findTariff, withVersions, type TariffRow } from '$lib/server/tariffs/tariff.service';
 
 /** What pricing, comparisons and exports say instead of anything about a tariff the site may not use. */
 export const TARIFF_UNAVAILABLE = "This site's tariff is not available to this workspace";
@@ -64,4 +67,49 @@ export async function tariffChoiceProblem(
 	if (choice.tariffVersion !== null && !found.versions.some((v) => v.number === choice.tariffVersion))
 		return { field: 'tariffVersion', message: `That tariff has no version ${choice.tariffVersion}` };
 	return null;
+}
+
+/**
+ * The tariffs of `ids` with their versions that sites of `workspaceId` may use, by id, in two queries
+ * however many there are (a list of sites prices on them all).
+ */
+export async function usableTariffs(workspaceId: string, ids: string[]) {
+	const unique = [...new Set(ids)];
+	const rows = unique.length ? await db.select().from(tariffs).where(inArray(tariffs.id, unique)) : [];
+	const found = await withVersions(rows.filter((row) => tariffUsableBy(workspaceId, row)));
+	return new Map(found.map((entry) => [entry.tariff.id, entry]));
+}
+
+/**
+ * As `usableTariffs`, with each version's number and dates but not its rates: all a stored result's key
+ * needs, so a list read from stored results never loads the rates. One query.
+ */
+export async function usableTariffKeys(workspaceId: string, ids: string[]) {
+	const unique = [...new Set(ids)];
+	const rows = unique.length
+		? await db
+				.select({
+					tariff: tariffs,
+					version: {
+						id: tariffVersions.id,
+						number: tariffVersions.number,
+						effectiveFrom: tariffVersions.effectiveFrom,
+						effectiveTo: tariffVersions.effectiveTo
+					}
+				})
+				.from(tariffs)
+				.leftJoin(tariffVersions, eq(tariffVersions.tariffId, tariffs.id))
+				.where(inArray(tariffs.id, unique))
+		: [];
+	const found = new Map<
+		string,
+		{ tariff: TariffRow; versions: NonNullable<(typeof rows)[number]['version']>[] }
+	>();
+	for (const { tariff, version } of rows) {
+		if (!tariffUsableBy(workspaceId, tariff)) continue;
+		const entry = found.get(tariff.id) ?? { tariff, versions: [] };
+		if (version) entry.versions.push(version);
+		found.set(tariff.id, entry);
+	}
+	return found;
 }

@@ -10,7 +10,7 @@ import { requireSiteAccess } from '$lib/server/guard';
 import { siteTrail } from '$lib/server/workspaces/audit';
 import { usableTariff } from '$lib/server/tariffs/usable';
 import { changeScenario, createScenario, listScenarios } from '$lib/server/sites/scenario.service';
-import { priceScenarios } from '$lib/server/sites/results.service';
+import { priceScenarios } from '$lib/server/sites/scenario-list';
 import { scenarioSchema } from '$lib/forms/site.schema';
 import { fieldErrors, keepValues } from '$lib/forms/errors';
 import { storableText } from '$lib/forms/storable';

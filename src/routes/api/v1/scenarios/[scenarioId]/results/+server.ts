@@ -3,8 +3,8 @@ import { parseRequest } from '$lib/calc';
 import { apiError } from '$lib/server/http/json';
 import { readJsonBody } from '$lib/server/http/body';
 import { requireScenarioAccess } from '$lib/server/guard';
-import { listDevices } from '$lib/server/sites/equipment.service';
 import { priceScenario } from '$lib/server/sites/results.service';
+import { storedPrice } from '$lib/server/sites/stored-results';
 import { previewSchema } from '$lib/server/sites/device-specs';
 import type { RequestHandler } from './$types';
 import { invalid } from '$lib/server/http/answers';
@@ -22,18 +22,10 @@ function answer(priced: Awaited<ReturnType<typeof priceScenario>>) {
 	return apiError(409, code[priced.reason], priced.message);
 }
 
-/** GET — the calculation response for the stored scenario over the 12 months of this year. */
+/** GET — the calculation response for the stored scenario over the 12 months of this year (a stored result). */
 export const GET: RequestHandler = async (event) => {
 	const { site, scenario } = await requireScenarioAccess(event, event.params.scenarioId, 'viewer');
-	const devices = await listDevices(scenario.id);
-	return answer(
-		await priceScenario(
-			site,
-			scenario,
-			devices.map((d) => d.spec),
-			yearPeriod()
-		)
-	);
+	return answer(await storedPrice(site, scenario, yearPeriod()));
 };
 
 /** POST `{ devices }` — the same, for an edited list not yet saved (the page's live results). */
