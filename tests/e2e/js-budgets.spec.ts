@@ -1,6 +1,6 @@
 import { expect, test, type BrowserContext } from '@playwright/test';
 import { readFileSync } from 'node:fs';
-import { firstLoadScripts, gzippedBytes, kB, MAIN_PAGES } from './first-load';
+import { firstLoad, kB, MAIN_PAGES } from './first-load';
 import { signInWithPassword } from './helpers';
 
 // The browser's share, kept: each main page's first-load JavaScript (gzipped) stays within its budget in
@@ -30,8 +30,7 @@ test.describe("The browser's share: first-load JavaScript", () => {
 		test(`${name} stays within its JavaScript budget`, async ({ browser, baseURL }) => {
 			// A fresh context: an empty cache, as on a first visit.
 			const context = await browser.newContext({ baseURL, storageState: signedIn ? owner : undefined });
-			const scripts = await firstLoadScripts(await context.newPage(), path);
-			const bytes = await gzippedBytes(context.request, scripts);
+			const { bytes } = await firstLoad(await context.newPage(), context.request, path);
 			await context.close();
 			const budget = budgets[name]?.budget ?? 0;
 			expect(

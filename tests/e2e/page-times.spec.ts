@@ -1,6 +1,6 @@
 import { test, type BrowserContext } from '@playwright/test';
 import { writeFileSync } from 'node:fs';
-import { firstLoadScripts, gzippedBytes, kB, MAIN_PAGES } from './first-load';
+import { firstLoad, gzippedBytes, kB, MAIN_PAGES } from './first-load';
 import { signInWithPassword } from './helpers';
 
 // On demand only (PAGE_TIMES=1): how long each main page takes, on a CPU slowed four times (a phone's
@@ -33,10 +33,7 @@ test("The browser's share: ready on a four times slower CPU", async ({ browser, 
 		const allScripts = new Set<string>();
 		// Counted in a context of its own, so every timed visit below starts with an empty cache.
 		const counter = await browser.newContext({ baseURL, storageState: signedIn ? owner : undefined });
-		const firstLoad = await gzippedBytes(
-			files.request,
-			await firstLoadScripts(await counter.newPage(), path)
-		);
+		const { bytes: firstLoadBytes } = await firstLoad(await counter.newPage(), files.request, path);
 		await counter.close();
 		for (let run = 0; run < RUNS; run++) {
 			const context = await browser.newContext({ baseURL, storageState: signedIn ? owner : undefined });
@@ -67,7 +64,7 @@ test("The browser's share: ready on a four times slower CPU", async ({ browser, 
 		rows.push({
 			name,
 			path,
-			firstLoadBytes: firstLoad,
+			firstLoadBytes,
 			withDeferredBytes: withDeferred,
 			readyMs: times.map(Math.round),
 			medianMs: Math.round(median(times))
