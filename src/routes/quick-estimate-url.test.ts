@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { newDevice, requestIssues, toRequest, zoneWords } from './quick-estimate';
+import { newDevice, toRequest, zoneWords } from './quick-estimate';
+import { requestIssues } from './quick-estimate-check';
 import {
 	carriesEstimate,
 	defaultEntries,

@@ -1,6 +1,7 @@
 import type { CalculateResponse } from '$lib/calc';
 import { LatestRequest, RequestFailed } from '$lib/client/latest-request.svelte';
-import { requestIssues, type Issue, type toRequest } from './quick-estimate';
+import type { toRequest } from './quick-estimate';
+import type { Issue, requestIssues } from './quick-estimate-check';
 
 /**
  * Debounced, cancelling fetch of /api/v1/calculate: a newer edit aborts the request still in flight.
@@ -8,6 +9,9 @@ import { requestIssues, type Issue, type toRequest } from './quick-estimate';
  */
 export class QuickEstimate {
 	issues = $state<Issue[]>([]);
+	/** The schema check, loaded on the first edit (see quick-estimate-check.ts); null until it is here. */
+	#check: typeof requestIssues | null = null;
+	#loading: Promise<unknown> | null = null;
 	#latest = new LatestRequest<unknown, CalculateResponse>({
 		delayMs: 250,
 		noAnswer: 'No answer from the server. Check the connection.',
@@ -42,7 +46,14 @@ export class QuickEstimate {
 
 	/** Asks for the estimate of `body` after the pause, or, when it cannot be priced, marks its fields. */
 	request(body: ReturnType<typeof toRequest>, delayMs = 250) {
-		const issues = requestIssues(body);
+		if (this.#check) return this.#checkAndSend(this.#check, body, delayMs);
+		// Edits made while the check loads wait for it and run in their order, so the last one wins.
+		this.#loading ??= import('./quick-estimate-check').then((m) => (this.#check = m.requestIssues));
+		void this.#loading.then(() => this.#checkAndSend(this.#check!, body, delayMs));
+	}
+
+	#checkAndSend(check: typeof requestIssues, body: ReturnType<typeof toRequest>, delayMs: number) {
+		const issues = check(body);
 		if (issues.length) {
 			this.#latest.cancel();
 			this.issues = issues;

@@ -1,5 +1,3 @@
-import { calculateRequestSchema, parseRequest } from '$lib/calc';
-
 /**
  * One line of the public quick estimate, as the person types it. A number box left empty (or holding
  * something that is not a number) reads null: it is sent as it is and refused with the field's message.
@@ -102,17 +100,6 @@ export function toEquipment(devices: QuickDevice[]) {
 				? { type: 'always' as const }
 				: { type: 'hours' as const, hoursPerDay: d.hoursPerDay, days: 'all' as const }
 	}));
-}
-
-export type Issue = { path: string; message: string };
-
-/**
- * The problems the calculation API would answer for this request, found in the browser with the core's
- * own schema, so an entry that cannot be priced is shown at its field and never sent (no 400).
- */
-export function requestIssues(request: ReturnType<typeof toRequest>): Issue[] {
-	const parsed = parseRequest(calculateRequestSchema, request);
-	return parsed.success ? [] : parsed.error.issues;
 }
 
 /** The power of one unit in watts, as the person gave it; null while a box is empty. */

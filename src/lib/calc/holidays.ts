@@ -9,24 +9,6 @@ export type HolidaySpec = { country: string; region?: string | undefined } | { d
 
 const calendars = new Map<string, Holidays>();
 const byYear = new Map<string, readonly string[]>();
-let countryCodes: ReadonlySet<string> | undefined;
-const regionCodes = new Map<string, ReadonlySet<string>>();
-
-/** Whether date-holidays knows the country code (ISO 3166-1 alpha-2, upper case). */
-export function isKnownCountry(country: string): boolean {
-	countryCodes ??= new Set(Object.keys(new Holidays().getCountries()));
-	return countryCodes.has(country);
-}
-
-/** Whether date-holidays knows the region (state, province) code within the country. */
-export function isKnownRegion(country: string, region: string): boolean {
-	let regions = regionCodes.get(country);
-	if (!regions) {
-		regions = new Set(Object.keys(new Holidays().getStates(country) ?? {}));
-		regionCodes.set(country, regions);
-	}
-	return regions.has(region);
-}
 
 function publicHolidays(country: string, region: string | undefined, year: number): readonly string[] {
 	const key = `${country}|${region ?? ''}|${year}`;

@@ -3,7 +3,7 @@ import { IANAZone } from 'luxon';
 import { z } from 'zod';
 import { dayNumber, parseIsoDate, parseIsoMonth } from './dates';
 import { amount, list, record } from './fields';
-import { isKnownCountry, isKnownRegion } from './holidays';
+import { isKnownCountry, isKnownRegion } from './holiday-codes';
 
 const FIRST_YEAR = 1970;
 const LAST_YEAR = 2100;
