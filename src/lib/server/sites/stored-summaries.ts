@@ -1,5 +1,6 @@
 // Many stored scenarios' summaries at once (the sites dashboard, the site page): a fixed number of queries
 // however many scenarios there are, and only the ones not stored under their current key are priced.
+import { setImmediate as yieldToOthers } from 'node:timers/promises';
 import { and, eq, inArray } from 'drizzle-orm';
 import { needsElectricalCaution } from '$lib/cautions';
 import { db } from '../db';
@@ -38,16 +39,49 @@ export async function storedSummaries(
 	]);
 	const out = new Map<string, SummaryOrProblem>();
 	const misses: typeof entries = [];
+	const missKeys: string[] = [];
 	for (const entry of entries) {
 		const id = tariffIdOf(entry.site, entry.scenario);
 		const keyed = keyOf(entry.site, entry.scenario, (id && tariffs.get(id)) || null, period);
 		const row = stored.get(entry.scenario.id);
 		if (keyed && row?.inputKey === keyed.key)
 			out.set(entry.scenario.id, { ok: true, summary: row.summary as PricedSummary });
-		else misses.push(entry);
+		else {
+			misses.push(entry);
+			missKeys.push(`${entry.scenario.id}:${keyed?.key ?? 'unkeyed'}`);
+		}
 	}
-	if (misses.length) await priceMisses(workspaceId, misses, period, out);
+	if (misses.length) {
+		for (const [id, summary] of await pricedOnce(workspaceId, misses, missKeys, period)) out.set(id, summary);
+	}
 	return out;
+}
+
+/** The pricing of misses under way in this process, by what is priced (scenarios and their keys). */
+const underWay = new Map<string, Promise<Map<string, SummaryOrProblem>>>();
+
+/**
+ * Prices these misses once however many views ask at the same moment: a view that finds the same misses
+ * already being priced in this process waits for that pricing instead of starting its own. Without it,
+ * fifty people opening a 200-site dashboard just after a tariff change each priced all 200 (about 340 ms
+ * of CPU a view), the views queued behind one another and timed out before any result was stored.
+ */
+function pricedOnce(
+	workspaceId: string,
+	misses: { site: SiteRow; scenario: ScenarioRow }[],
+	missKeys: string[],
+	period: PricedPeriod
+): Promise<Map<string, SummaryOrProblem>> {
+	const flight = `${workspaceId}|${slotOf(period)}|${missKeys.join(',')}`;
+	let pricing = underWay.get(flight);
+	if (!pricing) {
+		const priced = new Map<string, SummaryOrProblem>();
+		pricing = priceMisses(workspaceId, misses, period, priced)
+			.then(() => priced)
+			.finally(() => underWay.delete(flight));
+		underWay.set(flight, pricing);
+	}
+	return pricing;
 }
 
 /** The stored key and summary of each of these scenarios' slot, by scenario id. */
@@ -95,6 +129,8 @@ async function priceMisses(
 	}
 	const rows: StoredRow[] = [];
 	for (const { site, scenario } of misses) {
+		// Each scenario is a millisecond or two of pricing: other requests get their turn between them.
+		await yieldToOthers();
 		const list = specs.get(scenario.id) ?? [];
 		const id = tariffIdOf(site, scenario);
 		// Unknown or not usable: priceScenario's own refusal names it (null stands for "read, and not found").
