@@ -2,6 +2,7 @@
 // from stored results in a fixed number of queries whatever the number of sites.
 import { and, asc, eq, isNull } from 'drizzle-orm';
 import { db } from '../db';
+import { isLiveBaseline } from './scenario.service';
 import { pricedResults, scenarios, sites } from '../db/schema';
 import { slotOf } from './stored-key';
 import { storedSummaries } from './stored-summaries';
@@ -19,15 +20,7 @@ export async function dashboardRows(workspaceId: string, now: Date) {
 			stored: { inputKey: pricedResults.inputKey, summary: pricedResults.summary }
 		})
 		.from(sites)
-		.leftJoin(
-			scenarios,
-			and(
-				eq(scenarios.siteId, sites.id),
-				eq(scenarios.isBaseline, true),
-				isNull(scenarios.deletedAt),
-				isNull(scenarios.archivedAt)
-			)
-		)
+		.leftJoin(scenarios, and(eq(scenarios.siteId, sites.id), isLiveBaseline()))
 		.leftJoin(
 			pricedResults,
 			and(eq(pricedResults.scenarioId, scenarios.id), eq(pricedResults.slot, slotOf(period)))

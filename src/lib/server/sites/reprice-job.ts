@@ -5,7 +5,7 @@ import { db } from '../db';
 import { scenarios, sites } from '../db/schema';
 import { defineJob } from '../jobs';
 import { logger } from '../log';
-import type { ScenarioRow } from './scenario.service';
+import { isLiveBaseline, type ScenarioRow } from './scenario.service';
 import type { SiteRow } from './site.service';
 import { storedSummaries } from './stored-summaries';
 
@@ -21,9 +21,7 @@ async function baselinesOn(tariffId: string) {
 		.where(
 			and(
 				isNull(sites.archivedAt),
-				eq(scenarios.isBaseline, true),
-				isNull(scenarios.deletedAt),
-				isNull(scenarios.archivedAt),
+				isLiveBaseline(),
 				or(eq(scenarios.tariffId, tariffId), and(isNull(scenarios.tariffId), eq(sites.tariffId, tariffId)))
 			)
 		)

@@ -1,6 +1,6 @@
 // Scenarios of a site: listing, creating (blank or as a copy) and the one-step changes (rename, baseline,
 // archive, delete, restore, tariff).
-import { and, asc, eq } from 'drizzle-orm';
+import { and, asc, eq, isNull } from 'drizzle-orm';
 import { z } from 'zod';
 import { parseRequest, type RequestIssue, type ScenarioStatus } from '$lib/calc';
 import { db } from '../db';
@@ -16,6 +16,10 @@ import {
 	type ScenarioDetails
 } from './scenario-details.schema';
 import { saveScenarioDetails } from './scenario-details';
+
+/** SQL: the scenario is its site's live baseline (neither deleted nor archived): the one the site is priced on. */
+export const isLiveBaseline = () =>
+	and(eq(scenarios.isBaseline, true), isNull(scenarios.deletedAt), isNull(scenarios.archivedAt));
 
 /** A scenario as stored. */
 export type ScenarioRow = typeof scenarios.$inferSelect;

@@ -3,6 +3,7 @@
 import { and, eq, inArray, isNull, sql } from 'drizzle-orm';
 import { z } from 'zod';
 import { db } from '../db';
+import { isLiveBaseline } from '../sites/scenario.service';
 import { memberships, scenarios, sites, tariffs, tariffVersions, users } from '../db/schema';
 import { tariffUsableBy } from './usable';
 
@@ -31,15 +32,7 @@ export async function sitesBilledOn(tariffId: string, workspaceId?: string) {
 	return db
 		.selectDistinct({ id: sites.id, name: sites.name, workspaceId: sites.workspaceId })
 		.from(sites)
-		.innerJoin(
-			scenarios,
-			and(
-				eq(scenarios.siteId, sites.id),
-				eq(scenarios.isBaseline, true),
-				isNull(scenarios.deletedAt),
-				isNull(scenarios.archivedAt)
-			)
-		)
+		.innerJoin(scenarios, and(eq(scenarios.siteId, sites.id), isLiveBaseline()))
 		.where(
 			and(
 				isNull(sites.archivedAt),
