@@ -24,7 +24,7 @@ function area(name, where) {
 }
 
 /**
- * The steps of a calculation request, each named by the outermost function of the step found on a
+ * The steps of a request (a calculation; a page adds its queries and its render), each named by the outermost function of the step found on a
  * tick's stack (function name, and where it lives). Ticks in none of them are the framework's and
  * Node's own: HTTP parsing, streams, SvelteKit's handling, the hooks.
  */
@@ -34,7 +34,9 @@ const STEPS = [
 		/^_?isLimited\t|\tnode:internal\/crypto|webcrypto|js_transferable/
 	],
 	['session (Auth.js reader)', /^auth\t.*auth\.js/],
-	['session (live check, database)', /^liveSessionUser\t|node_modules\/(drizzle-orm|postgres)\//],
+	['session (live check, database)', /^liveSessionUser\t/],
+	["database (a page's queries: drizzle, postgres.js)", /node_modules\/(drizzle-orm|postgres)\//],
+	['page render and its data for hydration (SvelteKit)', /^render_response\t/],
 	['reading the body (and JSON.parse)', /^readJsonBody\t/],
 	['validation (zod)', /^parseRequest\t/],
 	['calculation core', /^calculateAcrossVersions\t/],

@@ -1,4 +1,4 @@
-// node scripts/profile-request.mjs [anonymous|member] — where a calculation request's CPU goes.
+// node scripts/profile-request.mjs [anonymous|member|dashboard] — where a request's CPU goes.
 //
 // Expects the production bundle (`npm run build`; RUNRATE_BUILD_DIR to read another folder). Starts a
 // throwaway PostgreSQL with the demo data and the stand-ins (as load.mjs does), then ONE app process
@@ -10,7 +10,8 @@
 //
 // anonymous (default): no cookie, each request from one of 1,000 addresses (X-Forwarded-For, which
 // the app trusts here only: ADDRESS_HEADER), so the per-client limit (60 a minute) is not what is
-// measured. member: signed in as the demo owner, members' limit lifted as in load.mjs.
+// measured. member: signed in as the demo owner, members' limit lifted as in load.mjs. dashboard: the
+// demo owner's GET /w/:workspace/sites (the sites dashboard, server-rendered), signed in the same way.
 // CPU time, not latency: other work on the machine inflates it far less (some: shared caches and
 // cores), so the load average is printed with it; compare builds side by side, at the same moment.
 import autocannon from 'autocannon';
@@ -20,7 +21,7 @@ import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { selfTimes } from './cpu-profile.mjs';
 import { freePort, log, runOrThrow, startService } from './lib.mjs';
-import { calculation, signIn } from './load-requests.mjs';
+import { calculation, people, signIn } from './load-requests.mjs';
 import { migrateSeedAndStartStandIns, runThenCleanUp, standInEnv } from './local-services.mjs';
 
 const AS = process.argv[2] ?? 'anonymous';
@@ -47,6 +48,8 @@ const round = (x, digits = 2) => Number(x.toFixed(digits));
 
 /** autocannon's options for the mode: the body, and a cookie or rotating addresses. */
 function requestOptions(base, cookie) {
+	if (AS === 'dashboard')
+		return { url: base, requests: [{ path: `/w/${people.workspaces[0].id}/sites`, headers: { cookie } }] };
 	const headers = { 'content-type': 'application/json', ...(cookie ? { cookie } : {}) };
 	let n = 0;
 	const setupRequest = (req) => {
@@ -62,7 +65,8 @@ function requestOptions(base, cookie) {
 }
 
 async function main() {
-	if (!['anonymous', 'member'].includes(AS)) throw new Error('usage: profile-request.mjs [anonymous|member]');
+	if (!['anonymous', 'member', 'dashboard'].includes(AS))
+		throw new Error('usage: profile-request.mjs [anonymous|member|dashboard]');
 	const [pgPort, smtpPort, viewPort, s3Port, appPort] = await Promise.all(
 		Array.from({ length: 5 }, freePort)
 	);
@@ -94,7 +98,7 @@ async function main() {
 		}
 	);
 	children.push(app);
-	const cookie = AS === 'member' ? await signIn(base, 'owner@example.org') : undefined;
+	const cookie = AS === 'anonymous' ? undefined : await signIn(base, 'owner@example.org');
 	const options = { connections: CONNECTIONS, ...requestOptions(base, cookie) };
 	log(
 		'profile',

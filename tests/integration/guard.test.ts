@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { RequestEvent } from '@sveltejs/kit';
+import { eq } from 'drizzle-orm';
 import { client, db } from '$lib/server/db';
 import { memberships } from '$lib/server/db/schema';
 import { requireRole, type Role } from '$lib/server/guard';
@@ -11,12 +12,28 @@ const people: Record<string, SessionUser> = {};
 let wsA = '';
 let wsB = '';
 
-function eventFor(user: SessionUser | null, path = '/w/x'): RequestEvent {
+function eventFor(user: SessionUser | null, path = '/w/x', method = 'GET'): RequestEvent {
 	return {
 		locals: { user },
 		url: new URL(`http://127.0.0.1${path}`),
-		request: new Request(`http://127.0.0.1${path}`)
+		request: new Request(`http://127.0.0.1${path}`, { method })
 	} as unknown as RequestEvent;
+}
+
+/** The statements `work` sends, with the options drizzle passed, counted at the database client. */
+async function sent(work: () => Promise<unknown>) {
+	const original = client.unsafe;
+	const seen: { query: string; prepare: unknown }[] = [];
+	client.unsafe = ((...args: Parameters<typeof original>) => {
+		seen.push({ query: String(args[0]), prepare: (args[2] as { prepare?: boolean })?.prepare });
+		return original.apply(client, args);
+	}) as typeof original;
+	try {
+		await work();
+	} finally {
+		client.unsafe = original;
+	}
+	return seen;
 }
 
 async function statusOf(promise: Promise<unknown>): Promise<number> {
@@ -71,5 +88,37 @@ describe('requireRole, the one authorization check', () => {
 	it('gives the owner of workspace B nothing of workspace A', async () => {
 		expect(await statusOf(requireRole(eventFor(people.outsider!), wsB, 'owner'))).toBe(200);
 		expect(await statusOf(requireRole(eventFor(people.outsider!), wsA, 'viewer'))).toBe(404);
+	});
+});
+
+describe('the membership lookup', () => {
+	it('is made once for a GET request whose layout and page both check it', async () => {
+		const event = eventFor(people.editor!);
+		const statements = await sent(() =>
+			Promise.all([requireRole(event, wsA, 'viewer'), requireRole(event, wsA, 'editor')])
+		);
+		expect(statements).toHaveLength(1);
+		// Another request looks again: nothing is kept past the request.
+		expect(await sent(() => requireRole(eventFor(people.editor!), wsA, 'viewer'))).toHaveLength(1);
+	});
+
+	it('is made again within a form post, whose action may have changed the membership', async () => {
+		const event = eventFor(people.viewer!, '/w/x', 'POST');
+		expect(await statusOf(requireRole(event, wsA, 'viewer'))).toBe(200);
+		await db.update(memberships).set({ role: 'editor' }).where(eq(memberships.userId, people.viewer!.id));
+		try {
+			const statements = await sent(() => requireRole(event, wsA, 'editor'));
+			expect(statements).toHaveLength(1);
+		} finally {
+			await db.update(memberships).set({ role: 'viewer' }).where(eq(memberships.userId, people.viewer!.id));
+		}
+	});
+
+	it('goes to PostgreSQL as a named prepared statement, as every query with parameters does', async () => {
+		const statements = await sent(() => requireRole(eventFor(people.owner!), wsA, 'owner'));
+		expect(statements.map((s) => s.prepare)).toEqual([true]);
+		// A query built on the spot is prepared too (db/index.ts).
+		const built = await sent(() => db.select().from(memberships).where(eq(memberships.workspaceId, wsB)));
+		expect(built.map((s) => s.prepare)).toEqual([true]);
 	});
 });

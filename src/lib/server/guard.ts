@@ -25,6 +25,23 @@ export function requireUser(event: RequestEvent): SessionUser {
 	redirect(303, `/signin?next=${encodeURIComponent(event.url.pathname + event.url.search)}`);
 }
 
+/** The lookups a GET request already made: its layout and its page both check the same workspace. */
+const looked = new WeakMap<App.Locals, Map<string, ReturnType<typeof findMembership>>>();
+
+/**
+ * The membership, looked up once per GET request. Only GET: a form action may change the membership
+ * (a role, leaving), and the page's load that follows in the same request must see the change.
+ */
+function membershipOnce(event: RequestEvent, workspaceId: string, userId: string) {
+	if (event.request.method !== 'GET') return findMembership(workspaceId, userId);
+	let seen = looked.get(event.locals);
+	if (!seen) looked.set(event.locals, (seen = new Map()));
+	const key = `${workspaceId} ${userId}`;
+	let found = seen.get(key);
+	if (!found) seen.set(key, (found = findMembership(workspaceId, userId)));
+	return found;
+}
+
 /**
  * The one authorization check for anything inside a workspace. Someone who is not a member gets 404
  * (not 403), so nobody can learn which workspaces exist; a member below the needed role gets 403.
@@ -36,7 +53,7 @@ export async function requireRole(
 ): Promise<WorkspaceAccess> {
 	const user = requireUser(event);
 	if (!UUID.test(workspaceId)) error(404, 'Not found');
-	const row = await findMembership(workspaceId, user.id);
+	const row = await membershipOnce(event, workspaceId, user.id);
 	if (!row) error(404, 'Not found');
 	if (!roleAtLeast(row.role, needed))
 		error(403, `This needs the ${needed} role; you are a ${row.role} here.`);

@@ -1,4 +1,4 @@
-import { eq } from 'drizzle-orm';
+import { eq, sql } from 'drizzle-orm';
 import { db } from '../db';
 import { memberships } from '../db/schema';
 
@@ -11,10 +11,14 @@ export const WORKSPACES_PAGE = '/workspaces';
  * link goes here outside a workspace, so a grower with one farm is one click from their equipment.
  */
 export async function sitesHomeFor(userId: string): Promise<string> {
-	const rows = await db
-		.select({ workspaceId: memberships.workspaceId })
-		.from(memberships)
-		.where(eq(memberships.userId, userId))
-		.limit(2);
+	const rows = await firstTwoWorkspaces.execute({ userId });
 	return rows.length === 1 ? `/w/${rows[0]!.workspaceId}/sites` : WORKSPACES_PAGE;
 }
+
+// Built once: every signed-in page's layout runs it.
+const firstTwoWorkspaces = db
+	.select({ workspaceId: memberships.workspaceId })
+	.from(memberships)
+	.where(eq(memberships.userId, sql.placeholder('userId')))
+	.limit(2)
+	.prepare('first_two_workspaces');

@@ -1,4 +1,4 @@
-import { and, desc, eq, isNull, or } from 'drizzle-orm';
+import { and, desc, eq, isNull, or, sql } from 'drizzle-orm';
 import { env } from '$env/dynamic/private';
 import { money } from '$lib/text/numbers';
 import { db } from '../db';
@@ -133,13 +133,17 @@ const fanOut = defineJob<Published>('tariff-version-published', async (job) => {
 export const announceVersion = (job: Published) => fanOut.send(job);
 
 /** A workspace's latest notices, each with its links (the tariff, the sites billed on it). */
+// Built once: the dashboard and the workspace page show the latest notices on every view.
+const recentNoticesQuery = db
+	.select()
+	.from(notices)
+	.where(eq(notices.workspaceId, sql.placeholder('workspaceId')))
+	.orderBy(desc(notices.createdAt))
+	.limit(sql.placeholder('limit'))
+	.prepare('recent_notices');
+
 export async function recentNotices(workspaceId: string, limit = 10) {
-	const rows = await db
-		.select()
-		.from(notices)
-		.where(eq(notices.workspaceId, workspaceId))
-		.orderBy(desc(notices.createdAt))
-		.limit(limit);
+	const rows = await recentNoticesQuery.execute({ workspaceId, limit });
 	return Promise.all(
 		rows.map(async (row) => ({
 			id: row.id,

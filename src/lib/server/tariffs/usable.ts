@@ -1,5 +1,5 @@
 // The one rule for which tariff a site may use, asked where a tariff is chosen and again where it is used.
-import { eq, inArray } from 'drizzle-orm';
+import { eq, inArray, sql } from 'drizzle-orm';
 import { db } from '$lib/server/db';
 import { tariffs, tariffVersions } from '$lib/server/db/schema';
 import { findTariff, withVersions, type TariffRow } from '$lib/server/tariffs/tariff.service';
@@ -80,27 +80,29 @@ export async function usableTariffs(workspaceId: string, ids: string[]) {
 	return new Map(found.map((entry) => [entry.tariff.id, entry]));
 }
 
+// Built once, with the ids as one array parameter, so any number of tariffs is the same statement.
+const tariffKeysQuery = db
+	.select({
+		tariff: tariffs,
+		version: {
+			id: tariffVersions.id,
+			number: tariffVersions.number,
+			effectiveFrom: tariffVersions.effectiveFrom,
+			effectiveTo: tariffVersions.effectiveTo
+		}
+	})
+	.from(tariffs)
+	.leftJoin(tariffVersions, eq(tariffVersions.tariffId, tariffs.id))
+	.where(sql`${tariffs.id} = any(${sql.placeholder('ids')}::uuid[])`)
+	.prepare('usable_tariff_keys');
+
 /**
  * As `usableTariffs`, with each version's number and dates but not its rates: all a stored result's key
  * needs, so a list read from stored results never loads the rates. One query.
  */
 export async function usableTariffKeys(workspaceId: string, ids: string[]) {
 	const unique = [...new Set(ids)];
-	const rows = unique.length
-		? await db
-				.select({
-					tariff: tariffs,
-					version: {
-						id: tariffVersions.id,
-						number: tariffVersions.number,
-						effectiveFrom: tariffVersions.effectiveFrom,
-						effectiveTo: tariffVersions.effectiveTo
-					}
-				})
-				.from(tariffs)
-				.leftJoin(tariffVersions, eq(tariffVersions.tariffId, tariffs.id))
-				.where(inArray(tariffs.id, unique))
-		: [];
+	const rows = unique.length ? await tariffKeysQuery.execute({ ids: unique }) : [];
 	const found = new Map<
 		string,
 		{ tariff: TariffRow; versions: NonNullable<(typeof rows)[number]['version']>[] }

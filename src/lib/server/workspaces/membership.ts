@@ -1,4 +1,4 @@
-import { and, asc, count, eq, type SQL } from 'drizzle-orm';
+import { and, asc, count, eq, sql, type SQL } from 'drizzle-orm';
 import { db, type Tx } from '../db';
 import { memberships, siteGrants, users, workspaces, type Role } from '../db/schema';
 
@@ -10,13 +10,22 @@ const memberOf = (workspaceId: string, userId: string) =>
 
 /** The workspace and the user's role there, or null when they are not a member (the guard's one lookup). */
 export async function findMembership(workspaceId: string, userId: string) {
-	const [row] = await db
-		.select({ id: workspaces.id, name: workspaces.name, role: memberships.role })
-		.from(memberships)
-		.innerJoin(workspaces, eq(workspaces.id, memberships.workspaceId))
-		.where(memberOf(workspaceId, userId));
+	const [row] = await membershipQuery.execute({ workspaceId, userId });
 	return row ?? null;
 }
+
+// Built once: every page inside a workspace runs it, and building a query costs more CPU than sending it.
+const membershipQuery = db
+	.select({ id: workspaces.id, name: workspaces.name, role: memberships.role })
+	.from(memberships)
+	.innerJoin(workspaces, eq(workspaces.id, memberships.workspaceId))
+	.where(
+		and(
+			eq(memberships.workspaceId, sql.placeholder('workspaceId')),
+			eq(memberships.userId, sql.placeholder('userId'))
+		)
+	)
+	.prepare('find_membership');
 
 /** The user's role in the workspace, or null when they are not a member. */
 export async function memberRole(userId: string, workspaceId: string): Promise<Role | null> {
