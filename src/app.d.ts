@@ -5,6 +5,8 @@ declare global {
 		interface Locals {
 			/** The signed-in user, resolved once per request in hooks.server.ts; null when anonymous. */
 			user: SessionUser | null;
+			/** Where "Sites" leads the signed-in user, read with the session (`accounts/landing.ts`). */
+			sitesHome: string | null;
 			/** The live session's id (`auth/sessions.ts`) when signed in, so sign-out can end exactly it. */
 			sessionId: string | null;
 			/** Set by handleError when the database could not be reached, so the response becomes a 503. */

@@ -11,6 +11,7 @@ import {
 	sessionToken,
 	verifiedSession
 } from '$lib/server/auth/session-cache';
+import { sitesHomeOf } from '$lib/server/accounts/landing';
 import { liveSessionUser } from '$lib/server/auth/sessions';
 import { finishReadingBody } from '$lib/server/http/unread-body';
 import { isDatabaseUnavailable } from '$lib/server/db/errors';
@@ -25,6 +26,7 @@ import { unavailableResponse } from '$lib/server/http/unavailable';
 const resolveUser: Handle = async ({ event, resolve }) => {
 	event.locals.user = null;
 	event.locals.sessionId = null;
+	event.locals.sitesHome = null;
 	const token = sessionToken(event.cookies);
 	let session = verifiedSession(token);
 	if (!session && carriesSessionCookie(event.cookies)) {
@@ -37,7 +39,9 @@ const resolveUser: Handle = async ({ event, resolve }) => {
 	}
 	if (session) {
 		try {
-			event.locals.user = await liveSessionUser(session.userId, session.sid);
+			const live = await liveSessionUser(session.userId, session.sid);
+			event.locals.user = live?.user ?? null;
+			event.locals.sitesHome = live ? sitesHomeOf(live.someWorkspaces) : null;
 		} catch (error) {
 			if (isDatabaseUnavailable(error)) return unavailableResponse(event);
 			throw error;

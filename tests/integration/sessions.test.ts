@@ -12,6 +12,8 @@ import { client, db } from '$lib/server/db';
 import { userSessions, userTokens } from '$lib/server/db/schema';
 import { stopJobs } from '$lib/server/jobs';
 import { requestPasswordReset, resetPassword } from '$lib/server/accounts/password-reset';
+import { sitesHomeFor, sitesHomeOf, WORKSPACES_PAGE } from '$lib/server/accounts/landing';
+import { createWorkspace } from '$lib/server/workspaces/workspace.service';
 import { makeUser } from './fixtures';
 
 // Sessions that end (issue 14, item 6), against the real PostgreSQL of `npm test`. Invented people.
@@ -31,7 +33,10 @@ describe('a recorded session', () => {
 		const user = await person('grower');
 		const other = await person('other');
 		const sid = await startSession(user.id);
-		expect(await liveSessionUser(user.id, sid)).toMatchObject({ id: user.id, email: user.email });
+		expect(await liveSessionUser(user.id, sid)).toMatchObject({
+			user: { id: user.id, email: user.email },
+			someWorkspaces: []
+		});
 		expect(await liveSessionUser(other.id, sid)).toBeNull();
 		expect(await liveSessionUser(user.id, 'no-such-session')).toBeNull();
 
@@ -112,5 +117,21 @@ describe('a password reset', () => {
 		expect(await liveSessionUser(user.id, elsewhere)).toBeNull();
 		expect(await resetPassword(older!, 'the attacker’s choice')).toBeNull();
 		expect(await resetPassword(newer!, 'again with the same')).toBeNull();
+	});
+});
+
+describe('the session check', () => {
+	it('reads up to two of the person\'s workspaces with it, for where "Sites" leads', async () => {
+		const user = await person('adviser');
+		const sid = await startSession(user.id);
+		const first = await createWorkspace(`First ${tag}`, user.id);
+		expect((await liveSessionUser(user.id, sid))?.someWorkspaces).toEqual([first]);
+		expect(sitesHomeOf([first])).toBe(`/w/${first}/sites`);
+		await createWorkspace(`Second ${tag}`, user.id);
+		await createWorkspace(`Third ${tag}`, user.id);
+		const some = (await liveSessionUser(user.id, sid))?.someWorkspaces ?? [];
+		expect(some).toHaveLength(2);
+		expect(sitesHomeOf(some)).toBe(WORKSPACES_PAGE);
+		expect(sitesHomeOf(some)).toBe(await sitesHomeFor(user.id));
 	});
 });

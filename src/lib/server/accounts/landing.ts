@@ -12,7 +12,12 @@ export const WORKSPACES_PAGE = '/workspaces';
  */
 export async function sitesHomeFor(userId: string): Promise<string> {
 	const rows = await firstTwoWorkspaces.execute({ userId });
-	return rows.length === 1 ? `/w/${rows[0]!.workspaceId}/sites` : WORKSPACES_PAGE;
+	return sitesHomeOf(rows.map((r) => r.workspaceId));
+}
+
+/** As `sitesHomeFor`, from up to two of the person's workspace ids (the session check reads them). */
+export function sitesHomeOf(someWorkspaces: string[]): string {
+	return someWorkspaces.length === 1 ? `/w/${someWorkspaces[0]}/sites` : WORKSPACES_PAGE;
 }
 
 // Built once: every signed-in page's layout runs it.

@@ -1,7 +1,7 @@
 import { randomBytes } from 'node:crypto';
 import { and, eq, gt, isNotNull, isNull, lt, lte, or, sql } from 'drizzle-orm';
 import { db, type Tx } from '../db';
-import { users, userSessions } from '../db/schema';
+import { memberships, users, userSessions } from '../db/schema';
 
 /**
  * Sessions that can be ended.
@@ -43,15 +43,31 @@ export async function extendSession(sid: string, now = new Date()): Promise<void
 		);
 }
 
-/** The user behind a live session, or null when the session was ended, has expired or is someone else's. */
-export async function liveSessionUser(userId: string, sid: string): Promise<SessionUser | null> {
+/**
+ * The user behind a live session, or null when the session was ended, has expired or is someone else's;
+ * with up to two of their workspaces, read in the same statement, for where "Sites" leads
+ * (`accounts/landing.ts`): every signed-in page shows that link.
+ */
+export async function liveSessionUser(
+	userId: string,
+	sid: string
+): Promise<{ user: SessionUser; someWorkspaces: string[] } | null> {
 	const [row] = await liveSessionQuery.execute({ userId, sid });
-	return row ?? null;
+	if (!row) return null;
+	const { someWorkspaces, ...user } = row;
+	return { user, someWorkspaces };
 }
 
 // Built once: it runs on every signed-in request, and building a query costs more CPU than sending it.
 const liveSessionQuery = db
-	.select({ id: users.id, email: users.email, name: users.name, isAdmin: users.isAdmin })
+	.select({
+		id: users.id,
+		email: users.email,
+		name: users.name,
+		isAdmin: users.isAdmin,
+		someWorkspaces: sql<string[]>`array(select ${memberships.workspaceId} from ${memberships}
+			where ${memberships.userId} = ${users.id} limit 2)`
+	})
 	.from(users)
 	.innerJoin(
 		userSessions,
