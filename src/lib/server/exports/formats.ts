@@ -16,14 +16,25 @@ export interface Formats {
 	whole: string;
 }
 
+/**
+ * Symbols found so far, by three-letter code (the tariff schema's), so it stays small: making an
+ * Intl.NumberFormat costs more than all the rest of a small workbook's formats.
+ */
+const symbols = new Map<string, string>();
+
 /** The symbol a reader knows the currency by ("$", "€", "CA$"), or its code. */
 function currencySymbol(currency: string): string {
-	try {
-		const parts = new Intl.NumberFormat('en-US', { style: 'currency', currency }).formatToParts(1);
-		return parts.find((part) => part.type === 'currency')?.value ?? currency;
-	} catch {
-		return currency;
+	let symbol = symbols.get(currency);
+	if (symbol === undefined) {
+		try {
+			const parts = new Intl.NumberFormat('en-US', { style: 'currency', currency }).formatToParts(1);
+			symbol = parts.find((part) => part.type === 'currency')?.value ?? currency;
+		} catch {
+			symbol = currency;
+		}
+		symbols.set(currency, symbol);
 	}
+	return symbol;
 }
 
 export function formatsFor(currency: string): Formats {
