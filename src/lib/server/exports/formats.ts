@@ -17,10 +17,11 @@ export interface Formats {
 }
 
 /**
- * Symbols found so far, by three-letter code (the tariff schema's), so it stays small: making an
- * Intl.NumberFormat costs more than all the rest of a small workbook's formats.
+ * Symbols found so far: making an Intl.NumberFormat costs more than all the rest of a small workbook's
+ * formats. At most 32 are kept (the map is emptied when full).
  */
 const symbols = new Map<string, string>();
+const KEPT_CURRENCIES = 32;
 
 /** The symbol a reader knows the currency by ("$", "€", "CA$"), or its code. */
 function currencySymbol(currency: string): string {
@@ -32,6 +33,7 @@ function currencySymbol(currency: string): string {
 		} catch {
 			symbol = currency;
 		}
+		if (symbols.size >= KEPT_CURRENCIES) symbols.clear();
 		symbols.set(currency, symbol);
 	}
 	return symbol;
