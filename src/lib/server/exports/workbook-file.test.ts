@@ -64,10 +64,9 @@ describe('the shared formulas of 6 scenarios × 200 devices', () => {
 			)) {
 				const [master] = masters.get(si) ?? [];
 				if (!master) throw new Error(`${address} copies shared formula ${si}, which has no master`);
-				const [at, from, to] = [address, master.from, master.to].map(position);
-				const within = (p = at) =>
-					p.col >= from!.col && p.col <= to!.col && p.row >= from!.row && p.row <= to!.row;
-				expect(within(), `${address} within ${master.from}:${master.to}`).toBe(true);
+				const [at, from, to] = [position(address), position(master.from), position(master.to)];
+				const within = at.col >= from.col && at.col <= to.col && at.row >= from.row && at.row <= to.row;
+				expect(within, `${address} within ${master.from}:${master.to}`).toBe(true);
 				copies++;
 			}
 		}
