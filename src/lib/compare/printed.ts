@@ -1,7 +1,24 @@
 // Intl rather than Luxon: the printed pages run this in the browser too, and Luxon would be 20 kB of
 // their JavaScript for one date.
-const inWords = (timeZone: string) =>
-	new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'long', year: 'numeric', timeZone });
+
+// One formatter per time zone: making one costs far more than formatting a date (a workbook formats
+// several per tariff). At most 32 are kept (the map is emptied when full), whatever zones are stored.
+const KEPT_ZONES = 32;
+const formatters = new Map<string, Intl.DateTimeFormat>();
+function inWords(timeZone: string): Intl.DateTimeFormat {
+	let formatter = formatters.get(timeZone);
+	if (!formatter) {
+		formatter = new Intl.DateTimeFormat('en-GB', {
+			day: 'numeric',
+			month: 'long',
+			year: 'numeric',
+			timeZone
+		});
+		if (formatters.size >= KEPT_ZONES) formatters.clear();
+		formatters.set(timeZone, formatter);
+	}
+	return formatter;
+}
 
 /**
  * A date in words in a site's time zone, as a printed report states it: "3 December 2026". A report

@@ -62,7 +62,6 @@ export function writeCashFlowSheet(
 	const lifecycleRow = FIRST_YEAR_ROW + horizon + 1;
 	out.text(lifecycleRow, 1, `${OUTPUT_LABELS.lifecycle} (present value)`, 'bold');
 	scenarios.forEach((scenario, s) => writeScenario(out, scenario, 2 + s * PER_SCENARIO, finance, formats));
-	out.freeze(4, 1);
 }
 
 function writeScenario(

@@ -1,4 +1,4 @@
-import type { Alignment, Borders, Fill, Font, Style, Worksheet } from 'exceljs';
+import type { Alignment, Borders, Cell, CellFormulaValue, Fill, Font, Style, Worksheet } from 'exceljs';
 import { neutraliseFormula } from './safe-text';
 
 /** A formula's cached result as the workbook stores it (programs that do not recalculate show it). */
@@ -66,7 +66,8 @@ export type Look = keyof typeof LOOKS;
  * Cells that look alike share one style object, which the writer of the file recognises at once.
  */
 export class SheetWriter {
-	private readonly styles = new Map<string, Partial<Style>>();
+	/** By look, then by number format ('' for none): no key string is built per cell. */
+	private readonly styles = new Map<Look, Map<string, Partial<Style>>>();
 
 	constructor(
 		readonly sheet: Worksheet,
@@ -74,24 +75,30 @@ export class SheetWriter {
 	) {}
 
 	private style(look: Look, numFmt: string | undefined): Partial<Style> {
-		const key = `${look}|${numFmt ?? ''}`;
-		let style = this.styles.get(key);
+		let byFormat = this.styles.get(look);
+		if (!byFormat) this.styles.set(look, (byFormat = new Map()));
+		let style = byFormat.get(numFmt ?? '');
 		if (!style) {
 			style = numFmt ? { ...LOOKS[look], numFmt } : { ...LOOKS[look] };
-			this.styles.set(key, style);
+			byFormat.set(numFmt ?? '', style);
 		}
 		return style;
 	}
 
+	/** The cell by its row: `sheet.getCell(row, col)` would spell its address and parse it again. */
+	private cell(row: number, col: number): Cell {
+		return this.sheet.getRow(row).getCell(col);
+	}
+
 	text(row: number, col: number, text: string, look: Look = 'plain'): void {
-		const cell = this.sheet.getCell(row, col);
+		const cell = this.cell(row, col);
 		cell.value = neutraliseFormula(text);
 		cell.style = this.style(look, undefined);
 	}
 
 	number(row: number, col: number, value: number | null, numFmt?: string, look: Look = 'plain'): void {
 		if (value === null) return;
-		const cell = this.sheet.getCell(row, col);
+		const cell = this.cell(row, col);
 		cell.value = value;
 		cell.style = this.style(look, numFmt);
 	}
@@ -104,9 +111,24 @@ export class SheetWriter {
 		numFmt?: string,
 		look: Look = 'plain'
 	): void {
-		const cell = this.sheet.getCell(row, col);
+		const cell = this.cell(row, col);
 		cell.value = result === null ? { formula } : { formula, result };
 		cell.style = this.style(look, numFmt);
+	}
+
+	/**
+	 * A formula whose copies fill `ref` (this cell at its top left; see `shared`), marked as shared
+	 * here because the streaming writer writes this cell before any copy. That writer numbers the
+	 * shared formulas afresh on each row, so a sheet's masters must all be on one row (a test checks
+	 * the written file).
+	 */
+	master(row: number, col: number, formula: string, ref: string, result: Result, numFmt?: string): void {
+		const cell = this.cell(row, col);
+		// exceljs's own form for a master with its range (its README, "Shared Formula"), not in its types.
+		const value: CellFormulaValue & { shareType: 'shared'; ref: string } =
+			result === null ? { formula, shareType: 'shared', ref } : { formula, result, shareType: 'shared', ref };
+		cell.value = value;
+		cell.style = this.style('plain', numFmt);
 	}
 
 	/**
@@ -114,7 +136,7 @@ export class SheetWriter {
 	 * stores the formula once, and each copy shifts its relative references as a fill-down would.
 	 */
 	shared(row: number, col: number, master: string, result: Result, numFmt?: string): void {
-		const cell = this.sheet.getCell(row, col);
+		const cell = this.cell(row, col);
 		cell.value = result === null ? { sharedFormula: master } : { sharedFormula: master, result };
 		cell.style = this.style('plain', numFmt);
 	}
@@ -149,6 +171,7 @@ export class SheetWriter {
 		});
 	}
 
+	/** Frozen panes, for a sheet of a workbook in memory (a streaming sheet takes them when added). */
 	freeze(rows: number, cols: number): void {
 		this.sheet.views = [{ state: 'frozen', xSplit: cols, ySplit: rows }];
 	}

@@ -1,4 +1,3 @@
-import ExcelJS from 'exceljs';
 import type { CompareRequest, CompareResponse } from '$lib/calc';
 import { ASSUMPTIONS_SHEET, writeAssumptionsSheet } from './assumptions-sheet';
 import { CASH_FLOW_SHEET, lifecycleCell, writeCashFlowSheet } from './cashflow-sheet';
@@ -15,6 +14,7 @@ import type { TariffOrigin } from './tariff-provenance';
 import { writeTariffSheet } from './tariff-sheet';
 import { tariffUses } from './tariff-uses';
 import { WATER_AIR_SHEET, type WaterAirScenario, writeWaterAirSheet } from './water-air-sheet';
+import { type Frozen, addSheet, streamingWorkbook, workbookFile } from './workbook-file';
 
 export interface ComparisonExport {
 	/** e.g. "Alder Creek hatchery (invented)"; used in sheet titles. */
@@ -43,13 +43,8 @@ export interface ComparisonExport {
 const TARIFF_SHEET = 'Tariff';
 /** The Monthly sheet's year row, as a month index. */
 const YEAR = YEAR_ROW - FIRST_MONTH_ROW;
-/**
- * Fast deflate: the text compresses well at any level, and level 1 takes about a third of the time of
- * the default on a large comparison (measured, 6 scenarios × 200 devices).
- */
-const ZIP: Partial<ExcelJS.XlsxWriteOptions> = {
-	zip: { compression: 'DEFLATE', compressionOptions: { level: 1 } }
-};
+/** The panes most sheets keep in view: their title and header rows, and the name column. */
+const HEADS: Frozen = { rows: 4, cols: 1 };
 
 /**
  * The comparison as a workbook whose figures are live formulas: a spreadsheet program that
@@ -59,23 +54,17 @@ const ZIP: Partial<ExcelJS.XlsxWriteOptions> = {
  */
 export async function comparisonWorkbook(input: ComparisonExport): Promise<Buffer> {
 	const { request } = input;
-	const workbook = new ExcelJS.Workbook();
-	workbook.creator = 'Runrate';
-	workbook.created = new Date(input.generatedAt);
-	// Programs that keep cached results (Excel among them) recalculate on opening.
-	workbook.calcProperties.fullCalcOnLoad = true;
+	// Programs that keep cached results (Excel among them) recalculate it on opening (workbookFile()).
+	const workbook = streamingWorkbook('Runrate', new Date(input.generatedAt));
 	const formats = formatsFor(request.tariff.currency);
 	const names = request.scenarios.map((scenario, s) => scenarioSheetName(s, scenario.name));
-	const sheet = (name: string) => new SheetWriter(workbook.addWorksheet(name), name);
-	const summary = sheet(SUMMARY_SHEET);
-	const scenarioSheets = names.map(sheet);
-	const [monthly, tariffSheet, cashFlows, assumptions] = [
-		MONTHLY_SHEET,
-		TARIFF_SHEET,
-		CASH_FLOW_SHEET,
-		ASSUMPTIONS_SHEET
-	].map(sheet);
-	if (!monthly || !tariffSheet || !cashFlows || !assumptions) throw new Error('Sheets missing');
+	const sheet = (name: string, frozen?: Frozen) => new SheetWriter(addSheet(workbook, name, frozen), name);
+	const summary = sheet(SUMMARY_SHEET, HEADS);
+	const scenarioSheets = names.map((name) => sheet(name, HEADS));
+	const monthly = sheet(MONTHLY_SHEET, { rows: 4, cols: 2 });
+	const tariffSheet = sheet(TARIFF_SHEET, { rows: 2, cols: 0 });
+	const cashFlows = sheet(CASH_FLOW_SHEET, HEADS);
+	const assumptions = sheet(ASSUMPTIONS_SHEET);
 
 	const tariffs = request.scenarios.map((scenario) => scenario.tariff ?? request.tariff);
 	const { uses, useOf } = tariffUses(tariffs, names, input.scenarios);
@@ -130,7 +119,7 @@ export async function comparisonWorkbook(input: ComparisonExport): Promise<Buffe
 		formats
 	});
 	if (input.waterAir?.length) {
-		const waterAir = sheet(WATER_AIR_SHEET);
+		const waterAir = sheet(WATER_AIR_SHEET, HEADS);
 		writeWaterAirSheet(waterAir, input.title, input.waterAir);
 		printSetup(waterAir.sheet, { titleRows: '4:4', titleColumns: 'A:A', pagesWide: 2 });
 	}
@@ -141,7 +130,7 @@ export async function comparisonWorkbook(input: ComparisonExport): Promise<Buffe
 	printSetup(tariffSheet.sheet, { titleRows: '1:1' });
 	printSetup(cashFlows.sheet, { titleRows: '3:4', titleColumns: 'A:A' });
 	printSetup(assumptions.sheet);
-	return Buffer.from(await workbook.xlsx.writeBuffer(ZIP));
+	return workbookFile(workbook);
 }
 
 /**

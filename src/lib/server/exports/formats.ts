@@ -16,14 +16,27 @@ export interface Formats {
 	whole: string;
 }
 
+/**
+ * Symbols found so far: making an Intl.NumberFormat costs more than all the rest of a small workbook's
+ * formats. At most 32 are kept (the map is emptied when full).
+ */
+const symbols = new Map<string, string>();
+const KEPT_CURRENCIES = 32;
+
 /** The symbol a reader knows the currency by ("$", "€", "CA$"), or its code. */
 function currencySymbol(currency: string): string {
-	try {
-		const parts = new Intl.NumberFormat('en-US', { style: 'currency', currency }).formatToParts(1);
-		return parts.find((part) => part.type === 'currency')?.value ?? currency;
-	} catch {
-		return currency;
+	let symbol = symbols.get(currency);
+	if (symbol === undefined) {
+		try {
+			const parts = new Intl.NumberFormat('en-US', { style: 'currency', currency }).formatToParts(1);
+			symbol = parts.find((part) => part.type === 'currency')?.value ?? currency;
+		} catch {
+			symbol = currency;
+		}
+		if (symbols.size >= KEPT_CURRENCIES) symbols.clear();
+		symbols.set(currency, symbol);
 	}
+	return symbol;
 }
 
 export function formatsFor(currency: string): Formats {

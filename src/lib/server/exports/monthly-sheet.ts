@@ -54,7 +54,6 @@ export function writeMonthlySheet(
 		formats.whole
 	);
 	for (const scenario of scenarios) writeBlock(out, scenario, formats);
-	out.freeze(4, 2);
 }
 
 function writeBlock(out: SheetWriter, scenario: MonthlyScenario, formats: Formats): void {

@@ -1,4 +1,5 @@
 import type { Worksheet } from 'exceljs';
+import { columnName } from './cells';
 
 /** How one sheet prints: which rows (and columns) repeat on every page, and how many pages wide it is. */
 export interface SheetPrint {
@@ -16,7 +17,7 @@ export interface SheetPrint {
  * down as it needs), the title rows repeated, narrow margins in inches (exceljs's unit).
  */
 export function printSetup(sheet: Worksheet, print: SheetPrint = {}): void {
-	const range = sheet.dimensions.range;
+	const range = usedRange(sheet);
 	sheet.pageSetup = {
 		...sheet.pageSetup,
 		orientation: 'landscape',
@@ -30,4 +31,25 @@ export function printSetup(sheet: Worksheet, print: SheetPrint = {}): void {
 		...(print.titleColumns ? { printTitlesColumn: print.titleColumns } : {})
 	};
 	sheet.headerFooter = { ...sheet.headerFooter, oddFooter: '&L&A&RPage &P of &N' };
+}
+
+/**
+ * The range from the first to the last cell written, as `sheet.dimensions` gives it for a workbook in
+ * memory; a streaming sheet does not keep its dimensions, but holds its rows until it is committed.
+ */
+function usedRange(sheet: Worksheet): string | undefined {
+	let top = 0;
+	let bottom = 0;
+	let left = Infinity;
+	let right = 0;
+	sheet.eachRow((row, r) => {
+		// Row.dimensions (the row's first and last cell with a value) is in exceljs but not its types.
+		const used = (row as typeof row & { dimensions: { min: number; max: number } | null }).dimensions;
+		if (!used) return;
+		top ||= r;
+		bottom = r;
+		left = Math.min(left, used.min);
+		right = Math.max(right, used.max);
+	});
+	return top ? `${columnName(left)}${top}:${columnName(right)}${bottom}` : undefined;
 }

@@ -100,15 +100,19 @@ function writeResults(input: ScenarioSheetInput, masters: Masters, d: number, ro
 	const device = input.scenario.equipment[d];
 	if (!device) return;
 	const first = row === layout.firstDevice;
+	// A formula is written once, in the first device's row; `last` is the last column its copies fill.
 	const put = (
 		col: number,
 		key: keyof Masters,
 		value: number,
 		format: string,
-		master = a1(col, layout.firstDevice)
+		masterCol = col,
+		last = col
 	) => {
-		if (first && master === a1(col, row)) out.formula(row, col, masters[key], value, format);
-		else out.shared(row, col, master, value, format);
+		const master = a1(masterCol, layout.firstDevice);
+		if (!first || col !== masterCol) out.shared(row, col, master, value, format);
+		else if (last === col && layout.lastDevice === row) out.formula(row, col, masters[key], value, format);
+		else out.master(row, col, masters[key], `${master}:${a1(last, layout.lastDevice)}`, value, format);
 	};
 	put(DEVICE.unitWatts, 'unitWatts', unitWatts(device.power), '#,##0.##');
 	put(DEVICE.runKw, 'runKw', figures.runKw[d] ?? 0, formats.kw);
@@ -124,9 +128,10 @@ function writeResults(input: ScenarioSheetInput, masters: Masters, d: number, ro
 	const kwh = result.periods.map((period) => period.equipment[d]?.kwh ?? 0);
 	const cost = result.periods.map((period) => period.equipment[d]?.cost ?? 0);
 	kwh.forEach((value, m) => {
-		put(DEVICE.kwh + m, 'kwh', value, formats.kwh, a1(DEVICE.kwh, layout.firstDevice));
+		put(DEVICE.kwh + m, 'kwh', value, formats.kwh, DEVICE.kwh, DEVICE.kwh + kwh.length - 1);
 		if (asValues) out.number(row, DEVICE.cost + m, cost[m] ?? 0, formats.money);
-		else put(DEVICE.cost + m, 'cost', cost[m] ?? 0, formats.money, a1(DEVICE.cost, layout.firstDevice));
+		else
+			put(DEVICE.cost + m, 'cost', cost[m] ?? 0, formats.money, DEVICE.cost, DEVICE.cost + cost.length - 1);
 	});
 	put(DEVICE.annualKwh, 'annualKwh', sum(kwh), formats.kwh);
 	put(DEVICE.annualCost, 'annualCost', sum(cost), formats.money);

@@ -52,7 +52,6 @@ export function writeScenarioSheet(input: ScenarioSheetInput, title: string): vo
 	out.text(3, DEVICE.cost, 'Cost by month (the device’s share)', 'bold');
 	const months = figures.months.map(monthHeading);
 	out.headers(4, 1, [...INPUT_HEADERS, ...months, ...months]);
-	out.freeze(4, 1);
 	writeDevices(input);
 	writeTotals(input);
 

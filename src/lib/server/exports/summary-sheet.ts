@@ -165,5 +165,4 @@ export function writeSummarySheet(out: SheetWriter, input: SummaryInput): void {
 		);
 	});
 	writeInputs(out, input, inputsRow(count));
-	out.freeze(4, 1);
 }

@@ -58,7 +58,6 @@ export function writeTariffSheet(out: SheetWriter, uses: readonly TariffUse[]): 
 		'note'
 	);
 	out.sheet.getRow(2).height = 45;
-	out.freeze(2, 0);
 	let row = 4;
 	return uses.map((use) => {
 		const written = writeBlock(out, use, row);

@@ -100,6 +100,5 @@ export function writeWaterAirSheet(
 		cells.designs.push(written.cells);
 		row = written.row;
 	}
-	out.freeze(4, 1);
 	return cells;
 }
