@@ -29,6 +29,8 @@ export function streamingWorkbook(creator: string, created: Date): ExcelJS.strea
 		zip: { zlib: { level: 1 } }
 	});
 	workbook.creator = creator;
+	// Left unset, the streaming writer names its own library here.
+	workbook.lastModifiedBy = creator;
 	workbook.created = created;
 	files.set(workbook, chunks);
 	return workbook;
