@@ -13,6 +13,7 @@ describe('the chooser’s query parameters', () => {
 	it('is still picking only when asked to and fewer than two are picked', () => {
 		expect(stillPicking(new URLSearchParams(`picking=1&scenarios=${A}`))).toBe(true);
 		expect(stillPicking(new URLSearchParams('picking=1'))).toBe(true);
+		expect(stillPicking(new URLSearchParams(`shown=40&scenarios=${A}`))).toBe(true);
 		expect(stillPicking(new URLSearchParams(`picking=1&scenarios=${A},${B}`))).toBe(false);
 		// Compare with one scenario keeps its error: "Pick at least two scenarios to compare".
 		expect(stillPicking(new URLSearchParams(`scenarios=${A}`))).toBe(false);

@@ -1,7 +1,7 @@
 // The chooser's own query parameters, read where a comparison is loaded. They work without scripts too:
 // the chooser's Find, Show more and Remove buttons then submit the GET form to the page itself.
 
-/** `picking=1`: the person is still choosing (Find, Show more), so fewer than two scenarios is no error yet. */
+/** `picking=1`: the person is still choosing (Find, Remove), so fewer than two scenarios is no error yet. */
 export const PICKING = 'picking';
 
 /** The scenario ids in a query: one `scenarios` per ticked box, or one comma-separated value from a link. */
@@ -15,9 +15,12 @@ export const scenarioIds = (params: URLSearchParams): string[] => [
 	)
 ];
 
-/** True while the person is choosing and has picked fewer than two: list the choices, compare nothing. */
+/**
+ * True while the person is choosing (Find, Remove, or Show more: `shown`) and has picked fewer than two:
+ * list the choices, compare nothing, say nothing is wrong.
+ */
 export const stillPicking = (params: URLSearchParams): boolean =>
-	params.has(PICKING) && scenarioIds(params).length < 2;
+	(params.has(PICKING) || params.has('shown')) && scenarioIds(params).length < 2;
 
 /**
  * Where a Remove button sent without scripts leads (`remove=<id>`): the same address without that
