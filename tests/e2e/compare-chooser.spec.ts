@@ -1,5 +1,5 @@
 import { expect, test, type Page } from '@playwright/test';
-import { AXE_CONTEXT, blockingFindings } from './axe';
+import { blockingFindings, phoneWithAxe } from './axe';
 import { gotoReady, signInWithPassword } from './helpers';
 import { demoSites } from './site-setup';
 
@@ -94,12 +94,7 @@ test.describe('the compare page’s scenario chooser', () => {
 		browser,
 		baseURL
 	}) => {
-		const context = await browser.newContext({
-			baseURL,
-			viewport: { width: 390, height: 844 },
-			...AXE_CONTEXT
-		});
-		const page = await context.newPage();
+		const { context, page } = await phoneWithAxe(browser, baseURL);
 		await signInWithPassword(page, 'viewer@example.org');
 		await gotoReady(page, `/compare?scenarios=${hatchery.scenarios.map((s) => s.id).join(',')}`);
 		await expect(page.getByRole('heading', { name: 'Side by side' })).toBeVisible();
