@@ -22,6 +22,9 @@ test.describe('the compare page’s scenario chooser', () => {
 	}) => {
 		await signInWithPassword(page, 'viewer@example.org');
 		await gotoReady(page, '/compare');
+		// Picking and searching fetch the comparison, never the page's list of choices again.
+		const listLoads: string[] = [];
+		page.on('request', (r) => void (r.url().includes('/compare/__data.json') && listLoads.push(r.url())));
 		await page.getByLabel(FIND).fill('alder creek');
 		await expect(page.getByRole('status').filter({ hasText: 'match' })).toHaveText(
 			/^\d+ scenarios at 1 site match “alder creek”\.$/
@@ -48,6 +51,7 @@ test.describe('the compare page’s scenario chooser', () => {
 		await expect(compared).not.toContainText(hatchery.scenarios[1]!.name);
 		// The first picked is the baseline.
 		await expect(page.getByLabel('Baseline', { exact: true })).toHaveValue(hatchery.scenarios[0]!.id);
+		expect(listLoads).toEqual([]);
 	});
 
 	test('without scripts, Find asks the page itself and keeps the picks and what was typed; Remove works too', async ({

@@ -12,11 +12,16 @@ export const load = (async (event) => {
 	const removed = afterRemoval(event.url);
 	if (removed) redirect(303, removed);
 	const { searchParams } = event.url;
+	// Read untracked: ticking a box or typing must not send the list again (the browser filters it).
+	const wanted = event.untrack(() => ({
+		find: searchParams.get('find') ?? '',
+		picked: scenarioIds(searchParams)
+	}));
+	const choices = await pickerChoices(user.id, wanted);
+	// Past the bound the list depends on the search: then a new Find loads it again.
+	if (choices.left > 0) searchParams.get('find');
 	return {
-		choices: await pickerChoices(user.id, {
-			find: searchParams.get('find') ?? '',
-			picked: scenarioIds(searchParams)
-		}),
+		choices,
 		defaultStart: defaultStart(DateTime.now().toISODate() ?? '2026-01-01')
 	};
 }) satisfies PageServerLoad;
