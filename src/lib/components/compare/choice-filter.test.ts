@@ -3,6 +3,7 @@ import {
 	type ChoiceSite,
 	SITES_AT_ONCE,
 	boundChoices,
+	bySite,
 	findChoices,
 	wordsOf,
 	foundWords,
@@ -75,7 +76,7 @@ describe('what the chooser lists and says', () => {
 	});
 
 	it('keeps the picked scenarios in the order picked, with their sites, whatever the search', () => {
-		const picked = pickedChoices(adviser, ['s-150-b', 'unknown', 's-3-a']);
+		const picked = pickedChoices(adviser, ['s-150-b', 'unknown', 's-3-a', 's-150-b']);
 		expect(picked.map((p) => `${p.name} · ${p.siteName}`)).toEqual([
 			'Smaller pump · Bench site 150 (generated)',
 			'Installed now · Bench site 003 (generated)'
@@ -121,5 +122,22 @@ describe('the list the server sends', () => {
 	it('an address full of ids sends the sites of the first twenty only', () => {
 		const picked = adviser.map((s) => s.scenarios[0]!.id);
 		expect(boundChoices(adviser, { find: '', picked }, 30).sites).toHaveLength(20);
+	});
+});
+
+describe('grouping the readable scenarios by site', () => {
+	it('keeps two sites of the same name apart, whose rows interleave when sorted by name', () => {
+		const row = (siteId: string, id: string) => ({
+			id,
+			name: `Scenario ${id}`,
+			isBaseline: false,
+			siteId,
+			siteName: 'Matrix test site (invented)'
+		});
+		const sites = bySite([row('x', '1'), row('y', '2'), row('x', '3'), row('y', '4')]);
+		expect(sites.map((s) => [s.id, s.scenarios.map((c) => c.id)])).toEqual([
+			['x', ['1', '3']],
+			['y', ['2', '4']]
+		]);
 	});
 });

@@ -10,6 +10,24 @@ export type ChoiceSite = { id: string; name: string; scenarios: ChoiceScenario[]
 /** A picked scenario with its site's name: what the "Picked" list and the baseline menu show. */
 export type PickedChoice = ChoiceScenario & { siteName: string };
 
+/** One row of the scenarios a person may read, with its site (`readableScenarios`). */
+export type ChoiceRow = ChoiceScenario & { siteId: string; siteName: string };
+
+/**
+ * Rows grouped by site, in the order each site first appears. By id, not by neighbours: two sites may
+ * share a name, and their rows then interleave in a list sorted by name.
+ */
+export function bySite(rows: ChoiceRow[]): ChoiceSite[] {
+	const sites = new Map<string, ChoiceSite>();
+	for (const row of rows) {
+		const scenario = { id: row.id, name: row.name, isBaseline: row.isBaseline };
+		const site = sites.get(row.siteId);
+		if (site) site.scenarios.push(scenario);
+		else sites.set(row.siteId, { id: row.siteId, name: row.siteName, scenarios: [scenario] });
+	}
+	return [...sites.values()];
+}
+
 /** The sites listed at once; "Show more" adds as many again. Up to this many sites, all are listed. */
 export const SITES_AT_ONCE = 20;
 
@@ -53,7 +71,8 @@ export function findChoices(sites: ChoiceSite[], find: string): ChoiceSite[] {
 export function pickedChoices(sites: ChoiceSite[], ids: string[]): PickedChoice[] {
 	const byId = new Map<string, PickedChoice>();
 	for (const site of sites) for (const s of site.scenarios) byId.set(s.id, { ...s, siteName: site.name });
-	return ids.flatMap((id) => byId.get(id) ?? []);
+	// Once each: an address may name a scenario twice, and the lists are keyed by id.
+	return [...new Set(ids)].flatMap((id) => byId.get(id) ?? []);
 }
 
 /** How many sites to list: all up to SITES_AT_ONCE; past that, `shown` (a whole number of steps). */

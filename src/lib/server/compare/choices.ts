@@ -1,7 +1,7 @@
 import { and, asc, eq, inArray, isNull, or } from 'drizzle-orm';
 import { db } from '$lib/server/db';
 import { memberships, scenarios, siteGrants, sites } from '$lib/server/db/schema';
-import { type ChoiceSite, type PickerChoices, boundChoices } from '$lib/components/compare/choice-filter';
+import { type PickerChoices, boundChoices, bySite } from '$lib/components/compare/choice-filter';
 
 export type { PickerChoices };
 
@@ -41,23 +41,11 @@ export async function readableScenarios(userId: string): Promise<ScenarioChoice[
 				or(inArray(sites.workspaceId, workspaceIds), inArray(sites.id, grantedSites))
 			)
 		)
-		.orderBy(asc(sites.name), asc(scenarios.position), asc(scenarios.name));
+		.orderBy(asc(sites.name), asc(sites.id), asc(scenarios.position), asc(scenarios.name));
 }
 
 /** At most this many scenarios go to the compare page: the page stays small for the largest adviser. */
 export const CHOICES_SENT = 1000;
-
-/** Groups rows already ordered by site, keeping that order. */
-export function bySite(rows: ScenarioChoice[]): ChoiceSite[] {
-	const sites: ChoiceSite[] = [];
-	for (const row of rows) {
-		const scenario = { id: row.id, name: row.name, isBaseline: row.isBaseline };
-		const last = sites.at(-1);
-		if (last?.id === row.siteId) last.scenarios.push(scenario);
-		else sites.push({ id: row.siteId, name: row.siteName, scenarios: [scenario] });
-	}
-	return sites;
-}
 
 /**
  * The compare page's choices among the scenarios the user may read (`readableScenarios` is the access
