@@ -1,4 +1,4 @@
-import type { Page } from '@playwright/test';
+import type { Browser, Page } from '@playwright/test';
 import type { ImpactValue } from 'axe-core';
 import { createRequire } from 'node:module';
 
@@ -13,6 +13,16 @@ const AXE_SCRIPT = createRequire(import.meta.url).resolve('axe-core/axe.min.js')
  * opened with these options for the injected engine to run (the policy is tested in security-headers).
  */
 export const AXE_CONTEXT = { bypassCSP: true } as const;
+
+/** A page in a context of its own on a 390 × 844 phone, opened so that axe can run in it; close the context after. */
+export async function phoneWithAxe(browser: Browser, baseURL: string | undefined) {
+	const context = await browser.newContext({
+		baseURL,
+		viewport: { width: 390, height: 844 },
+		...AXE_CONTEXT
+	});
+	return { context, page: await context.newPage() };
+}
 
 /** The impacts that fail the gate: a person cannot use the page, or only with real difficulty. */
 export const BLOCKING: ImpactValue[] = ['serious', 'critical'];

@@ -1,5 +1,5 @@
 import { expect, test, type Page } from '@playwright/test';
-import { AXE_CONTEXT, blockingFindings } from './axe';
+import { blockingFindings, phoneWithAxe } from './axe';
 import { gotoReady } from './helpers';
 import { baselineOf, callerOn, createSite } from './site-setup';
 
@@ -75,12 +75,7 @@ test.describe('the site form’s tariff search', () => {
 		browser,
 		baseURL
 	}) => {
-		const context = await browser.newContext({
-			baseURL,
-			viewport: { width: 390, height: 844 },
-			...AXE_CONTEXT
-		});
-		const page = await context.newPage();
+		const { context, page } = await phoneWithAxe(browser, baseURL);
 		const caller = await callerOn(page, 'owner@example.org', baseURL!);
 		const siteId = await createSite(caller, 'Tariff search phone');
 		await gotoReady(page, `/sites/${siteId}/edit`);

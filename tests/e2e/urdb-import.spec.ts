@@ -1,6 +1,6 @@
 import { expect, test } from '@playwright/test';
 import { readFileSync } from 'node:fs';
-import { AXE_CONTEXT, blockingFindings } from './axe';
+import { blockingFindings, phoneWithAxe } from './axe';
 import { createWorkspace, gotoReady, signInWithPassword } from './helpers';
 
 // One rate of the open rate database, imported through the tariff library's page in a real browser. The
@@ -96,12 +96,7 @@ test.describe('import from the open rate database', () => {
 		browser,
 		baseURL
 	}) => {
-		const context = await browser.newContext({
-			baseURL,
-			viewport: { width: 390, height: 844 },
-			...AXE_CONTEXT
-		});
-		const page = await context.newPage();
+		const { context, page } = await phoneWithAxe(browser, baseURL);
 		await signInWithPassword(page, 'editor@example.org');
 		for (const [fill, heading] of [
 			[async () => page.getByLabel('The rate’s JSON').fill(readFileSync(RS1, 'utf8')), 'Tiers'],

@@ -1,17 +1,18 @@
 import type { RequestEvent } from '@sveltejs/kit';
 import { DateTime } from 'luxon';
+import { scenarioIds, stillPicking } from '$lib/compare/picking';
 import { MAX_COMPARED, parseComparisonQuery } from '$lib/compare/query';
 import type { ComparisonReport } from '$lib/compare/types';
 import { listScenarios } from '$lib/server/sites/scenario.service';
 import type { SiteRow } from '$lib/server/sites/site.service';
 import { buildComparison } from './build';
-import type { ScenarioChoice } from './choices';
+import type { PickerChoices } from './choices';
 
 type Problem = { message: string; issues: { path: string; message: string }[] };
 
 /** What a site's cost justification shows: the site's scenarios to pick from and their comparison. */
 export interface Justification {
-	choices: ScenarioChoice[];
+	choices: PickerChoices;
 	/** The picked scenarios (default: the baseline, then the others), for the picker. */
 	picked: { scenarios: string[]; baseline: string; start: string };
 	report: ComparisonReport | null;
@@ -25,13 +26,8 @@ export interface Justification {
  */
 export async function siteJustification(event: RequestEvent, site: SiteRow): Promise<Justification> {
 	const live = (await listScenarios(site.id)).filter((s) => !s.deletedAt && !s.archivedAt);
-	const choices = live.map((s) => ({
-		id: s.id,
-		name: s.name,
-		isBaseline: s.isBaseline,
-		siteId: site.id,
-		siteName: site.name
-	}));
+	const scenarios = live.map((s) => ({ id: s.id, name: s.name, isBaseline: s.isBaseline }));
+	const choices = { sites: [{ id: site.id, name: site.name, scenarios }], left: 0 };
 	const ordered = [...live].sort((a, b) => Number(b.isBaseline) - Number(a.isBaseline));
 	const params = new URLSearchParams(event.url.searchParams);
 	if (!params.has('scenarios'))
@@ -58,6 +54,14 @@ export async function siteJustification(event: RequestEvent, site: SiteRow): Pro
 				message: 'This site has one scenario: add another (what you propose) to justify a change.',
 				issues: []
 			}
+		};
+	// Fewer than two while the person is still choosing (Find, Remove without scripts): no error yet.
+	if (stillPicking(params))
+		return {
+			choices,
+			picked: { ...fallback, scenarios: scenarioIds(params), baseline: params.get('baseline') ?? '' },
+			report: null,
+			problem: null
 		};
 	if (!parsed.ok)
 		return {

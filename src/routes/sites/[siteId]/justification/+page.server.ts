@@ -1,3 +1,5 @@
+import { redirect } from '@sveltejs/kit';
+import { afterRemoval } from '$lib/compare/picking';
 import { authorOf } from '$lib/compare/printed';
 import { comparisonSearch } from '$lib/compare/query';
 import { siteJustification } from '$lib/server/compare/justification';
@@ -10,6 +12,9 @@ import type { PageServerLoad } from './$types';
  */
 export const load = (async (event) => {
 	const { site, user } = await requireSiteAccess(event, event.params.siteId, 'viewer');
+	// A Remove button pressed without scripts: the same choices less that scenario.
+	const removed = afterRemoval(event.url);
+	if (removed) redirect(303, removed);
 	const justification = await siteJustification(event, site);
 	return {
 		...justification,
