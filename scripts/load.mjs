@@ -4,7 +4,7 @@
 // scripts/bench/workspace-200.ts); one of its site pages; the comparison of its three scenarios; and the
 // comparison workbook of the demo pair. Everything runs on a throwaway PostgreSQL with the demo data;
 // the app runs on both cores (scripts/cluster.mjs). Prints requests per second and p50/p95/p99 latency
-// per route. All data is invented.
+// per route, each after LOAD_WARMUP (3) unmeasured seconds. All data is invented.
 import autocannon from 'autocannon';
 import { chmodSync, mkdtempSync, readFileSync } from 'node:fs';
 import { availableParallelism, tmpdir } from 'node:os';
@@ -15,6 +15,7 @@ import { migrateSeedAndStartStandIns, runThenCleanUp, standInEnv } from './local
 
 const SECONDS = Number(process.env.LOAD_SECONDS ?? 30);
 const CONNECTIONS = Number(process.env.LOAD_CONNECTIONS ?? 50);
+const WARM_UP = Number(process.env.LOAD_WARMUP ?? 3);
 const work = mkdtempSync(join(tmpdir(), 'runrate-load-'));
 // PostgreSQL's tools run as Debian's postgres user when this runs as root: they must reach the folder
 // (when they cannot, pg.sh keeps the cluster in ~postgres instead; `pg.sh drop` removes it either way).
@@ -28,6 +29,9 @@ const quantile = (sorted, q) =>
 	Math.round((sorted[Math.min(sorted.length - 1, Math.floor(q * sorted.length))] ?? 0) * 10) / 10;
 
 async function hammer(name, options) {
+	// Unmeasured first: a route's figures are then its steady state, not the JIT warming up or the first
+	// views pricing what the stored results do not hold yet (both show in the first seconds).
+	if (WARM_UP > 0) await autocannon({ connections: CONNECTIONS, duration: WARM_UP, ...options });
 	const latencies = [];
 	const instance = autocannon({ connections: CONNECTIONS, duration: SECONDS, ...options });
 	instance.on('response', (_client, _status, _bytes, ms) => latencies.push(ms));
